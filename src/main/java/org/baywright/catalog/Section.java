@@ -1,0 +1,141 @@
+package org.baywright.catalog;
+
+import java.util.EnumMap;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Objects;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * One rolled section of a catalog: its designation as the standard prints it (W18X50), its nominal
+ * weight per length, its dimensions, and the properties design uses. Design properties are the
+ * catalog's tabulated values where it has them, otherwise the values computed from the dimensions.
+ * Canonical SI throughout.
+ */
+public final class Section {
+    private static final Pattern DESIGNATION = Pattern.compile("^([A-Z]+)(\\d+(?:\\.\\d+)?)X(\\d+(?:\\.\\d+)?)$");
+
+    private final String designation;
+    private final String shape;
+    private final String nominalDepth;
+    private final double weight;
+    private final IShapeDimensions dims;
+    private final SectionProperties computed;
+    private final SectionProperties design;
+    private final Map<Property, Double> tabulated;
+
+    /**
+     * @param designation e.g. {@code W18X50}
+     * @param weight nominal weight per length, N/m
+     * @param dims the standard dimensions
+     * @param tabulated the tabulated properties the catalog gives (any subset), SI
+     */
+    public Section(String designation, double weight, IShapeDimensions dims, Map<Property, Double> tabulated) {
+        this.designation = normalize(Objects.requireNonNull(designation, "designation"));
+        Matcher m = DESIGNATION.matcher(this.designation);
+        if (!m.matches()) {
+            throw new IllegalArgumentException("designation \"" + designation
+                    + "\" is not of the form W18X50 (shape letters, nominal depth, X, nominal weight)");
+        }
+        this.shape = m.group(1);
+        this.nominalDepth = m.group(2);
+        if (!(weight > 0) || !Double.isFinite(weight)) {
+            throw new IllegalArgumentException(designation + ": weight must be positive, got " + weight);
+        }
+        this.weight = weight;
+        this.dims = Objects.requireNonNull(dims, "dims");
+        this.computed = IShapeGeometry.compute(dims);
+        EnumMap<Property, Double> tab = new EnumMap<>(Property.class);
+        tab.putAll(tabulated);
+        this.tabulated = java.util.Collections.unmodifiableMap(tab);
+        double[] v = new double[Property.values().length];
+        for (Property p : Property.values()) {
+            Double t = tab.get(p);
+            if (t != null && (!(t > 0) || !Double.isFinite(t))) {
+                throw new IllegalArgumentException(designation + ": " + p.column() + " must be positive, got " + t);
+            }
+            v[p.ordinal()] = t != null ? t : p.of(computed);
+        }
+        this.design = Property.build(v);
+    }
+
+    /** Upper-case, no spaces, "x" → "X": {@code w18x50} and {@code W18 X 50} both give {@code W18X50}. */
+    public static String normalize(String designation) {
+        return designation.trim().replace(" ", "").toUpperCase(Locale.ROOT);
+    }
+
+    public String designation() {
+        return designation;
+    }
+
+    /** Shape letters: {@code W}. */
+    public String shape() {
+        return shape;
+    }
+
+    /** Series by nominal depth, as used for filters: {@code W18}. */
+    public String series() {
+        return shape + nominalDepth;
+    }
+
+    /** Nominal weight per length, N/m (the self-weight design adds to the dead load). */
+    public double weight() {
+        return weight;
+    }
+
+    public IShapeDimensions dims() {
+        return dims;
+    }
+
+    /** Actual depth d, m. */
+    public double depth() {
+        return dims.d();
+    }
+
+    /** The properties design uses: tabulated where given, computed otherwise. */
+    public SectionProperties props() {
+        return design;
+    }
+
+    /** The properties computed from the dimensions (for verification and custom sections). */
+    public SectionProperties computed() {
+        return computed;
+    }
+
+    /** The tabulated values the catalog gives, SI. */
+    public Map<Property, Double> tabulated() {
+        return tabulated;
+    }
+
+    /** Web slenderness h/tw with h = d − 2kdes. */
+    public double hOverTw() {
+        return dims.h() / dims.tw();
+    }
+
+    /** Flange slenderness bf/2tf. */
+    public double bfOver2tf() {
+        return dims.bf() / (2 * dims.tf());
+    }
+
+    /** ho = d − tf. */
+    public double ho() {
+        return dims.ho();
+    }
+
+    @Override
+    public String toString() {
+        return designation;
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Section s && s.designation.equals(designation) && s.weight == weight
+                && s.dims.equals(dims) && s.tabulated.equals(tabulated);
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(designation, weight, dims);
+    }
+}

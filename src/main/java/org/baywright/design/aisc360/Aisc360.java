@@ -1,0 +1,28 @@
+package org.baywright.design.aisc360;
+
+/**
+ * AISC 360-16, Specification for Structural Steel Buildings (ANSI/AISC 360-16). The equations used
+ * here are unchanged in the 2022 edition (AISC 360-22) for the clauses implemented: B4.1, E3, F1,
+ * F2, F3, G2.1.
+ *
+ * <p>Every function takes canonical SI values (Pa, m, m², m³, m⁴, m⁶, N, N·m) and an optional
+ * {@link org.baywright.calc.Calc} recorder; with a recorder it writes the line the calculation sheet
+ * prints, from the same expression it evaluates.
+ */
+public final class Aisc360 {
+    private Aisc360() {
+    }
+
+    /** Edition cited on every line. */
+    public static final String EDITION = "AISC 360-16";
+
+    /** Reference text for an equation, e.g. {@code ref("F2-1")} → "AISC 360-16 Eq. F2-1". */
+    public static String eq(String number) {
+        return EDITION + " Eq. " + number;
+    }
+
+    /** Reference text for a clause or table, e.g. {@code clause("Table B4.1b")}. */
+    public static String clause(String clause) {
+        return EDITION + " " + clause;
+    }
+}

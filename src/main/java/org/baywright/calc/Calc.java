@@ -18,6 +18,15 @@ public final class Calc {
         return value;
     }
 
+    /**
+     * Records a value obtained by other means than a printed formula (e.g. the statics of a span),
+     * with optional further values printed after it ({@code x = 17.5 ft}).
+     */
+    public double value(String symbol, double value, Quantity quantity, String text, String reference, Arg... extras) {
+        lines.add(new CalcLine(CalcLine.Kind.VALUE, symbol, "", List.of(extras), value, quantity, reference, text));
+        return value;
+    }
+
     /** Records which branch of a clause applies, with its evidence. */
     public void branch(String text, String reference) {
         lines.add(new CalcLine(CalcLine.Kind.BRANCH, "", "", List.of(), Double.NaN, Quantity.NUMBER, reference, text));

@@ -39,6 +39,17 @@ public final class CalcFormat {
         return switch (line.kind()) {
             case HEADING -> line.text();
             case NOTE, BRANCH -> line.text() + ref;
+            case VALUE -> {
+                StringBuilder b = new StringBuilder(line.symbol()).append(" = ")
+                        .append(value(line.value(), line.quantity(), system));
+                for (Arg a : line.args()) {
+                    b.append(", ").append(a.symbol()).append(" = ").append(value(a.value(), a.quantity(), system));
+                }
+                if (line.text() != null && !line.text().isEmpty()) {
+                    b.append(" — ").append(line.text());
+                }
+                yield b.append(ref).toString();
+            }
             case EQUATION -> {
                 String result = value(line.value(), line.quantity(), system);
                 String formula = Formula.substitute(line.formula(), s -> null);

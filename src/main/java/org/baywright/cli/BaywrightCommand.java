@@ -16,7 +16,7 @@ import picocli.CommandLine.Command;
             Caution.TEXT,
             ""
         },
-        subcommands = {CommandLine.HelpCommand.class})
+        subcommands = {BeamCommand.class, CatalogCommand.class, CommandLine.HelpCommand.class})
 public final class BaywrightCommand implements Runnable {
 
     /** Exit code: everything sized and adequate. */

@@ -1,6 +1,5 @@
 package org.baywright.io;
 
-import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
@@ -13,8 +12,7 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 public final class JsonText {
     private static final ObjectMapper MAPPER = new ObjectMapper()
             .enable(SerializationFeature.INDENT_OUTPUT)
-            .disable(SerializationFeature.FAIL_ON_EMPTY_BEANS)
-            .configure(JsonGenerator.Feature.WRITE_NAN_AS_STRINGS, false);
+            .disable(SerializationFeature.FAIL_ON_EMPTY_BEANS);
 
     private JsonText() {
     }

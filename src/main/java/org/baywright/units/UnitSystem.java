@@ -9,7 +9,7 @@ import java.util.Locale;
 public enum UnitSystem {
     /** US customary: ft for spans, in for section sizes and deflections, kip, klf, psf, ksi, kip-ft. */
     US(Units.FT_, Units.IN, Units.KIPS, Units.KLF, Units.PSF, Units.KSI, Units.KIP_FT,
-            Units.IN2, Units.IN3, Units.IN4, Units.IN6, Units.PLF, Units.FT2),
+            Units.IN2, Units.IN3, Units.IN4, Units.IN6, Units.LB_PER_FT, Units.FT2),
     /** SI: m for spans, mm for section sizes and deflections, kN, kN/m, kPa, MPa, kN·m. */
     SI(Units.M, Units.MM, Units.KN, Units.KN_PER_M, Units.KPA, Units.MPA, Units.KN_M,
             Units.MM2, Units.MM3, Units.MM4, Units.MM6, Units.KG_PER_M, Units.M2);

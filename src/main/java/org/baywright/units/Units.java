@@ -40,6 +40,9 @@ public final class Units {
     public static final Unit KLF = new Unit("klf", List.of("kip/ft", "k/ft", "kips/ft"), Dimension.LINE_LOAD, KIP / FT);
     public static final Unit PLF = new Unit("plf", List.of("lb/ft", "lbf/ft", "#/ft"), Dimension.LINE_LOAD, NEWTONS_PER_POUND / FT);
 
+    /** Steel weight per length as the US trade writes it (a force per length, equal to plf). */
+    public static final Unit LB_PER_FT = new Unit("lb/ft", List.of(), Dimension.LINE_LOAD, NEWTONS_PER_POUND / FT);
+
     // area load
     public static final Unit PSF = new Unit("psf", List.of("lb/ft2", "lb/ft²", "#/ft2"), Dimension.AREA_LOAD, NEWTONS_PER_POUND / (FT * FT));
     public static final Unit KSF = new Unit("ksf", List.of("kip/ft2"), Dimension.AREA_LOAD, KIP / (FT * FT));

@@ -63,6 +63,7 @@ public final class SimpleSpan {
     private Extreme maxMomentCache;
     private Extreme maxShearCache;
     private Extreme maxEiDeflectionCache;
+    private Boolean downwardCache;
 
     private SimpleSpan(double length, List<SpanLoad> loads, double leftReaction, double rightReaction,
                        double[] xs, double[] vc, double[] mc, double[] yc) {
@@ -423,6 +424,161 @@ public final class SimpleSpan {
             }
         }
         return new Extreme(best, where);
+    }
+
+    /**
+     * The largest moment magnitude with a uniform load {@code w} (N/m) added over the whole span,
+     * as {@code out[0]} (signed, N·m) and {@code out[1]} (x, m). Exact, like {@link #maxMoment()}, and
+     * without building a new span or allocating: the lightest-section search calls it for every
+     * candidate's self-weight.
+     *
+     * @param out an array of length ≥ 2 to receive value and position
+     */
+    public void maxMomentWithUniform(double w, double[] out) {
+        double best = 0.0;
+        double where = 0.0;
+        double l = length;
+        for (int k = 0; k < xs.length - 1; k++) {
+            double x0 = xs[k];
+            double h = xs[k + 1] - x0;
+            double v0 = vc[3 * k] + w * (l / 2.0 - x0);
+            double v1 = vc[3 * k + 1] - w;
+            double v2 = vc[3 * k + 2];
+            double m0 = mc[4 * k] + w * x0 * (l - x0) / 2.0;
+            double m1 = mc[4 * k + 1] + w * (l - 2.0 * x0) / 2.0;
+            double m2 = mc[4 * k + 2] - w / 2.0;
+            double m3 = mc[4 * k + 3];
+            if (Math.abs(m0) > Math.abs(best)) {
+                best = m0;
+                where = x0;
+            }
+            // zeros of the shear v0 + v1·t + v2·t² inside the piece
+            if (v2 == 0.0) {
+                if (v1 != 0.0) {
+                    double t = -v0 / v1;
+                    if (t > 0.0 && t < h) {
+                        double value = m0 + t * (m1 + t * (m2 + t * m3));
+                        if (Math.abs(value) > Math.abs(best)) {
+                            best = value;
+                            where = x0 + t;
+                        }
+                    }
+                }
+            } else {
+                double disc = v1 * v1 - 4.0 * v2 * v0;
+                if (disc >= 0.0) {
+                    double sq = Math.sqrt(disc);
+                    double q = -0.5 * (v1 + Math.copySign(sq, v1));
+                    double ta = q / v2;
+                    double tb = q != 0.0 ? v0 / q : ta;
+                    for (int r = 0; r < 2; r++) {
+                        double t = r == 0 ? ta : tb;
+                        if (t > 0.0 && t < h) {
+                            double value = m0 + t * (m1 + t * (m2 + t * m3));
+                            if (Math.abs(value) > Math.abs(best)) {
+                                best = value;
+                                where = x0 + t;
+                            }
+                        }
+                    }
+                }
+            }
+            double end = m0 + h * (m1 + h * (m2 + h * m3));
+            if (Math.abs(end) > Math.abs(best)) {
+                best = end;
+                where = xs[k + 1];
+            }
+        }
+        out[0] = best;
+        out[1] = where;
+    }
+
+    /**
+     * EI times the largest deflection with a uniform load {@code w} (N/m) added over the whole span,
+     * as {@code out[0]} (N·m³, downward positive) and {@code out[1]} (x, m).
+     *
+     * <p>When every load of this span acts downward and {@code w ≥ 0}, the deflected shape is concave
+     * with a single maximum where the slope vanishes; that zero is found by a Newton iteration
+     * safeguarded by bisection, to rounding, without allocating. Otherwise the general method of
+     * {@link #maxDeflection(double)} is applied to the span with the uniform load added.
+     */
+    public void maxEiDeflectionWithUniform(double w, double[] out) {
+        if (w < 0.0 || !allDownward()) {
+            Extreme e = plus(of(length, List.of(DistributedLoad.full(length, w)))).maxDeflection(1.0);
+            out[0] = e.value();
+            out[1] = e.position();
+            return;
+        }
+        double lo = 0.0;
+        double hi = length;
+        if (eiSlope(lo, w) <= 0.0) {
+            out[0] = eiDeflection(lo, w);
+            out[1] = lo;
+            return;
+        }
+        if (eiSlope(hi, w) >= 0.0) {
+            out[0] = eiDeflection(hi, w);
+            out[1] = hi;
+            return;
+        }
+        double x = 0.5 * (lo + hi);
+        for (int i = 0; i < 100; i++) {
+            double s = eiSlope(x, w);
+            if (s == 0.0) {
+                break;
+            }
+            if (s > 0.0) {
+                lo = x;
+            } else {
+                hi = x;
+            }
+            double curvature = -(moment(x) + w * x * (length - x) / 2.0); // EI·y'' = −M
+            double next = curvature < 0.0 ? x - s / curvature : Double.NaN;
+            if (!(next > lo && next < hi)) {
+                next = 0.5 * (lo + hi);
+            }
+            if (Math.abs(next - x) <= 1e-15 * length || hi - lo <= 1e-15 * length) {
+                x = next;
+                break;
+            }
+            x = next;
+        }
+        out[0] = eiDeflection(x, w);
+        out[1] = x;
+    }
+
+    private boolean allDownward() {
+        Boolean d = downwardCache;
+        if (d == null) {
+            boolean ok = true;
+            for (SpanLoad l : loads) {
+                if (l instanceof PointLoad p && p.force() < 0.0) {
+                    ok = false;
+                } else if (l instanceof DistributedLoad dl && (dl.wStart() < 0.0 || dl.wEnd() < 0.0)) {
+                    ok = false;
+                }
+            }
+            d = ok;
+            downwardCache = d;
+        }
+        return d;
+    }
+
+    /** EI × slope at x with a uniform load w added: d/dx of EI·y. */
+    private double eiSlope(double x, double w) {
+        int k = piece(x);
+        double t = clamp(x) - xs[k];
+        int o = 6 * k;
+        double s = yc[o + 1] + t * (2.0 * yc[o + 2] + t * (3.0 * yc[o + 3] + t * (4.0 * yc[o + 4] + t * 5.0 * yc[o + 5])));
+        double l = length;
+        return s + w * (l * l * l - 6.0 * l * x * x + 4.0 * x * x * x) / 24.0;
+    }
+
+    /** EI × deflection at x with a uniform load w added. */
+    private double eiDeflection(double x, double w) {
+        int k = piece(x);
+        double l = length;
+        return Polynomials.evalAt(yc, 6 * k, 6, clamp(x) - xs[k]) + w * x * (l * l * l - 2.0 * l * x * x + x * x * x) / 24.0;
     }
 
     /**

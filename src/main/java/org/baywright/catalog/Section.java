@@ -24,6 +24,7 @@ public final class Section {
     private final SectionProperties computed;
     private final SectionProperties design;
     private final Map<Property, Double> tabulated;
+    private final int hash;
 
     /**
      * @param designation e.g. {@code W18X50}
@@ -58,6 +59,7 @@ public final class Section {
             v[p.ordinal()] = t != null ? t : p.of(computed);
         }
         this.design = Property.build(v);
+        this.hash = Objects.hash(this.designation, weight, dims);
     }
 
     /** Upper-case, no spaces, "x" → "X": {@code w18x50} and {@code W18 X 50} both give {@code W18X50}. */
@@ -130,12 +132,12 @@ public final class Section {
 
     @Override
     public boolean equals(Object o) {
-        return o instanceof Section s && s.designation.equals(designation) && s.weight == weight
+        return o == this || o instanceof Section s && s.hash == hash && s.designation.equals(designation) && s.weight == weight
                 && s.dims.equals(dims) && s.tabulated.equals(tabulated);
     }
 
     @Override
     public int hashCode() {
-        return Objects.hash(designation, weight, dims);
+        return hash;
     }
 }

@@ -36,8 +36,8 @@ import org.baywright.load.LoadCombination;
  * the designation in alphabetical order ({@link Catalog#SEARCH_ORDER}).
  */
 public final class BeamDesigner {
-    private static final Map<Steel, Map<Section, IShapeFlexure.Constants>> FLEXURE = new ConcurrentHashMap<>();
-    private static final Map<Steel, Map<Section, IShapeShear.Strength>> SHEAR = new ConcurrentHashMap<>();
+    private static final Map<Steel, Map<Section, IShapeFlexure.Constants>> FLEXURE_CACHE = new ConcurrentHashMap<>();
+    private static final Map<Steel, Map<Section, IShapeShear.Strength>> SHEAR_CACHE = new ConcurrentHashMap<>();
 
     private final BeamLoads loads;
     private final BeamCriteria criteria;
@@ -50,8 +50,13 @@ public final class BeamDesigner {
     private final SimpleSpan totalSpan;
     private final double liveDeflectionEi;
     private final double liveDeflectionAt;
+    private final double totalDeflectionEi;
     private final String liveName;
     private final String totalName;
+    private final String totalNameSw;
+    private final String liveNote;
+    private final String totalNote;
+    private final String[] segmentNotes;
 
     public BeamDesigner(BeamLoads loads, BeamCriteria criteria) {
         this.loads = loads;
@@ -83,6 +88,7 @@ public final class BeamDesigner {
         this.totalSpan = SimpleSpan.combine(new double[] {1, 1, 1, 1}, caseSpans);
         org.baywright.analysis.Extreme ld = liveSpan.maxDeflection(1.0);
         this.liveDeflectionEi = ld.value();
+        this.totalDeflectionEi = totalSpan.maxDeflection(1.0).value();
         this.liveDeflectionAt = ld.position();
         StringBuilder ln = new StringBuilder();
         for (LoadCase c : new LoadCase[] {LoadCase.L, LoadCase.LR, LoadCase.S}) {
@@ -92,6 +98,17 @@ public final class BeamDesigner {
         }
         this.liveName = ln.length() == 0 ? "L" : ln.toString();
         this.totalName = "D + " + liveName;
+        this.totalNameSw = totalName + " + self-weight";
+        this.liveNote = limitNote(criteria.deflection().live());
+        this.totalNote = limitNote(criteria.deflection().total());
+        this.segmentNotes = new String[bounds.length - 1];
+        for (int i = 0; i < segmentNotes.length; i++) {
+            segmentNotes[i] = "segment " + (i + 1) + " of " + segmentNotes.length;
+        }
+    }
+
+    private static String limitNote(double n) {
+        return "limit L/" + (n == Math.rint(n) ? Long.toString((long) n) : CalcFormat.sig(n));
     }
 
     public BeamLoads loads() {
@@ -121,8 +138,8 @@ public final class BeamDesigner {
     /** Searches {@code catalog} for the lightest section that passes every check. */
     public BeamDesign search(Catalog catalog, SearchFilter filter) {
         List<Rejection> rejected = new ArrayList<>();
+        Steel steel = criteria.steel();
         Section best = null;
-        List<Check> bestChecks = null;
         double bestRatio = Double.POSITIVE_INFINITY;
         int candidates = 0;
         for (Section s : catalog.sections()) {
@@ -130,22 +147,22 @@ public final class BeamDesigner {
                 continue;
             }
             candidates++;
-            List<Check> checks = check(s, null);
-            Check g = governing(checks);
-            if (g.passes()) {
-                return new BeamDesign(MemberStatus.SIZED, s, checks, rejected, candidates);
+            IShapeFlexure.Constants k = flexureConstants(s, steel);
+            IShapeShear.Strength vs = shearStrength(s, steel);
+            int g = evaluate(s, k, vs, false);
+            if (ratio[g] <= 1.0 + 1e-9) {
+                return new BeamDesign(MemberStatus.SIZED, s, check(s, null), rejected, candidates);
             }
-            rejected.add(new Rejection(s, g));
-            if (g.ratio() < bestRatio) {
-                bestRatio = g.ratio();
+            rejected.add(new Rejection(s, toCheck(g, k, vs, criteria.selfWeight() ? s.weight() : 0)));
+            if (ratio[g] < bestRatio) {
+                bestRatio = ratio[g];
                 best = s;
-                bestChecks = checks;
             }
         }
         if (best == null) {
             return new BeamDesign(MemberStatus.OVERSTRESSED, null, List.of(), rejected, 0);
         }
-        return new BeamDesign(MemberStatus.OVERSTRESSED, best, bestChecks, rejected, candidates);
+        return new BeamDesign(MemberStatus.OVERSTRESSED, best, check(best, null), rejected, candidates);
     }
 
     /** Checks a section the user chose (fixed size). */
@@ -160,196 +177,241 @@ public final class BeamDesigner {
         return comboSpans[c].moment(x) + comboDeadFactor[c] * w * x * (span - x) / 2;
     }
 
-    private double shear(int c, double w, double x) {
-        return comboSpans[c].shear(x) + comboDeadFactor[c] * w * (span / 2 - x);
-    }
-
-    /** Maximum moment on [a, b] of a concave moment diagram: at the zero-shear point or an end. */
-    private double[] maxMoment(int c, double w, double a, double b) {
-        if (shear(c, w, a) <= 0) {
-            return new double[] {moment(c, w, a), a};
+    /**
+     * Maximum moment on [a, b] of a concave moment diagram (all loads downward): at the single point
+     * of zero shear when it lies inside, otherwise at the end nearer to it. Writes value and position.
+     */
+    private void maxMoment(int c, double w, double a, double b, double[] out) {
+        double k = comboDeadFactor[c] * w;
+        if (a == 0 && b == span) {
+            comboSpans[c].maxMomentWithUniform(k, out);
+            return;
         }
-        // shear just left of b: evaluate slightly inside
-        double bl = Math.nextDown(b);
-        if (shear(c, w, bl) >= 0) {
-            return new double[] {moment(c, w, b), b};
+        comboSpans[c].maxMomentWithUniform(k, out);
+        double x = out[1];
+        if (x < a) {
+            out[0] = moment(c, w, a);
+            out[1] = a;
+        } else if (x > b) {
+            out[0] = moment(c, w, b);
+            out[1] = b;
         }
-        double lo = a;
-        double hi = b;
-        for (int i = 0; i < 200 && Math.nextUp(lo) < hi; i++) {
-            double mid = 0.5 * (lo + hi);
-            if (shear(c, w, mid) > 0) {
-                lo = mid;
-            } else {
-                hi = mid;
-            }
-        }
-        double mLo = moment(c, w, lo);
-        double mHi = moment(c, w, hi);
-        return mLo >= mHi ? new double[] {mLo, lo} : new double[] {mHi, hi};
-    }
-
-    /** Maximum of a concave (unimodal) deflection curve δ(x)·EI including a self-weight w. */
-    private double[] maxTotalDeflectionEi(double w) {
-        double lo = 0;
-        double hi = span;
-        final double g = (Math.sqrt(5) - 1) / 2;
-        double x1 = hi - g * (hi - lo);
-        double x2 = lo + g * (hi - lo);
-        double f1 = totalDeflEi(w, x1);
-        double f2 = totalDeflEi(w, x2);
-        for (int i = 0; i < 80; i++) {
-            if (f1 < f2) {
-                lo = x1;
-                x1 = x2;
-                f1 = f2;
-                x2 = lo + g * (hi - lo);
-                f2 = totalDeflEi(w, x2);
-            } else {
-                hi = x2;
-                x2 = x1;
-                f2 = f1;
-                x1 = hi - g * (hi - lo);
-                f1 = totalDeflEi(w, x1);
-            }
-        }
-        return f1 >= f2 ? new double[] {f1, x1} : new double[] {f2, x2};
-    }
-
-    private double totalDeflEi(double w, double x) {
-        double udl = w * x * (span * span * span - 2 * span * x * x + x * x * x) / 24;
-        return totalSpan.deflection(x, 1.0) + udl;
     }
 
     private static IShapeFlexure.Constants flexureConstants(Section s, Steel steel) {
-        return FLEXURE.computeIfAbsent(steel, k -> new ConcurrentHashMap<>())
+        return FLEXURE_CACHE.computeIfAbsent(steel, k -> new ConcurrentHashMap<>())
                 .computeIfAbsent(s, k -> IShapeFlexure.constants(k, steel.fy(), steel.e(), null));
     }
 
     private static IShapeShear.Strength shearStrength(Section s, Steel steel) {
-        return SHEAR.computeIfAbsent(steel, k -> new ConcurrentHashMap<>())
+        return SHEAR_CACHE.computeIfAbsent(steel, k -> new ConcurrentHashMap<>())
                 .computeIfAbsent(s, k -> IShapeShear.strength(k, steel.fy(), steel.e(), null));
     }
 
+    // Scratch results of the last evaluation (a designer serves one thread).
+    private static final int FLEX = 0;
+    private static final int SHEAR = 1;
+    private static final int LIVE = 2;
+    private static final int TOTAL = 3;
+    private final double[] demand = new double[4];
+    private final double[] capacity = new double[4];
+    private final double[] ratio = new double[4];
+    private final double[] position = new double[4];
+    private final int[] combo = new int[4];
+    private final boolean[] active = new boolean[4];
+    private double flexLb;
+    private double flexCb;
+    private int flexSeg;
+    private final double[] tmp = new double[2];
+
     /**
-     * Every check of {@code s}. With a recorder, writes the calculation sheet of the section from the
-     * same equations.
+     * Evaluates every check of {@code s} into the scratch arrays, with plain arithmetic (the hot path
+     * of the search). Returns the index of the governing check.
      */
-    public List<Check> check(Section s, Calc calc) {
+    private int evaluate(Section s, IShapeFlexure.Constants k, IShapeShear.Strength vs, boolean exact) {
         Steel steel = criteria.steel();
         DesignMethod method = criteria.method();
-        boolean lrfd = method == DesignMethod.LRFD;
         double w = criteria.selfWeight() ? s.weight() : 0;
-        List<Check> out = new ArrayList<>(4);
+        boolean continuous = criteria.bracing().isContinuous();
 
-        if (calc != null) {
-            calc.heading("Section " + s.designation());
-            calc.value("Fy", steel.fy(), Quantity.STRESS, steel.name(), "", Arg.of("E", steel.e(), Quantity.STRESS));
-            calc.value("wsw", w, Quantity.LINE_LOAD, "self-weight: nominal weight of " + s.designation(), "");
-            if (!criteria.selfWeight()) {
-                calc.note("self-weight not added: the dead load is taken to include it", "");
-            }
-        }
-
-        // Flexure
-        IShapeFlexure.Constants k = calc == null ? flexureConstants(s, steel)
-                : IShapeFlexure.constants(s, steel.fy(), steel.e(), calc);
-        double phiB = ResistanceFactors.PHI_B;
-        double omegaB = ResistanceFactors.OMEGA_B;
-        Check flex = null;
+        // Flexure, every combination and unbraced segment
+        ratio[FLEX] = -1;
+        active[FLEX] = true;
+        double mnBraced = continuous ? IShapeFlexure.mn(k, 0, 1, null) : Double.NaN;
         for (int c = 0; c < combos.size(); c++) {
             for (int seg = 0; seg + 1 < bounds.length; seg++) {
                 double a = bounds[seg];
                 double b = bounds[seg + 1];
-                double[] mm = maxMoment(c, w, a, b);
-                double lb = criteria.bracing().isContinuous() ? 0 : b - a;
+                maxMoment(c, w, a, b, tmp);
+                double lb = continuous ? 0 : b - a;
                 double cb = 1.0;
-                if (lb > 0) {
+                double mn;
+                if (continuous) {
+                    mn = mnBraced;
+                } else {
                     double q = (b - a) / 4;
-                    cb = BendingCoefficient.cb(mm[0], moment(c, w, a + q), moment(c, w, a + 2 * q),
+                    cb = BendingCoefficient.cb(tmp[0], moment(c, w, a + q), moment(c, w, a + 2 * q),
                             moment(c, w, a + 3 * q), null);
+                    mn = IShapeFlexure.mn(k, lb, cb, null);
                 }
-                double mn = IShapeFlexure.mn(k, lb, cb, null);
-                double avail = method.available(mn, phiB, omegaB);
-                double ratio = Double.isNaN(mn) ? Double.POSITIVE_INFINITY : mm[0] / avail;
-                if (flex == null || ratio > flex.ratio()) {
-                    String note = (bounds.length > 2 ? "segment " + (seg + 1) + " of " + (bounds.length - 1) : "")
-                            + (Double.isNaN(mn) ? "noncompact web: AISC 360-16 F4 not implemented" : "");
-                    flex = new Check("flexure", mm[0], avail, ratio, combos.get(c).name(),
-                            Aisc360.clause(k.flange() == IShapeFlexure.FlangeClass.COMPACT ? "F2" : "F3"),
-                            Quantity.MOMENT, mm[1], lb, lb == 0 ? Double.NaN : cb, note);
-                    if (calc != null) {
-                        recordFlexure(calc, c, seg, a, b, w, mm, lb, cb, k, mn, lrfd);
-                    }
+                double avail = method.available(mn, ResistanceFactors.PHI_B, ResistanceFactors.OMEGA_B);
+                double r = Double.isNaN(mn) ? Double.POSITIVE_INFINITY : Math.abs(tmp[0]) / avail;
+                if (r > ratio[FLEX]) {
+                    ratio[FLEX] = r;
+                    demand[FLEX] = Math.abs(tmp[0]);
+                    capacity[FLEX] = avail;
+                    position[FLEX] = tmp[1];
+                    combo[FLEX] = c;
+                    flexLb = lb;
+                    flexCb = cb;
+                    flexSeg = seg;
                 }
             }
         }
-        if (calc != null) {
-            calc.eq("ratio", "M_req/M_avail", flex.clause(), flex.ratio(), Quantity.NUMBER,
-                    Arg.of("M_req", flex.demand(), Quantity.MOMENT), Arg.of("M_avail", flex.capacity(), Quantity.MOMENT));
-        }
-        out.add(flex);
 
         // Shear: with downward loads the largest shear is at a support
-        IShapeShear.Strength vs = calc == null ? shearStrength(s, steel) : IShapeShear.strength(s, steel.fy(), steel.e(), calc);
         double vAvail = method.available(vs.vn(), vs.phi(), vs.omega());
-        Check shear = null;
+        ratio[SHEAR] = -1;
+        active[SHEAR] = true;
         for (int c = 0; c < combos.size(); c++) {
             double sw = comboDeadFactor[c] * w * span / 2;
-            double r1 = comboSpans[c].leftReaction() + sw;
-            double r2 = comboSpans[c].rightReaction() + sw;
-            double v = Math.max(Math.abs(r1), Math.abs(r2));
-            double ratio = v / vAvail;
-            if (shear == null || ratio > shear.ratio()) {
-                boolean left = Math.abs(r1) >= Math.abs(r2);
-                shear = new Check("shear", v, vAvail, ratio, combos.get(c).name(),
-                        Aisc360.clause(vs.caseA() ? "G2.1(a)" : "G2.1(b)"), Quantity.FORCE, left ? 0 : span, Double.NaN,
-                        Double.NaN, (left ? "left" : "right") + " support");
+            double r1 = Math.abs(comboSpans[c].leftReaction() + sw);
+            double r2 = Math.abs(comboSpans[c].rightReaction() + sw);
+            double v = Math.max(r1, r2);
+            if (v / vAvail > ratio[SHEAR]) {
+                ratio[SHEAR] = v / vAvail;
+                demand[SHEAR] = v;
+                capacity[SHEAR] = vAvail;
+                position[SHEAR] = r1 >= r2 ? 0 : span;
+                combo[SHEAR] = c;
+            }
+        }
+
+        // Deflections under service loads (project criteria)
+        double ei = steel.e() * s.props().ix();
+        DeflectionLimits dl = criteria.deflection();
+        active[LIVE] = dl.live() > 0;
+        if (active[LIVE]) {
+            demand[LIVE] = liveDeflectionEi / ei;
+            capacity[LIVE] = span / dl.live();
+            ratio[LIVE] = demand[LIVE] / capacity[LIVE];
+            position[LIVE] = liveDeflectionAt;
+        }
+        active[TOTAL] = dl.total() > 0;
+        if (active[TOTAL]) {
+            capacity[TOTAL] = span / dl.total();
+            if (!exact) {
+                // The sum of the two maxima bounds the maximum of the sum. When even that bound does
+                // not govern, the exact value cannot either, and the search needs only the governing check.
+                double bound = (totalDeflectionEi + w * 5 * span * span * span * span / 384) / ei / capacity[TOTAL];
+                double others = Math.max(ratio[FLEX], Math.max(ratio[SHEAR], active[LIVE] ? ratio[LIVE] : 0));
+                if (bound <= others) {
+                    ratio[TOTAL] = bound;
+                    demand[TOTAL] = Double.NaN;
+                    return governingIndex();
+                }
+            }
+            totalSpan.maxEiDeflectionWithUniform(w, tmp);
+            demand[TOTAL] = tmp[0] / ei;
+            capacity[TOTAL] = span / dl.total();
+            ratio[TOTAL] = demand[TOTAL] / capacity[TOTAL];
+            position[TOTAL] = tmp[1];
+        }
+        return governingIndex();
+    }
+
+    private int governingIndex() {
+        int g = FLEX;
+        for (int i = 1; i < 4; i++) {
+            if (active[i] && (ratio[i] > ratio[g] || Double.isNaN(ratio[i]))) {
+                g = i;
+            }
+        }
+        return g;
+    }
+
+    /** Builds the check record {@code i} of the last evaluation. */
+    private Check toCheck(int i, IShapeFlexure.Constants k, IShapeShear.Strength vs, double w) {
+        return switch (i) {
+            case FLEX -> new Check("flexure", demand[i], capacity[i], ratio[i], combos.get(combo[i]).name(),
+                    Aisc360.clause(k.flange() == IShapeFlexure.FlangeClass.COMPACT ? "F2" : "F3"), Quantity.MOMENT,
+                    position[i], flexLb, flexLb == 0 ? Double.NaN : flexCb,
+                    !k.webCompact() ? "noncompact web: AISC 360-16 F4 not implemented"
+                            : bounds.length > 2 ? segmentNotes[flexSeg] : "");
+            case SHEAR -> new Check("shear", demand[i], capacity[i], ratio[i], combos.get(combo[i]).name(),
+                    Aisc360.clause(vs.caseA() ? "G2.1(a)" : "G2.1(b)"), Quantity.FORCE, position[i], Double.NaN,
+                    Double.NaN, (position[i] == 0 ? "left" : "right") + " support");
+            case LIVE -> new Check("live-load deflection", demand[i], capacity[i], ratio[i], liveName,
+                    DeflectionLimits.SOURCE, Quantity.SECTION_LENGTH, position[i], Double.NaN, Double.NaN,
+                    liveNote);
+            default -> new Check("total-load deflection", demand[i], capacity[i], ratio[i],
+                    w > 0 ? totalNameSw : totalName, DeflectionLimits.SOURCE, Quantity.SECTION_LENGTH,
+                    position[i], Double.NaN, Double.NaN, totalNote);
+        };
+    }
+
+    /**
+     * Every check of {@code s}. With a recorder, also writes the calculation sheet of the section
+     * from the same equations.
+     */
+    public List<Check> check(Section s, Calc calc) {
+        Steel steel = criteria.steel();
+        IShapeFlexure.Constants k = flexureConstants(s, steel);
+        IShapeShear.Strength vs = shearStrength(s, steel);
+        evaluate(s, k, vs, true);
+        double w = criteria.selfWeight() ? s.weight() : 0;
+        List<Check> out = new ArrayList<>(4);
+        for (int i = 0; i < 4; i++) {
+            if (active[i]) {
+                out.add(toCheck(i, k, vs, w));
             }
         }
         if (calc != null) {
-            calc.value(lrfd ? "Vu" : "Va", shear.demand(), Quantity.FORCE, "under " + shear.combination() + ", at the "
-                    + shear.note() + " (statics of the simple span)", "");
-            String sym = lrfd ? "φv·Vn" : "Vn/Ωv";
-            calc.eq(sym, lrfd ? "φv·Vn" : "Vn/Ωv", Aisc360.clause(lrfd ? "G1" : "G1"), vAvail, Quantity.FORCE,
-                    Arg.num(lrfd ? "φv" : "Ωv", lrfd ? vs.phi() : vs.omega()), Arg.of("Vn", vs.vn(), Quantity.FORCE));
-            calc.eq("ratio", "V_req/V_avail", shear.clause(), shear.ratio(), Quantity.NUMBER,
-                    Arg.of("V_req", shear.demand(), Quantity.FORCE), Arg.of("V_avail", vAvail, Quantity.FORCE));
-        }
-        out.add(shear);
-
-        // Deflection (service loads; project criteria)
-        double ei = steel.e() * s.props().ix();
-        DeflectionLimits dl = criteria.deflection();
-        if (dl.live() > 0) {
-            double delta = liveDeflectionEi / ei;
-            double allow = span / dl.live();
-            out.add(new Check("live-load deflection", delta, allow, delta / allow, liveName,
-                    DeflectionLimits.SOURCE, Quantity.SECTION_LENGTH, liveDeflectionAt, Double.NaN, Double.NaN,
-                    "limit L/" + CalcFormat.sig(dl.live())));
-            if (calc != null) {
-                calc.value("Δ_live", delta, Quantity.SECTION_LENGTH, "under " + liveName
-                        + " (statics of the simple span with E·Ix)", "", Arg.of("x", liveDeflectionAt, Quantity.SPAN_LENGTH));
-                calc.eq("Δ_allow", "L/n", DeflectionLimits.SOURCE, allow, Quantity.SECTION_LENGTH,
-                        Arg.of("L", span, Quantity.SPAN_LENGTH), Arg.num("n", dl.live()));
-            }
-        }
-        if (dl.total() > 0) {
-            double[] t = maxTotalDeflectionEi(w);
-            double delta = t[0] / ei;
-            double allow = span / dl.total();
-            out.add(new Check("total-load deflection", delta, allow, delta / allow, totalName + (w > 0 ? " + self-weight" : ""),
-                    DeflectionLimits.SOURCE, Quantity.SECTION_LENGTH, t[1], Double.NaN, Double.NaN,
-                    "limit L/" + CalcFormat.sig(dl.total())));
-            if (calc != null) {
-                calc.value("Δ_total", delta, Quantity.SECTION_LENGTH, "under " + totalName
-                        + (w > 0 ? " + self-weight" : "") + " (statics of the simple span with E·Ix)", "",
-                        Arg.of("x", t[1], Quantity.SPAN_LENGTH));
-                calc.eq("Δ_allow", "L/n", DeflectionLimits.SOURCE, allow, Quantity.SECTION_LENGTH,
-                        Arg.of("L", span, Quantity.SPAN_LENGTH), Arg.num("n", dl.total()));
-            }
+            record(calc, s, out, w);
         }
         return out;
+    }
+
+    /** Writes the calculation sheet of {@code s}, whose checks are {@code checks}. */
+    private void record(Calc calc, Section s, List<Check> checks, double w) {
+        Steel steel = criteria.steel();
+        boolean lrfd = criteria.method() == DesignMethod.LRFD;
+        calc.heading("Section " + s.designation());
+        calc.value("Fy", steel.fy(), Quantity.STRESS, steel.name(), Aisc360.clause("A3.1"),
+                Arg.of("E", steel.e(), Quantity.STRESS));
+        calc.value("wsw", w, Quantity.LINE_LOAD, criteria.selfWeight() ? "self-weight: nominal weight of "
+                + s.designation() + ", added to D" : "self-weight not added: the dead load is taken to include it", "");
+        IShapeFlexure.Constants k = IShapeFlexure.constants(s, steel.fy(), steel.e(), calc);
+        Check flex = checks.get(0);
+        int c = combos.indexOf(combos.stream().filter(x -> x.name().equals(flex.combination())).findFirst().orElseThrow());
+        double lb = Double.isNaN(flex.lb()) ? 0 : flex.lb();
+        double a = criteria.bracing().isContinuous() ? 0 : bounds[flexSeg];
+        double b = criteria.bracing().isContinuous() ? span : bounds[flexSeg + 1];
+        recordFlexure(calc, c, flexSeg, a, b, w, new double[] {flex.demand(), flex.position()}, lb,
+                Double.isNaN(flex.cb()) ? 1 : flex.cb(), k, IShapeFlexure.mn(k, lb, Double.isNaN(flex.cb()) ? 1 : flex.cb(), null), lrfd);
+        calc.eq("ratio", "M_req/M_avail", flex.clause(), flex.ratio(), Quantity.NUMBER,
+                Arg.of("M_req", flex.demand(), Quantity.MOMENT), Arg.of("M_avail", flex.capacity(), Quantity.MOMENT));
+
+        Check shear = checks.get(1);
+        calc.heading("Shear under " + shear.combination());
+        IShapeShear.Strength vs = IShapeShear.strength(s, steel.fy(), steel.e(), calc);
+        calc.value(lrfd ? "Vu" : "Va", shear.demand(), Quantity.FORCE, "at the " + shear.note()
+                + " (statics of the simple span)", "");
+        calc.eq(lrfd ? "φv·Vn" : "Vn/Ωv", lrfd ? "φv·Vn" : "Vn/Ωv", Aisc360.clause("G1"), shear.capacity(), Quantity.FORCE,
+                Arg.num(lrfd ? "φv" : "Ωv", lrfd ? vs.phi() : vs.omega()), Arg.of("Vn", vs.vn(), Quantity.FORCE));
+        calc.eq("ratio", "V_req/V_avail", shear.clause(), shear.ratio(), Quantity.NUMBER,
+                Arg.of("V_req", shear.demand(), Quantity.FORCE), Arg.of("V_avail", shear.capacity(), Quantity.FORCE));
+
+        for (Check d : checks.subList(2, checks.size())) {
+            calc.heading("Deflection (" + d.name() + ") under " + d.combination() + ", " + d.note());
+            calc.value("Δ", d.demand(), Quantity.SECTION_LENGTH, "statics of the simple span with E·Ix, Ix = "
+                    + "design value of " + s.designation(), "", Arg.of("x", d.position(), Quantity.SPAN_LENGTH));
+            double n = d.name().startsWith("live") ? criteria.deflection().live() : criteria.deflection().total();
+            calc.eq("Δ_allow", "L/n", DeflectionLimits.SOURCE, d.capacity(), Quantity.SECTION_LENGTH,
+                    Arg.of("L", span, Quantity.SPAN_LENGTH), Arg.num("n", n));
+            calc.eq("ratio", "Δ/Δ_allow", DeflectionLimits.SOURCE, d.ratio(), Quantity.NUMBER,
+                    Arg.of("Δ", d.demand(), Quantity.SECTION_LENGTH), Arg.of("Δ_allow", d.capacity(), Quantity.SECTION_LENGTH));
+        }
     }
 
     private void recordFlexure(Calc calc, int c, int seg, double a, double b, double w, double[] mm, double lb,

@@ -25,6 +25,21 @@ public final class Combinations {
      * 1.2D + 1.6L (LRFD) or D and D + L (ASD).
      */
     public static List<LoadCombination> gravity(DesignMethod method, Set<LoadCase> present) {
+        int key = method.ordinal();
+        for (LoadCase c : present) {
+            key |= 2 << c.ordinal();
+        }
+        List<LoadCombination> cached = CACHE.get(key);
+        if (cached == null) {
+            cached = build(method, present);
+            CACHE.put(key, cached);
+        }
+        return cached;
+    }
+
+    private static final java.util.Map<Integer, List<LoadCombination>> CACHE = new java.util.concurrent.ConcurrentHashMap<>();
+
+    private static List<LoadCombination> build(DesignMethod method, Set<LoadCase> present) {
         boolean l = present.contains(LoadCase.L);
         boolean lr = present.contains(LoadCase.LR);
         boolean s = present.contains(LoadCase.S);

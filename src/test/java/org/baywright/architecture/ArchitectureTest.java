@@ -1,0 +1,90 @@
+package org.baywright.architecture;
+
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
+
+import com.tngtech.archunit.core.domain.JavaClasses;
+import com.tngtech.archunit.core.importer.ClassFileImporter;
+import com.tngtech.archunit.core.importer.ImportOption;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The dependency rules of the house plan (docs/architecture.md, DEVELOPERS.md), executed.
+ */
+class ArchitectureTest {
+    private static JavaClasses classes;
+
+    @BeforeAll
+    static void importMain() {
+        classes = new ClassFileImporter()
+                .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS)
+                .importPackages("org.baywright");
+    }
+
+    @Test
+    void onlyTheUiImportsJavaFx() {
+        noClasses().that().resideOutsideOfPackage("org.baywright.ui..")
+                .should().dependOnClassesThat().resideInAnyPackage("javafx..")
+                .allowEmptyShould(true).check(classes);
+    }
+
+    @Test
+    void onlyIoImportsJackson() {
+        noClasses().that().resideOutsideOfPackage("org.baywright.io..")
+                .should().dependOnClassesThat().resideInAnyPackage("com.fasterxml.jackson..")
+                .check(classes);
+    }
+
+    @Test
+    void onlyGeometryImportsJts() {
+        noClasses().that().resideOutsideOfPackage("org.baywright.geometry..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.locationtech.jts..")
+                .check(classes);
+    }
+
+    @Test
+    void designCodesKnowNothingOfThePlanTheRunOrTheUi() {
+        noClasses().that().resideInAPackage("org.baywright.design.aisc360..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.baywright.plan..", "org.baywright.takedown..",
+                        "org.baywright.run..", "org.baywright.ui..", "org.baywright.cli..", "org.baywright.io..",
+                        "org.baywright.geometry..", "org.baywright.report..", "org.baywright.study..")
+                .check(classes);
+    }
+
+    @Test
+    void designCodesDoNotImportEachOther() {
+        // each design.<code> package (aisc360, later en1993…) stands alone
+        slices().matching("org.baywright.design.(*)..").should().notDependOnEachOther().check(classes);
+    }
+
+    @Test
+    void theEngineNeverImportsTheFrontEnds() {
+        noClasses().that().resideOutsideOfPackages("org.baywright.cli..", "org.baywright.ui..", "org.baywright")
+                .should().dependOnClassesThat().resideInAnyPackage("org.baywright.cli..", "org.baywright.ui..")
+                .check(classes);
+    }
+
+    @Test
+    void cliAndUiAreSiblings() {
+        noClasses().that().resideInAPackage("org.baywright.cli..")
+                .should().dependOnClassesThat().resideInAPackage("org.baywright.ui..").check(classes);
+        noClasses().that().resideInAPackage("org.baywright.ui..")
+                .should().dependOnClassesThat().resideInAPackage("org.baywright.cli..")
+                .allowEmptyShould(true).check(classes);
+    }
+
+    @Test
+    void lowLayersStayLow() {
+        noClasses().that().resideInAnyPackage("org.baywright.units..", "org.baywright.calc..", "org.baywright.analysis..",
+                "org.baywright.load..", "org.baywright.catalog..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.baywright.design..", "org.baywright.plan..",
+                        "org.baywright.takedown..", "org.baywright.run..", "org.baywright.report..", "org.baywright.io..")
+                .check(classes);
+    }
+
+    @Test
+    void noCyclesBetweenPackages() {
+        slices().matching("org.baywright.(*)..").should().beFreeOfCycles().check(classes);
+    }
+}

@@ -14,7 +14,9 @@ import java.util.concurrent.Callable;
 import org.baywright.analysis.DistributedLoad;
 import org.baywright.analysis.PointLoad;
 import org.baywright.analysis.SpanLoad;
+import org.baywright.calc.Calc;
 import org.baywright.calc.CalcFormat;
+import org.baywright.calc.CalcLine;
 import org.baywright.calc.Caution;
 import org.baywright.calc.Quantity;
 import org.baywright.catalog.Catalog;
@@ -113,6 +115,9 @@ public final class BeamCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print one JSON object instead of text.")
     boolean json;
 
+    @Option(names = "--calc", description = "Also print the calculation sheet of the chosen section: each equation as formula, substitution and result, with its clause.")
+    boolean calc;
+
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
@@ -196,10 +201,36 @@ public final class BeamCommand implements Callable<Integer> {
         } else {
             design = designer.search(cat, filter);
         }
+        Calc sheet = null;
+        if (calc && design.section() != null) {
+            sheet = new Calc();
+            designer.check(design.section(), sheet);
+        }
         if (json) {
-            out.print(JsonText.write(toJson(design, us, l, m, criteria, cat)));
+            Map<String, Object> o = toJson(design, us, l, m, criteria, cat);
+            if (sheet != null) {
+                List<String> lines = new ArrayList<>();
+                for (CalcLine line : sheet.lines()) {
+                    lines.add(CalcFormat.render(line, us));
+                }
+                o.put("calculation", lines);
+            }
+            out.print(JsonText.write(o));
         } else {
             printText(out, design, us, l, loads, criteria, cat, filter);
+            if (sheet != null) {
+                out.println();
+                out.println("Calculation sheet");
+                for (CalcLine line : sheet.lines()) {
+                    boolean head = line.kind() == CalcLine.Kind.HEADING;
+                    if (head) {
+                        out.println();
+                    }
+                    out.println((head ? "" : "  ") + CalcFormat.render(line, us));
+                }
+                out.println();
+                out.println(Caution.TEXT);
+            }
         }
         out.flush();
         return design.status() == MemberStatus.OVERSTRESSED ? BaywrightCommand.EXIT_OVERSTRESSED : BaywrightCommand.EXIT_OK;

@@ -19,6 +19,7 @@ public final class Section {
     private final String designation;
     private final String shape;
     private final String nominalDepth;
+    private final String series;
     private final double weight;
     private final IShapeDimensions dims;
     private final SectionProperties computed;
@@ -41,6 +42,7 @@ public final class Section {
         }
         this.shape = m.group(1);
         this.nominalDepth = m.group(2);
+        this.series = shape + nominalDepth;
         if (!(weight > 0) || !Double.isFinite(weight)) {
             throw new IllegalArgumentException(designation + ": weight must be positive, got " + weight);
         }
@@ -78,7 +80,7 @@ public final class Section {
 
     /** Series by nominal depth, as used for filters: {@code W18}. */
     public String series() {
-        return shape + nominalDepth;
+        return series;
     }
 
     /** Nominal weight per length, N/m (the self-weight design adds to the dead load). */

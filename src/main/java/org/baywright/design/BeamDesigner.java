@@ -36,8 +36,11 @@ import org.baywright.load.LoadCombination;
  * the designation in alphabetical order ({@link Catalog#SEARCH_ORDER}).
  */
 public final class BeamDesigner {
-    private static final Map<Steel, Map<Section, IShapeFlexure.Constants>> FLEXURE_CACHE = new ConcurrentHashMap<>();
-    private static final Map<Steel, Map<Section, IShapeShear.Strength>> SHEAR_CACHE = new ConcurrentHashMap<>();
+    /** Length-independent strengths of a section for one steel, computed once and shared by all designers. */
+    private record Strengths(IShapeFlexure.Constants flexure, IShapeShear.Strength shear) {
+    }
+
+    private static final Map<Steel, Map<Section, Strengths>> CACHE = new ConcurrentHashMap<>();
 
     private final BeamLoads loads;
     private final BeamCriteria criteria;
@@ -147,8 +150,9 @@ public final class BeamDesigner {
                 continue;
             }
             candidates++;
-            IShapeFlexure.Constants k = flexureConstants(s, steel);
-            IShapeShear.Strength vs = shearStrength(s, steel);
+            Strengths st = strengths(s, steel);
+            IShapeFlexure.Constants k = st.flexure();
+            IShapeShear.Strength vs = st.shear();
             int g = evaluate(s, k, vs, false);
             if (ratio[g] <= 1.0 + 1e-9) {
                 return new BeamDesign(MemberStatus.SIZED, s, check(s, null), rejected, candidates);
@@ -198,14 +202,18 @@ public final class BeamDesigner {
         }
     }
 
-    private static IShapeFlexure.Constants flexureConstants(Section s, Steel steel) {
-        return FLEXURE_CACHE.computeIfAbsent(steel, k -> new ConcurrentHashMap<>())
-                .computeIfAbsent(s, k -> IShapeFlexure.constants(k, steel.fy(), steel.e(), null));
-    }
-
-    private static IShapeShear.Strength shearStrength(Section s, Steel steel) {
-        return SHEAR_CACHE.computeIfAbsent(steel, k -> new ConcurrentHashMap<>())
-                .computeIfAbsent(s, k -> IShapeShear.strength(k, steel.fy(), steel.e(), null));
+    private static Strengths strengths(Section s, Steel steel) {
+        Map<Section, Strengths> m = CACHE.get(steel);
+        if (m == null) {
+            m = CACHE.computeIfAbsent(steel, k -> new ConcurrentHashMap<>());
+        }
+        Strengths t = m.get(s);
+        if (t == null) {
+            t = new Strengths(IShapeFlexure.constants(s, steel.fy(), steel.e(), null),
+                    IShapeShear.strength(s, steel.fy(), steel.e(), null));
+            m.put(s, t);
+        }
+        return t;
     }
 
     // Scratch results of the last evaluation (a designer serves one thread).
@@ -356,8 +364,9 @@ public final class BeamDesigner {
      */
     public List<Check> check(Section s, Calc calc) {
         Steel steel = criteria.steel();
-        IShapeFlexure.Constants k = flexureConstants(s, steel);
-        IShapeShear.Strength vs = shearStrength(s, steel);
+        Strengths st = strengths(s, steel);
+        IShapeFlexure.Constants k = st.flexure();
+        IShapeShear.Strength vs = st.shear();
         evaluate(s, k, vs, true);
         double w = criteria.selfWeight() ? s.weight() : 0;
         List<Check> out = new ArrayList<>(4);

@@ -16,7 +16,8 @@ import picocli.CommandLine.Command;
             Caution.TEXT,
             ""
         },
-        subcommands = {BeamCommand.class, CatalogCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {NewCommand.class, CheckCommand.class, DesignCommand.class, BeamCommand.class, CatalogCommand.class,
+            CommandLine.HelpCommand.class})
 public final class BaywrightCommand implements Runnable {
 
     /** Exit code: everything sized and adequate. */

@@ -127,6 +127,41 @@ public final class Quantities {
         return parse(field, text, Dimension.STRESS);
     }
 
+    /**
+     * Parses a list of lengths such as bay spacings: items separated by spaces or commas, each a length
+     * or {@code N@LENGTH} for N equal lengths ({@code 3@30ft}, {@code 25'-6" 30ft 30ft}). Items may not
+     * contain spaces.
+     */
+    public static java.util.List<Double> lengthList(String field, String text) {
+        if (text == null || text.isBlank()) {
+            throw new UnitParseException(field, text == null ? "" : text, "is empty",
+                    "lengths separated by spaces or commas, or N@LENGTH, e.g. 3@30ft or 25ft,30ft,30ft");
+        }
+        java.util.List<Double> out = new java.util.ArrayList<>();
+        for (String item : text.trim().split("[,\\s]+")) {
+            int at = item.indexOf('@');
+            int n = 1;
+            String len = item;
+            if (at >= 0) {
+                try {
+                    n = Integer.parseInt(item.substring(0, at).trim());
+                } catch (NumberFormatException e) {
+                    n = -1;
+                }
+                if (n < 1 || n > 1000) {
+                    throw new UnitParseException(field, text, "has a repeat count \"" + item.substring(0, at)
+                            + "\" that is not a whole number from 1 to 1000", "N@LENGTH, e.g. 3@30ft");
+                }
+                len = item.substring(at + 1);
+            }
+            double v = parsePositive(field, len, Dimension.LENGTH);
+            for (int i = 0; i < n; i++) {
+                out.add(v);
+            }
+        }
+        return out;
+    }
+
     private static double checkFinite(String field, String text, Dimension d, double v) {
         if (!Double.isFinite(v)) {
             throw new UnitParseException(field, text, "is not a finite number", ACCEPTED.get(d));

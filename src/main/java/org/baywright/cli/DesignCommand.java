@@ -1,0 +1,95 @@
+package org.baywright.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.baywright.calc.Caution;
+import org.baywright.design.MemberStatus;
+import org.baywright.io.JsonText;
+import org.baywright.load.DesignMethod;
+import org.baywright.plan.DesignSettings;
+import org.baywright.plan.Plan;
+import org.baywright.report.RunSummary;
+import org.baywright.run.PlanRun;
+import org.baywright.run.RunResult;
+import org.baywright.units.UnitSystem;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code baywright design}: run a plan. */
+@Command(name = "design", mixinStandardHelpOptions = true,
+        description = {"Run a plan: tributary areas, the load takedown and the sizing of every beam, girder and column.",
+            "Prints a summary; --json writes the full result (see docs/design-output.md).",
+            "Exit code: 0 everything sized; 1 some member overstressed or unsupported; 2 bad input."},
+        footer = {"", Caution.TEXT})
+public final class DesignCommand implements Callable<Integer> {
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Parameters(paramLabel = "PLAN.bay.json")
+    Path file;
+
+    @Option(names = "--method", paramLabel = "lrfd|asd", description = "Override the plan's design method.")
+    String method;
+
+    @Option(names = "--units", paramLabel = "us|si", description = "Units of the output (default: the plan's).")
+    String units;
+
+    @Option(names = "--json", paramLabel = "OUT|-", description = "Write the full result as JSON to a file, or - for standard output.")
+    String json;
+
+    @Override
+    public Integer call() throws IOException {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        Plan plan = PlanInput.read(file, err);
+        if (plan == null) {
+            return BaywrightCommand.EXIT_BAD_INPUT;
+        }
+        if (method != null) {
+            DesignMethod m = DesignMethod.parse(method);
+            if (m == null) {
+                throw new BadInputException("--method: \"" + method + "\" is not a design method; use lrfd or asd");
+            }
+            DesignSettings s = plan.settings();
+            plan = new Plan(plan.name(), plan.units(), new DesignSettings(m.name().toLowerCase(Locale.ROOT), s.fy(),
+                    s.liveDeflection(), s.totalDeflection(), s.beamSeries(), s.girderSeries(), s.columnSeries(),
+                    s.maxBeamDepth(), s.spliceEvery(), s.liveLoadReduction(), s.partitionAsDead(), s.girderAreaDelivered(),
+                    s.catalog()), plan.grid(), plan.levels(), plan.floors(), plan.columns());
+        }
+        UnitSystem us = UnitSystem.parse(units != null ? units : plan.units());
+        if (us == null) {
+            throw new BadInputException("--units: \"" + units + "\" is not a unit system; use us or si");
+        }
+        RunResult r = PlanRun.run(plan);
+        if (json != null) {
+            String text = JsonText.write(RunSummary.json(r, us));
+            if (json.equals("-")) {
+                out.print(text);
+            } else {
+                Files.writeString(Path.of(json), text, StandardCharsets.UTF_8);
+            }
+        }
+        if (json == null || !json.equals("-")) {
+            out.print(RunSummary.text(r, us));
+        } else {
+            for (org.baywright.plan.Problem p : r.problems()) {
+                err.println(file + ": " + p);
+            }
+        }
+        out.flush();
+        if (r.takedown() == null) {
+            return BaywrightCommand.EXIT_BAD_INPUT;
+        }
+        var counts = RunSummary.statusCounts(r.takedown());
+        boolean bad = counts.get(MemberStatus.OVERSTRESSED) > 0 || counts.get(MemberStatus.UNSUPPORTED) > 0
+                || r.problems().stream().anyMatch(p -> p.severity() == org.baywright.plan.Problem.Severity.ERROR);
+        return bad ? BaywrightCommand.EXIT_OVERSTRESSED : BaywrightCommand.EXIT_OK;
+    }
+}

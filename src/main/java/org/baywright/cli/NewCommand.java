@@ -1,0 +1,130 @@
+package org.baywright.cli;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.baywright.calc.Caution;
+import org.baywright.io.PlanFiles;
+import org.baywright.plan.LoadValues;
+import org.baywright.plan.Plan;
+import org.baywright.plan.RegularPlan;
+import org.baywright.units.Dimension;
+import org.baywright.units.Quantities;
+import org.baywright.units.UnitParseException;
+import org.baywright.units.UnitSystem;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code baywright new}: write a regular plan, the starting point of a study. */
+@Command(name = "new", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Write a regular plan: a grid of bays, columns at every intersection, girders, column-line beams,",
+            "infill beams at a maximum spacing, one deck, area loads, an edge load, and levels of a typical floor",
+            "under a roof. Lists of lengths: 3@30ft, or 25ft,30ft,30ft (items without spaces)."},
+        footer = {"", Caution.TEXT})
+public final class NewCommand implements Callable<Integer> {
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Option(names = "--bays-x", required = true, paramLabel = "LENGTHS", description = "Bay widths west to east, e.g. 3@30ft.")
+    String baysX;
+
+    @Option(names = "--bays-y", required = true, paramLabel = "LENGTHS", description = "Bay depths south to north, e.g. 3@30ft.")
+    String baysY;
+
+    @Option(names = "--levels", defaultValue = "1@13ft", paramLabel = "LENGTHS", description = "Storey heights bottom to top; with more than one, the top level is the roof (default ${DEFAULT-VALUE}).")
+    String levels;
+
+    @Option(names = "--beams-along", defaultValue = "y", paramLabel = "x|y", description = "Direction the infill beams span (default ${DEFAULT-VALUE}); girders run the other way.")
+    String beamsAlong;
+
+    @Option(names = "--beam-spacing", defaultValue = "10ft", paramLabel = "LENGTH", description = "Largest infill beam spacing (default ${DEFAULT-VALUE}).")
+    String beamSpacing;
+
+    @Option(names = "--dead", defaultValue = "56psf", paramLabel = "AREA-LOAD", description = "Dead load of slab and deck (default ${DEFAULT-VALUE}); the framing's own weight is added by the run.")
+    String dead;
+
+    @Option(names = "--superimposed", defaultValue = "10psf", paramLabel = "AREA-LOAD", description = "Superimposed dead load (default ${DEFAULT-VALUE}).")
+    String superimposed;
+
+    @Option(names = "--live", defaultValue = "50psf", paramLabel = "AREA-LOAD", description = "Floor live load (default ${DEFAULT-VALUE}, offices, ASCE 7-16 Table 4.3-1).")
+    String live;
+
+    @Option(names = "--partition", defaultValue = "0psf", paramLabel = "AREA-LOAD", description = "Partition allowance, carried as reducible live load (ASCE 7-16 §4.3.2 gives 15 psf for offices; default ${DEFAULT-VALUE}).")
+    String partition;
+
+    @Option(names = "--roof-live", defaultValue = "20psf", paramLabel = "AREA-LOAD", description = "Roof live load (default ${DEFAULT-VALUE}).")
+    String roofLive;
+
+    @Option(names = "--snow", defaultValue = "0psf", paramLabel = "AREA-LOAD", description = "Roof snow load (default ${DEFAULT-VALUE}).")
+    String snow;
+
+    @Option(names = "--edge-load", defaultValue = "0klf", paramLabel = "LINE-LOAD", description = "Cladding dead load along the slab edge of every level (default ${DEFAULT-VALUE}).")
+    String edgeLoad;
+
+    @Option(names = "--name", defaultValue = "New plan", paramLabel = "TEXT", description = "Project name.")
+    String name;
+
+    @Option(names = "--units", paramLabel = "us|si", description = "Units of the plan file (default: SI when the bays are metric).")
+    String units;
+
+    @Option(names = {"-o", "--output"}, required = true, paramLabel = "PLAN.bay.json", description = "File to write.")
+    Path output;
+
+    @Override
+    public Integer call() throws IOException {
+        List<Double> bx = list("--bays-x", baysX);
+        List<Double> by = list("--bays-y", baysY);
+        List<Double> st = list("--levels", levels);
+        if (bx.size() > 200 || by.size() > 200 || st.size() > 200) {
+            throw new BadInputException("--bays-x, --bays-y and --levels allow at most 200 items each");
+        }
+        String along = beamsAlong.trim().toLowerCase(Locale.ROOT);
+        if (!along.equals("x") && !along.equals("y")) {
+            throw new BadInputException("--beams-along: \"" + beamsAlong + "\" is not allowed; use x or y");
+        }
+        double spacing = parse("--beam-spacing", beamSpacing, Dimension.LENGTH, true);
+        double d = parse("--dead", dead, Dimension.AREA_LOAD, false);
+        double sd = parse("--superimposed", superimposed, Dimension.AREA_LOAD, false);
+        double l = parse("--live", live, Dimension.AREA_LOAD, false);
+        double p = parse("--partition", partition, Dimension.AREA_LOAD, false);
+        double lr = parse("--roof-live", roofLive, Dimension.AREA_LOAD, false);
+        double s = parse("--snow", snow, Dimension.AREA_LOAD, false);
+        double edge = parse("--edge-load", edgeLoad, Dimension.LINE_LOAD, false);
+        UnitSystem us;
+        if (units != null) {
+            us = UnitSystem.parse(units);
+            if (us == null) {
+                throw new BadInputException("--units: \"" + units + "\" is not a unit system; use us or si");
+            }
+        } else {
+            String t = baysX.trim().toLowerCase(Locale.ROOT);
+            us = t.endsWith("mm") || (t.endsWith("m") && !t.endsWith("in")) ? UnitSystem.SI : UnitSystem.US;
+        }
+        Plan plan = RegularPlan.generate(new RegularPlan.Spec(name, us.name().toLowerCase(Locale.ROOT), bx, by, st,
+                along.equals("y"), spacing, new LoadValues(d, sd, l, 0, 0, p), new LoadValues(d, sd, 0, lr, s, 0),
+                new LoadValues(edge, 0, 0, 0, 0, 0)));
+        PlanFiles.write(plan, output);
+        spec.commandLine().getErr().println("wrote " + output + ": " + (bx.size()) + " × " + by.size() + " bays, "
+                + st.size() + " levels, " + plan.columns().size() + " columns");
+        return 0;
+    }
+
+    private static List<Double> list(String option, String text) {
+        try {
+            return Quantities.lengthList(option, text);
+        } catch (UnitParseException e) {
+            throw new BadInputException(e.getMessage(), e);
+        }
+    }
+
+    private static double parse(String option, String text, Dimension d, boolean positive) {
+        try {
+            return positive ? Quantities.parsePositive(option, text, d) : Quantities.parseNonNegative(option, text, d);
+        } catch (UnitParseException e) {
+            throw new BadInputException(e.getMessage(), e);
+        }
+    }
+}

@@ -1,0 +1,127 @@
+package org.baywright.plan;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * Generates a regular plan, the architect's starting point: an orthogonal grid of bays, columns at
+ * every intersection, girders along one set of grid lines, column-line beams along the other, infill
+ * beams in every bay at a maximum spacing, one deck spanning onto the beams, one area load over the
+ * slab, an edge line load for cladding, and levels of a typical floor topped by a roof.
+ *
+ * <p>Beams "along y" span north–south: girders then run east–west on the numbered grid lines and the
+ * deck spans east–west onto the beams.
+ */
+public final class RegularPlan {
+    private RegularPlan() {
+    }
+
+    /**
+     * What to generate (SI).
+     *
+     * @param baysX bay widths west to east, m
+     * @param baysY bay depths south to north, m
+     * @param storeys storey heights bottom to top, m; the last level is the roof
+     * @param beamsAlongY true: beams span north–south
+     * @param beamSpacing largest spacing of infill beams, m
+     * @param floorLoads area load on typical floors, Pa
+     * @param roofLoads area load on the roof, Pa
+     * @param edgeLoad cladding line load on the slab edge of every level, N/m (0 = none)
+     */
+    public record Spec(String name, String units, List<Double> baysX, List<Double> baysY, List<Double> storeys,
+            boolean beamsAlongY, double beamSpacing, LoadValues floorLoads, LoadValues roofLoads, LoadValues edgeLoad) {
+    }
+
+    /** Builds the plan. */
+    public static Plan generate(Spec spec) {
+        List<GridLine> grid = new ArrayList<>();
+        List<Double> xs = cumulative(spec.baysX());
+        List<Double> ys = cumulative(spec.baysY());
+        for (int i = 0; i < xs.size(); i++) {
+            grid.add(new GridLine(letters(i), GridLine.Axis.X, xs.get(i)));
+        }
+        for (int j = 0; j < ys.size(); j++) {
+            grid.add(new GridLine(Integer.toString(j + 1), GridLine.Axis.Y, ys.get(j)));
+        }
+        double w = xs.get(xs.size() - 1);
+        double d = ys.get(ys.size() - 1);
+        Polygon slab = Polygon.rectangle(0, 0, w, d);
+
+        List<Column> columns = new ArrayList<>();
+        for (int j = 0; j < ys.size(); j++) {
+            for (int i = 0; i < xs.size(); i++) {
+                String label = letters(i) + (j + 1);
+                columns.add(new Column("C-" + label, new Point(xs.get(i), ys.get(j)), letters(i) + "-" + (j + 1), "",
+                        Optional.empty()));
+            }
+        }
+        List<Member> members = new ArrayList<>();
+        // girders along the lines the beams frame into; column-line beams along the others
+        for (int j = 0; j < ys.size(); j++) {
+            for (int i = 0; i + 1 < xs.size(); i++) {
+                String id = (spec.beamsAlongY() ? "G-" : "B-") + (j + 1) + "-" + letters(i) + letters(i + 1);
+                members.add(new Member(id, spec.beamsAlongY() ? MemberKind.GIRDER : MemberKind.BEAM,
+                        new Point(xs.get(i), ys.get(j)), new Point(xs.get(i + 1), ys.get(j)), Optional.empty()));
+            }
+        }
+        for (int i = 0; i < xs.size(); i++) {
+            for (int j = 0; j + 1 < ys.size(); j++) {
+                String id = (spec.beamsAlongY() ? "B-" : "G-") + letters(i) + "-" + (j + 1) + (j + 2);
+                members.add(new Member(id, spec.beamsAlongY() ? MemberKind.BEAM : MemberKind.GIRDER,
+                        new Point(xs.get(i), ys.get(j)), new Point(xs.get(i), ys.get(j + 1)), Optional.empty()));
+            }
+        }
+        List<Infill> infills = new ArrayList<>();
+        for (int i = 0; i + 1 < xs.size(); i++) {
+            for (int j = 0; j + 1 < ys.size(); j++) {
+                infills.add(new Infill("IF-" + letters(i) + letters(i + 1) + "-" + (j + 1) + (j + 2), letters(i), letters(i + 1),
+                        Integer.toString(j + 1), Integer.toString(j + 2), spec.beamsAlongY() ? GridLine.Axis.Y : GridLine.Axis.X, 0,
+                        spec.beamSpacing()));
+            }
+        }
+        // the deck spans across the beams
+        List<Deck> decks = List.of(new Deck("DK-1", slab, spec.beamsAlongY() ? 0 : 90));
+        List<Point> perimeter = new ArrayList<>(slab.vertices());
+        perimeter.add(slab.vertices().get(0));
+        List<LineLoad> edge = spec.edgeLoad().isZero() ? List.of()
+                : List.of(new LineLoad("LL-edge", perimeter, spec.edgeLoad()));
+        Floor typical = new Floor("typical", "Typical floor", false, slab, decks, members, infills, List.of(),
+                List.of(new AreaLoad("AL-floor", slab, spec.floorLoads(), LiveLoadUse.ORDINARY)), edge, List.of());
+        Floor roof = new Floor("roof", "Roof", true, slab, decks, members, infills, List.of(),
+                List.of(new AreaLoad("AL-roof", slab, spec.roofLoads(), LiveLoadUse.ORDINARY)), edge, List.of());
+        List<Level> levels = new ArrayList<>();
+        double elevation = 0;
+        int n = spec.storeys().size();
+        for (int k = 0; k < n; k++) {
+            elevation += spec.storeys().get(k);
+            boolean top = k == n - 1 && n > 1;
+            levels.add(new Level(top ? "Roof" : "Level " + (k + 2), elevation, spec.storeys().get(k), top ? "roof" : "typical"));
+        }
+        List<Floor> floors = n > 1 ? List.of(typical, roof) : List.of(typical);
+        return new Plan(spec.name(), spec.units(), DesignSettings.defaults(), grid, levels, floors, columns);
+    }
+
+    private static List<Double> cumulative(List<Double> bays) {
+        List<Double> out = new ArrayList<>();
+        double x = 0;
+        out.add(0.0);
+        for (double b : bays) {
+            x += b;
+            out.add(x);
+        }
+        return out;
+    }
+
+    /** Grid letters as drafters use them: A … Z, then AA, AB …; I and O are skipped (common practice). */
+    public static String letters(int i) {
+        String alphabet = "ABCDEFGHJKLMNPQRSTUVWXYZ";
+        StringBuilder sb = new StringBuilder();
+        int n = i;
+        do {
+            sb.insert(0, alphabet.charAt(n % alphabet.length()));
+            n = n / alphabet.length() - 1;
+        } while (n >= 0);
+        return sb.toString();
+    }
+}

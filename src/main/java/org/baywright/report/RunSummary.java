@@ -1,0 +1,270 @@
+package org.baywright.report;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.baywright.calc.Caution;
+import org.baywright.design.Check;
+import org.baywright.design.MemberStatus;
+import org.baywright.load.LoadCase;
+import org.baywright.plan.Level;
+import org.baywright.plan.Problem;
+import org.baywright.run.RunResult;
+import org.baywright.takedown.ColumnResult;
+import org.baywright.takedown.ColumnTier;
+import org.baywright.takedown.Equilibrium;
+import org.baywright.takedown.MemberResult;
+import org.baywright.takedown.StoreyLoad;
+import org.baywright.takedown.TakedownResult;
+import org.baywright.units.UnitSystem;
+import org.baywright.units.Units;
+
+/**
+ * The run result as a plain tree (maps and lists) for JSON output, in a unit system, and as a short
+ * text summary. The JSON layout is documented in {@code docs/design-output.md}.
+ */
+public final class RunSummary {
+    private RunSummary() {
+    }
+
+    /** Counts of members (and column tiers) by status. */
+    public static Map<MemberStatus, Integer> statusCounts(TakedownResult t) {
+        Map<MemberStatus, Integer> m = new LinkedHashMap<>();
+        for (MemberStatus s : MemberStatus.values()) {
+            m.put(s, 0);
+        }
+        for (String floor : t.levelFloors().values()) {
+            for (MemberResult r : t.members().getOrDefault(floor, List.of())) {
+                m.merge(r.status(), 1, Integer::sum);
+            }
+        }
+        for (ColumnResult c : t.columns()) {
+            for (ColumnTier tier : c.tiers()) {
+                m.merge(tier.status(), 1, Integer::sum);
+            }
+        }
+        return m;
+    }
+
+    /** Highest ratio over every member and column tier. */
+    public static double maxRatio(TakedownResult t) {
+        double r = 0;
+        for (List<MemberResult> ms : t.members().values()) {
+            for (MemberResult m : ms) {
+                if (!Double.isNaN(m.maxRatio())) {
+                    r = Math.max(r, m.maxRatio());
+                }
+            }
+        }
+        for (ColumnResult c : t.columns()) {
+            for (ColumnTier tier : c.tiers()) {
+                if (!Double.isNaN(tier.maxRatio())) {
+                    r = Math.max(r, tier.maxRatio());
+                }
+            }
+        }
+        return r;
+    }
+
+    /** Weight N as the trade states totals: lb (US) or kg (SI). */
+    static double weight(double newtons, UnitSystem us) {
+        return us == UnitSystem.US ? newtons / Units.NEWTONS_PER_POUND : newtons / Units.STANDARD_GRAVITY;
+    }
+
+    static String weightUnit(UnitSystem us) {
+        return us == UnitSystem.US ? "lb" : "kg";
+    }
+
+    static String weightPerAreaUnit(UnitSystem us) {
+        return us == UnitSystem.US ? "lb/ft²" : "kg/m²";
+    }
+
+    private static Map<String, Object> perCase(double[] byCase, UnitSystem us) {
+        Map<String, Object> o = new LinkedHashMap<>();
+        for (LoadCase lc : LoadCase.values()) {
+            o.put(lc.symbol(), us.force().fromSi(byCase[lc.ordinal()]));
+        }
+        return o;
+    }
+
+    /** The full result as a tree. */
+    public static Map<String, Object> json(RunResult run, UnitSystem us) {
+        Map<String, Object> o = new LinkedHashMap<>();
+        o.put("format", "baywright-run");
+        o.put("version", 1);
+        o.put("plan", run.plan().name());
+        o.put("program", "Baywright " + run.version());
+        o.put("catalog", run.catalogName());
+        o.put("method", run.plan().settings().method());
+        o.put("units", Map.of("system", us.name().toLowerCase(Locale.ROOT), "length", us.length().symbol(),
+                "force", us.force().symbol(), "area", us.floorArea().symbol(), "weightPerLength", us.weightPerLength().symbol(),
+                "weight", weightUnit(us), "weightPerArea", weightPerAreaUnit(us), "moment", us.moment().symbol(),
+                "deflection", us.smallLength().symbol()));
+        TakedownResult t = run.takedown();
+        List<Object> members = new ArrayList<>();
+        List<Object> columns = new ArrayList<>();
+        List<Object> foundations = new ArrayList<>();
+        List<Object> equilibrium = new ArrayList<>();
+        if (t != null) {
+            for (Level lv : run.plan().levels()) {
+                String key = t.levelFloors().get(lv.name());
+                for (MemberResult m : t.members().getOrDefault(key, List.of())) {
+                    members.add(member(m, lv.name(), us));
+                }
+            }
+            for (ColumnResult c : t.columns()) {
+                columns.add(column(c, us));
+                Map<String, Object> f = new LinkedHashMap<>();
+                f.put("column", c.id());
+                f.put("grid", c.grid());
+                f.put("reactions", perCase(c.foundation(), us));
+                f.put("reactionsLiveReduced", perCase(c.foundationReduced(), us));
+                foundations.add(f);
+            }
+            for (Equilibrium e : t.equilibrium()) {
+                Map<String, Object> q = new LinkedHashMap<>();
+                q.put("case", e.loadCase());
+                q.put("applied", us.force().fromSi(e.applied()));
+                q.put("reactions", us.force().fromSi(e.reactions()));
+                q.put("holds", e.holds());
+                equilibrium.add(q);
+            }
+        }
+        o.put("members", members);
+        o.put("columns", columns);
+        o.put("foundations", foundations);
+        Map<String, Object> totals = new LinkedHashMap<>();
+        if (t != null) {
+            double w = t.steelWeight();
+            totals.put("steelWeight", weight(w, us));
+            totals.put("floorArea", us.floorArea().fromSi(t.floorArea()));
+            totals.put("weightPerArea", t.floorArea() > 0 ? weight(w, us) / us.floorArea().fromSi(t.floorArea()) : null);
+            totals.put("maxRatio", maxRatio(t));
+            Map<String, Object> counts = new LinkedHashMap<>();
+            statusCounts(t).forEach((k, v) -> counts.put(k.label(), v));
+            totals.put("byStatus", counts);
+        }
+        o.put("totals", totals);
+        o.put("equilibrium", equilibrium);
+        List<Object> problems = new ArrayList<>();
+        for (Problem p : run.problems()) {
+            Map<String, Object> j = new LinkedHashMap<>();
+            j.put("severity", p.severity().name().toLowerCase(Locale.ROOT));
+            j.put("kind", p.kind());
+            j.put("location", p.location());
+            j.put("id", p.objectId());
+            j.put("message", p.message());
+            problems.add(j);
+        }
+        o.put("problems", problems);
+        o.put("caution", Caution.TEXT);
+        return o;
+    }
+
+    private static Map<String, Object> member(MemberResult m, String level, UnitSystem us) {
+        Map<String, Object> j = new LinkedHashMap<>();
+        j.put("id", m.id());
+        j.put("kind", m.kind().name().toLowerCase(Locale.ROOT));
+        j.put("level", level);
+        j.put("floor", m.floor());
+        j.put("length", us.length().fromSi(m.length()));
+        j.put("section", m.section().isEmpty() ? null : m.section());
+        j.put("status", m.status().label());
+        j.put("weight", m.design() == null || m.design().section() == null ? null
+                : us.weightPerLength(m.design().section().weight()));
+        j.put("tributaryArea", us.floorArea().fromSi(m.tributaryArea()));
+        j.put("reductionArea", us.floorArea().fromSi(m.reductionArea()));
+        j.put("kll", m.kll());
+        j.put("liveReductionFactor", m.liveFactor());
+        Map<String, Object> ratios = new LinkedHashMap<>();
+        if (m.design() != null) {
+            for (Check c : m.design().checks()) {
+                ratios.put(c.name(), c.ratio());
+            }
+        }
+        j.put("ratios", ratios);
+        Map<String, Object> reactions = new LinkedHashMap<>();
+        reactions.put("start", perCase(org.baywright.takedown.Component.byCase(m.startReaction()), us));
+        reactions.put("end", perCase(org.baywright.takedown.Component.byCase(m.endReaction()), us));
+        j.put("reactions", reactions);
+        j.put("supports", List.of(m.startSupport(), m.endSupport()));
+        return j;
+    }
+
+    private static Map<String, Object> column(ColumnResult c, UnitSystem us) {
+        Map<String, Object> j = new LinkedHashMap<>();
+        j.put("id", c.id());
+        j.put("grid", c.grid());
+        j.put("position", c.position());
+        j.put("kll", c.kll());
+        List<Object> tiers = new ArrayList<>();
+        for (ColumnTier t : c.tiers()) {
+            Map<String, Object> tj = new LinkedHashMap<>();
+            tj.put("levels", t.levels());
+            tj.put("section", t.section().isEmpty() ? null : t.section());
+            tj.put("status", t.status().label());
+            tj.put("weight", us.weightPerLength(t.weight()));
+            tj.put("length", us.length().fromSi(t.length()));
+            List<Object> storeys = new ArrayList<>();
+            for (StoreyLoad s : t.storeys()) {
+                Map<String, Object> sj = new LinkedHashMap<>();
+                sj.put("level", s.level());
+                sj.put("axial", perCase(s.unreduced(), us));
+                sj.put("axialLiveReduced", perCase(s.reduced(), us));
+                sj.put("reductionArea", us.floorArea().fromSi(s.reductionArea()));
+                sj.put("floorsSupported", s.floorsSupported());
+                sj.put("required", us.force().fromSi(s.required()));
+                sj.put("available", us.force().fromSi(s.available()));
+                sj.put("ratio", s.ratio());
+                sj.put("combination", s.combination());
+                storeys.add(sj);
+            }
+            tj.put("storeys", storeys);
+            tiers.add(tj);
+        }
+        j.put("tiers", tiers);
+        return j;
+    }
+
+    /** A short text summary for the terminal. */
+    public static String text(RunResult run, UnitSystem us) {
+        StringBuilder b = new StringBuilder();
+        TakedownResult t = run.takedown();
+        b.append("Baywright design: ").append(run.plan().name()).append(" (").append(run.plan().levels().size())
+                .append(" levels, ").append(run.plan().settings().method().toUpperCase(Locale.ROOT)).append(", ")
+                .append(run.catalogName()).append(")\n");
+        if (t != null) {
+            Map<MemberStatus, Integer> counts = statusCounts(t);
+            b.append("Members and column tiers: ");
+            List<String> parts = new ArrayList<>();
+            counts.forEach((k, v) -> {
+                if (v > 0) {
+                    parts.add(v + " " + k.label());
+                }
+            });
+            b.append(String.join(", ", parts)).append('\n');
+            double w = t.steelWeight();
+            b.append(String.format(Locale.ROOT, "Steel weight: %,.0f %s (%s); floor area %,.0f %s; %.2f %s; highest ratio %.3f%n",
+                    weight(w, us), weightUnit(us), us == UnitSystem.US
+                            ? String.format(Locale.ROOT, "%.1f short tons", weight(w, us) / 2000)
+                            : String.format(Locale.ROOT, "%.1f tonnes", weight(w, us) / 1000),
+                    us.floorArea().fromSi(t.floorArea()), us.floorArea().symbol(),
+                    t.floorArea() > 0 ? weight(w, us) / us.floorArea().fromSi(t.floorArea()) : 0, weightPerAreaUnit(us),
+                    maxRatio(t)));
+            b.append("Equilibrium:");
+            for (Equilibrium e : t.equilibrium()) {
+                b.append(String.format(Locale.ROOT, " %s %s", e.loadCase(), e.holds() ? "ok" : "FAILS"));
+            }
+            b.append('\n');
+        }
+        List<Problem> problems = run.problems();
+        b.append(problems.isEmpty() ? "No problems.\n" : "Problems (" + problems.size() + "):\n");
+        for (Problem p : problems) {
+            b.append("  ").append(p).append('\n');
+        }
+        b.append(Caution.TEXT).append('\n');
+        return b.toString();
+    }
+}

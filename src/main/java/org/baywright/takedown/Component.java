@@ -1,0 +1,52 @@
+package org.baywright.takedown;
+
+import org.baywright.load.LoadCase;
+
+/**
+ * The load components the takedown carries separately from member to member. Live load is split by how
+ * it may be reduced, because each member reduces it by its own tributary area (ASCE 7-16 §4.7): the
+ * reactions passed on are always unreduced.
+ */
+public enum Component {
+    /** Dead and superimposed dead load, with the self-weight of the framing. */
+    D(LoadCase.D),
+    /** Ordinary reducible floor live load (L0 ≤ 100 psf), including a partition allowance carried as live. */
+    L_ORDINARY(LoadCase.L),
+    /** Live load over 100 psf: reduced only for members supporting two or more floors, by at most 20 % (§4.7.3). */
+    L_HEAVY(LoadCase.L),
+    /** Assembly live load of 100 psf or less: not reduced (§4.7.5). */
+    L_ASSEMBLY(LoadCase.L),
+    /** Passenger-vehicle garage live load: 20 % for two or more floors only (§4.7.4). */
+    L_GARAGE(LoadCase.L),
+    /** Live load the user marked not reducible. */
+    L_FIXED(LoadCase.L),
+    /** Roof live load (§4.8). */
+    LR(LoadCase.LR),
+    /** Snow. */
+    S(LoadCase.S);
+
+    private final LoadCase loadCase;
+
+    Component(LoadCase c) {
+        this.loadCase = c;
+    }
+
+    /** The load case of the combinations this component belongs to. */
+    public LoadCase loadCase() {
+        return loadCase;
+    }
+
+    /** True for the live-load components. */
+    public boolean isLive() {
+        return loadCase == LoadCase.L;
+    }
+
+    /** Adds an array of component values into a per-case array (indexed by {@link LoadCase#ordinal()}). */
+    public static double[] byCase(double[] components) {
+        double[] out = new double[LoadCase.values().length];
+        for (Component c : values()) {
+            out[c.loadCase.ordinal()] += components[c.ordinal()];
+        }
+        return out;
+    }
+}

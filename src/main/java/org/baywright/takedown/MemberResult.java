@@ -1,0 +1,43 @@
+package org.baywright.takedown;
+
+import java.util.List;
+import org.baywright.design.BeamDesign;
+import org.baywright.design.MemberStatus;
+import org.baywright.plan.MemberKind;
+import org.baywright.plan.Point;
+
+/**
+ * The design of one floor member in a run.
+ *
+ * @param floor the floor layout id (members of a typical floor are designed once for all its levels)
+ * @param design the design, or null when the member was not designed (unsupported, in a support cycle)
+ * @param tributaryArea the deck area it carries directly, m²
+ * @param reductionArea A_T for live-load reduction: the area whose load it receives, m²
+ * @param kll live-load element factor used (ASCE 7-16 Table 4.7-1)
+ * @param liveFactor reduction factor applied to its ordinary live load (1 = none)
+ * @param startReaction reactions at the start end by component, unreduced, self-weight in D, N
+ * @param endReaction reactions at the end, N
+ * @param startSupport id of what supports the start ("column C-A1", "member G-1"), or empty
+ * @param endSupport id of what supports the end, or empty
+ * @param tributary the tributary polygons for drawing
+ */
+public record MemberResult(String id, String floor, MemberKind kind, Point start, Point end, double length,
+        MemberStatus status, BeamDesign design, double tributaryArea, double reductionArea, double kll,
+        double liveFactor, double[] startReaction, double[] endReaction, String startSupport, String endSupport,
+        List<org.baywright.plan.Polygon> tributary) {
+
+    /** The chosen section designation, or empty. */
+    public String section() {
+        return design == null || design.section() == null ? "" : design.section().designation();
+    }
+
+    /** Steel weight of the member, N (nominal weight × length), 0 when not designed. */
+    public double steelWeight() {
+        return design == null || design.section() == null ? 0 : design.section().weight() * length;
+    }
+
+    /** Highest demand/capacity ratio (NaN when not designed). */
+    public double maxRatio() {
+        return design == null || design.section() == null ? Double.NaN : design.maxRatio();
+    }
+}

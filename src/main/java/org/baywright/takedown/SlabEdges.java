@@ -1,0 +1,152 @@
+package org.baywright.takedown;
+
+import java.util.List;
+import org.baywright.plan.Column;
+import org.baywright.plan.Deck;
+import org.baywright.plan.Floor;
+import org.baywright.plan.Member;
+import org.baywright.plan.Plan;
+import org.baywright.plan.Point;
+import org.baywright.plan.Polygon;
+
+/**
+ * Classifies members and columns for the live-load element factor K_LL of ASCE 7-16 Table 4.7-1 from
+ * the plan's geometry: interior or edge, and whether a cantilever slab extends beyond an edge.
+ *
+ * <p>Method: rays from the member's midpoint along the deck span (both ways), or from the column along
+ * the grid directions where no other column stands; a side with no supporting member (or column)
+ * before the slab edge is an exterior side, and the slab is a cantilever slab on that side when its
+ * edge lies more than the given distance beyond.
+ */
+public final class SlabEdges {
+    private SlabEdges() {
+    }
+
+    /** True for an edge beam or girder with a cantilever slab beyond it (K_LL = 1). */
+    public static boolean isEdgeWithCantilever(Floor floor, List<Member> members, Member m, double cantilever, double tol) {
+        Point mid = new Point((m.start().x() + m.end().x()) / 2, (m.start().y() + m.end().y()) / 2);
+        double angle = spanAngle(floor, mid);
+        double dx = Math.cos(Math.toRadians(angle));
+        double dy = Math.sin(Math.toRadians(angle));
+        double mx = m.end().x() - m.start().x();
+        double my = m.end().y() - m.start().y();
+        double cross = Math.abs(mx * dy - my * dx) / m.length();
+        if (cross < Math.sin(Math.toRadians(1))) {
+            return false; // parallel to the span: carries no deck, so no slab beyond it either
+        }
+        for (int sign = -1; sign <= 1; sign += 2) {
+            double ux = sign * dx;
+            double uy = sign * dy;
+            double edge = rayToPolygon(mid, ux, uy, floor.slabEdge());
+            double nearest = Double.POSITIVE_INFINITY;
+            for (Member o : members) {
+                if (o == m) {
+                    continue;
+                }
+                double t = rayToSegment(mid, ux, uy, o.start(), o.end());
+                if (t > tol && t < nearest) {
+                    nearest = t;
+                }
+            }
+            if (nearest > edge && edge > cantilever) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** Position of a column: K_LL and a description ("interior", "edge", "corner", "… with cantilever slab"). */
+    public static Object[] column(Plan plan, Column c, Floor floor, double cantilever, double tol) {
+        double[][] dirs = {{1, 0}, {-1, 0}, {0, 1}, {0, -1}};
+        int exposed = 0;
+        boolean allCantilever = true;
+        for (double[] d : dirs) {
+            boolean neighbour = false;
+            for (Column o : plan.columns()) {
+                if (o == c) {
+                    continue;
+                }
+                double rx = o.at().x() - c.at().x();
+                double ry = o.at().y() - c.at().y();
+                double along = rx * d[0] + ry * d[1];
+                double across = Math.abs(rx * d[1] - ry * d[0]);
+                if (along > tol && across <= tol) {
+                    neighbour = true;
+                    break;
+                }
+            }
+            if (!neighbour) {
+                exposed++;
+                double edge = floor == null ? 0 : rayToPolygon(c.at(), d[0], d[1], floor.slabEdge());
+                if (!(edge > cantilever)) {
+                    allCantilever = false;
+                }
+            }
+        }
+        if (exposed == 0) {
+            return new Object[] {4.0, "interior"};
+        }
+        String where = exposed == 1 ? "edge" : "corner";
+        if (allCantilever) {
+            return exposed == 1 ? new Object[] {3.0, "edge, with cantilever slab"} : new Object[] {2.0, "corner, with cantilever slab"};
+        }
+        return new Object[] {4.0, where};
+    }
+
+    private static double spanAngle(Floor floor, Point p) {
+        for (Deck d : floor.decks()) {
+            if (contains(d.outline(), p)) {
+                return d.spanAngle();
+            }
+        }
+        return floor.decks().isEmpty() ? 0 : floor.decks().get(0).spanAngle();
+    }
+
+    /** Even-odd point in polygon (points on the boundary may go either way). */
+    static boolean contains(Polygon poly, Point p) {
+        List<Point> v = poly.vertices();
+        boolean in = false;
+        for (int i = 0, j = v.size() - 1; i < v.size(); j = i++) {
+            Point a = v.get(i);
+            Point b = v.get(j);
+            if ((a.y() > p.y()) != (b.y() > p.y())
+                    && p.x() < (b.x() - a.x()) * (p.y() - a.y()) / (b.y() - a.y()) + a.x()) {
+                in = !in;
+            }
+        }
+        return in;
+    }
+
+    /** Distance along the ray to the farthest crossing of the polygon boundary in front (0 if none). */
+    static double rayToPolygon(Point p, double ux, double uy, Polygon poly) {
+        List<Point> v = poly.vertices();
+        double far = 0;
+        double near = Double.POSITIVE_INFINITY;
+        for (int i = 0; i < v.size(); i++) {
+            double t = rayToSegment(p, ux, uy, v.get(i), v.get((i + 1) % v.size()));
+            if (t >= 0 && Double.isFinite(t)) {
+                near = Math.min(near, t);
+                far = Math.max(far, t);
+            }
+        }
+        return Double.isFinite(near) ? near : 0;
+    }
+
+    /** Parameter t ≥ 0 where the ray p + t·u meets segment ab, or +∞. */
+    static double rayToSegment(Point p, double ux, double uy, Point a, Point b) {
+        double ex = b.x() - a.x();
+        double ey = b.y() - a.y();
+        double den = ux * ey - uy * ex;
+        if (Math.abs(den) < 1e-12) {
+            return Double.POSITIVE_INFINITY;
+        }
+        double wx = a.x() - p.x();
+        double wy = a.y() - p.y();
+        double t = (wx * ey - wy * ex) / den;
+        double s = (wx * uy - wy * ux) / den;
+        if (t < -1e-12 || s < -1e-9 || s > 1 + 1e-9) {
+            return Double.POSITIVE_INFINITY;
+        }
+        return Math.max(0, t);
+    }
+}

@@ -1,0 +1,20 @@
+package org.baywright.takedown;
+
+/**
+ * The axial load in a column in the storey below one level.
+ *
+ * @param level the level at the top of the storey
+ * @param unreduced axial force by {@link org.baywright.load.LoadCase} ordinal (D, L, Lr, S), N, with
+ *     live loads unreduced; D includes all self-weight above the storey's base
+ * @param reduced the same with live and roof live reduced (ASCE 7-16 §4.7, §4.8)
+ * @param reductionArea cumulative A_T of the floors above, m²
+ * @param floorsSupported floors with live load supported
+ * @param required required strength (Pu or Pa), N
+ * @param available available strength of the tier's section, N
+ * @param ratio required / available
+ * @param combination governing combination
+ */
+public record StoreyLoad(String level, double storeyHeight, double[] unreduced, double[] reduced,
+        double reductionArea, int floorsSupported, double required, double available, double ratio,
+        String combination) {
+}

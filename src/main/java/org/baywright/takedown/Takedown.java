@@ -1,0 +1,675 @@
+package org.baywright.takedown;
+
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Deque;
+import java.util.EnumMap;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import org.baywright.analysis.DistributedLoad;
+import org.baywright.analysis.PointLoad;
+import org.baywright.analysis.SimpleSpan;
+import org.baywright.analysis.SpanLoad;
+import org.baywright.catalog.Catalog;
+import org.baywright.catalog.Section;
+import org.baywright.design.BeamCriteria;
+import org.baywright.design.BeamDesign;
+import org.baywright.design.BeamDesigner;
+import org.baywright.design.BeamLoads;
+import org.baywright.design.Bracing;
+import org.baywright.design.DeflectionLimits;
+import org.baywright.design.MemberStatus;
+import org.baywright.design.SearchFilter;
+import org.baywright.design.Steel;
+import org.baywright.geometry.FloorTributary;
+import org.baywright.geometry.GeometryProblem;
+import org.baywright.geometry.LineShare;
+import org.baywright.geometry.LoadShare;
+import org.baywright.geometry.MemberTributary;
+import org.baywright.geometry.TributaryAnalysis;
+import org.baywright.geometry.WidthSegment;
+import org.baywright.load.DesignMethod;
+import org.baywright.load.LiveLoadReduction;
+import org.baywright.load.LoadCase;
+import org.baywright.load.ReducibleUse;
+import org.baywright.plan.AreaLoad;
+import org.baywright.plan.Column;
+import org.baywright.plan.DesignSettings;
+import org.baywright.plan.Floor;
+import org.baywright.plan.Framing;
+import org.baywright.plan.Level;
+import org.baywright.plan.LineLoad;
+import org.baywright.plan.LiveLoadUse;
+import org.baywright.plan.LoadValues;
+import org.baywright.plan.Member;
+import org.baywright.plan.MemberKind;
+import org.baywright.plan.Plan;
+import org.baywright.plan.Point;
+import org.baywright.plan.PointLoadItem;
+import org.baywright.plan.Problem;
+import org.baywright.units.Units;
+
+/**
+ * The load takedown of a plan: deck load to the members by tributary area, each member sized before its
+ * reactions pass on (its own weight included), reactions onto the members or columns that support
+ * it, columns stacked level over level to the foundations.
+ *
+ * <p>Order: on each floor layout a support graph is built from positions (a member end is supported
+ * by a column at that point, otherwise by a member passing through it, girders before beams) and
+ * processed in topological order, so every member is designed after all the members framing into it.
+ * A typical floor is designed once and its results serve every level that uses it; columns differ per
+ * level and are summed from the top down.
+ *
+ * <p>Live load: reactions pass on unreduced, per component ({@link Component}); every member and column
+ * reduces by its own A_T and K_LL (ASCE 7-16 §4.7, §4.8). A member's A_T is the deck area whose load
+ * it receives: its own tributary area plus the shares of the members framing into it (the
+ * {@code girderArea = "delivered"} choice), or for girders, optionally, half the bay on each side.
+ *
+ * <p>Invariants checked on every run, as located problems: every member supported; no support cycle;
+ * tributary coverage (from the geometry); equilibrium per load case between everything applied and the
+ * foundation reactions, to {@link Equilibrium#TOLERANCE}.
+ */
+public final class Takedown {
+    /** Coincidence tolerance for supports, m. */
+    public static final double TOLERANCE = 1e-3;
+    /** Distance beyond a member or column at which the slab counts as a cantilever slab, m (1 ft). */
+    public static final double CANTILEVER_SLAB = Units.FT_.toSi(1);
+    /** 100 psf: the live load above which §4.7.3 applies. */
+    public static final double HEAVY_LIVE = Units.PSF.toSi(100);
+
+    private static final int NC = Component.values().length;
+
+    private final Plan plan;
+    private final DesignSettings settings;
+    private final Catalog catalog;
+    private final Steel steel;
+    private final DesignMethod method;
+    private final List<Problem> problems = new ArrayList<>();
+
+    private Takedown(Plan plan, Catalog catalog) {
+        this.plan = plan;
+        this.settings = plan.settings();
+        this.catalog = catalog;
+        this.steel = Steel.A992.fy() == settings.fy() ? Steel.A992 : Steel.A992.withFy(settings.fy());
+        DesignMethod m = DesignMethod.parse(settings.method());
+        this.method = m == null ? DesignMethod.LRFD : m;
+    }
+
+    /** Runs the takedown of a valid plan. */
+    public static TakedownResult run(Plan plan, Catalog catalog) {
+        return new Takedown(plan, catalog).run();
+    }
+
+    /** The per-floor state: members, geometry and results. */
+    private final class FloorRun {
+        final Floor floor;
+        final List<Member> members;
+        final FloorTributary trib;
+        final Map<String, Member> byId = new LinkedHashMap<>();
+        final Map<String, MemberResult> results = new LinkedHashMap<>();
+        /** Column id → component loads delivered by this floor's members. */
+        final Map<String, double[]> columnLoads = new LinkedHashMap<>();
+        /** Column id → A_T delivered. */
+        final Map<String, Double> columnArea = new LinkedHashMap<>();
+        /** Column id → the largest live intensity per component delivered (for §4.7.3). */
+        final Map<String, double[]> columnL0 = new LinkedHashMap<>();
+        double loadedArea;
+
+        FloorRun(Floor floor, Set<String> columnsPresent) {
+            this.floor = floor;
+            this.members = Framing.members(plan, floor);
+            for (Member m : members) {
+                byId.put(m.id(), m);
+            }
+            this.trib = TributaryAnalysis.compute(floor, members, 1e-6);
+            this.loadedArea = trib.loadedArea();
+            for (GeometryProblem g : trib.problems()) {
+                problems.add(new Problem(Problem.Severity.ERROR, g.kind(), "floor " + floor.id(), g.objectId(), g.message(),
+                        g.where()));
+            }
+            design(columnsPresent);
+        }
+
+        private void design(Set<String> columnsPresent) {
+            // 1. supports of every member end
+            Map<String, Support[]> supports = new LinkedHashMap<>();
+            for (Member m : members) {
+                if (m.length() < TOLERANCE) {
+                    problems.add(new Problem(Problem.Severity.ERROR, "zero-length-member", "floor " + floor.id(), m.id(),
+                            "member " + m.id() + " has zero length; its ends must be distinct points", List.of(m.start())));
+                    continue;
+                }
+                supports.put(m.id(), new Support[] {support(m, m.start(), columnsPresent), support(m, m.end(), columnsPresent)});
+            }
+            // 2. topological order: a member after every member framing into it
+            Map<String, List<String>> framingInto = new HashMap<>();
+            Map<String, Integer> pending = new HashMap<>();
+            for (Map.Entry<String, Support[]> e : supports.entrySet()) {
+                pending.putIfAbsent(e.getKey(), 0);
+                for (Support s : e.getValue()) {
+                    if (s.member != null) {
+                        framingInto.computeIfAbsent(s.member, k -> new ArrayList<>()).add(e.getKey());
+                        pending.merge(s.member, 1, Integer::sum);
+                    }
+                }
+            }
+            Deque<String> ready = new ArrayDeque<>();
+            for (String id : supports.keySet()) {
+                if (pending.get(id) == 0) {
+                    ready.add(id);
+                }
+            }
+            List<String> order = new ArrayList<>();
+            while (!ready.isEmpty()) {
+                String id = ready.poll();
+                order.add(id);
+                for (Support s : supports.get(id)) {
+                    if (s.member != null && pending.merge(s.member, -1, Integer::sum) == 0) {
+                        ready.add(s.member);
+                    }
+                }
+            }
+            if (order.size() < supports.size()) {
+                Set<String> cyc = new LinkedHashSet<>(supports.keySet());
+                cyc.removeAll(order);
+                for (String id : cyc) {
+                    Member m = byId.get(id);
+                    problems.add(new Problem(Problem.Severity.ERROR, "support-cycle", "floor " + floor.id(), id,
+                            "member " + id + " is in a cycle of members supporting each other (" + String.join(", ", cyc)
+                                    + "); one of them must bear on a column or another member", List.of(m.start(), m.end())));
+                    results.put(id, notDesigned(m, MemberStatus.UNSUPPORTED, supports.get(id)));
+                }
+            }
+            // 3. design in order, passing reactions on
+            Map<String, List<Incoming>> incoming = new HashMap<>();
+            for (String id : order) {
+                Member m = byId.get(id);
+                Support[] sup = supports.get(id);
+                MemberResult r = designMember(m, sup, incoming.getOrDefault(id, List.of()));
+                results.put(id, r);
+                for (int end = 0; end < 2; end++) {
+                    Support s = sup[end];
+                    double[] rx = end == 0 ? r.startReaction() : r.endReaction();
+                    double area = end == 0 ? r.reductionArea() * startShare(r) : r.reductionArea() * (1 - startShare(r));
+                    if (s.member != null) {
+                        incoming.computeIfAbsent(s.member, k -> new ArrayList<>()).add(new Incoming(id, s.position, rx, area,
+                                r.kind(), l0Of(r)));
+                    } else if (s.column != null) {
+                        double[] acc = columnLoads.computeIfAbsent(s.column, k -> new double[NC]);
+                        for (int c = 0; c < NC; c++) {
+                            acc[c] += rx[c];
+                        }
+                        columnArea.merge(s.column, area, Double::sum);
+                        double[] l0 = columnL0.computeIfAbsent(s.column, k -> new double[NC]);
+                        double[] ml0 = l0Of(r);
+                        for (int c = 0; c < NC; c++) {
+                            l0[c] = Math.max(l0[c], ml0[c]);
+                        }
+                    }
+                }
+            }
+        }
+
+        /** The member's largest live intensity per component, kept on the side for heavy-load checks. */
+        private final Map<String, double[]> memberL0 = new HashMap<>();
+        private final Map<String, Double> memberStartShare = new HashMap<>();
+
+        private double[] l0Of(MemberResult r) {
+            return memberL0.getOrDefault(r.id(), new double[NC]);
+        }
+
+        private double startShare(MemberResult r) {
+            return memberStartShare.getOrDefault(r.id(), 0.5);
+        }
+
+        private MemberResult notDesigned(Member m, MemberStatus status, Support[] sup) {
+            return new MemberResult(m.id(), floor.id(), m.kind(), m.start(), m.end(), m.length(), status, null, 0, 0, 0, 1,
+                    new double[NC], new double[NC], sup == null ? "" : sup[0].describe(), sup == null ? "" : sup[1].describe(),
+                    List.of());
+        }
+
+        private Support support(Member m, Point p, Set<String> columnsPresent) {
+            for (Column c : plan.columns()) {
+                if (columnsPresent.contains(c.id()) && c.at().distance(p) <= TOLERANCE) {
+                    return Support.column(c.id());
+                }
+            }
+            Member best = null;
+            double bestS = 0;
+            for (Member o : members) {
+                if (o == m || o.length() < TOLERANCE) {
+                    continue;
+                }
+                double s = projection(o, p);
+                if (s < -TOLERANCE || s > o.length() + TOLERANCE) {
+                    continue;
+                }
+                Point q = along(o, s);
+                if (q.distance(p) > TOLERANCE) {
+                    continue;
+                }
+                boolean interior = s > TOLERANCE && s < o.length() - TOLERANCE;
+                if (!interior) {
+                    continue; // meeting another member end to end is not a support
+                }
+                if (best == null || (o.kind() == MemberKind.GIRDER && best.kind() != MemberKind.GIRDER)) {
+                    best = o;
+                    bestS = s;
+                }
+            }
+            if (best != null) {
+                return Support.member(best.id(), bestS);
+            }
+            problems.add(new Problem(Problem.Severity.ERROR, "unsupported-member", "floor " + floor.id(), m.id(),
+                    "member " + m.id() + " has no support at (" + fmt(p) + "): no column there and no member passes through"
+                            + " that point", List.of(p)));
+            return Support.NONE;
+        }
+
+        private MemberResult designMember(Member m, Support[] sup, List<Incoming> in) {
+            double span = m.length();
+            if (sup[0] == Support.NONE || sup[1] == Support.NONE) {
+                MemberResult r = notDesigned(m, MemberStatus.UNSUPPORTED, sup);
+                return r;
+            }
+            List<List<SpanLoad>> comp = new ArrayList<>();
+            for (int c = 0; c < NC; c++) {
+                comp.add(new ArrayList<>());
+            }
+            List<SpanLoad> areaFlow = new ArrayList<>();
+            double[] l0 = new double[NC];
+            MemberTributary mt = trib.members().get(m.id());
+            double own = mt == null ? 0 : mt.area();
+            // deck: area loads through the width profiles
+            if (mt != null) {
+                for (WidthSegment w : mt.widths()) {
+                    areaFlow.add(new DistributedLoad(clampS(w.s0(), span), clampS(w.s1(), span), w.w0(), w.w1()));
+                }
+                for (AreaLoad al : floor.areaLoads()) {
+                    List<WidthSegment> segs = mt.areaLoadWidths().get(al.id());
+                    if (segs == null || segs.isEmpty()) {
+                        continue;
+                    }
+                    double[] q = components(al.values(), al.use(), l0);
+                    for (WidthSegment w : segs) {
+                        for (int c = 0; c < NC; c++) {
+                            if (q[c] != 0) {
+                                comp.get(c).add(new DistributedLoad(clampS(w.s0(), span), clampS(w.s1(), span), w.w0() * q[c],
+                                        w.w1() * q[c]));
+                            }
+                        }
+                    }
+                }
+            }
+            // line loads
+            for (LineLoad ll : floor.lineLoads()) {
+                for (LineShare sh : trib.lineShares().getOrDefault(ll.id(), List.of())) {
+                    if (!sh.memberId().equals(m.id())) {
+                        continue;
+                    }
+                    double[] q = components(ll.values(), LiveLoadUse.ORDINARY, null);
+                    for (int c = 0; c < NC; c++) {
+                        if (q[c] != 0) {
+                            comp.get(c).add(new DistributedLoad(clampS(sh.s0(), span), clampS(sh.s1(), span), sh.f0() * q[c],
+                                    sh.f1() * q[c]));
+                        }
+                    }
+                }
+            }
+            // point loads
+            for (PointLoadItem pl : floor.pointLoads()) {
+                for (LoadShare sh : trib.pointShares().getOrDefault(pl.id(), List.of())) {
+                    if (!sh.memberId().equals(m.id())) {
+                        continue;
+                    }
+                    double[] q = components(pl.values(), LiveLoadUse.ORDINARY, null);
+                    for (int c = 0; c < NC; c++) {
+                        if (q[c] != 0) {
+                            comp.get(c).add(new PointLoad(clampS(sh.s(), span), sh.fraction() * q[c]));
+                        }
+                    }
+                }
+            }
+            // reactions of members framing in
+            List<Double> bracePoints = new ArrayList<>();
+            double incomingArea = 0;
+            for (Incoming i : in) {
+                double s = clampS(i.position, span);
+                for (int c = 0; c < NC; c++) {
+                    if (i.reaction[c] != 0) {
+                        comp.get(c).add(new PointLoad(s, i.reaction[c]));
+                    }
+                    l0[c] = Math.max(l0[c], i.l0[c]);
+                }
+                if (i.area != 0) {
+                    areaFlow.add(new PointLoad(s, i.area));
+                }
+                incomingArea += i.area;
+                if (s > TOLERANCE && s < span - TOLERANCE) {
+                    bracePoints.add(s / span);
+                }
+            }
+            memberL0.put(m.id(), l0);
+            SimpleSpan flow = SimpleSpan.of(span, areaFlow);
+            double at = own + incomingArea;
+            memberStartShare.put(m.id(), at > 0 ? flow.leftReaction() / at : 0.5);
+            if (m.kind() == MemberKind.GIRDER && !settings.girderAreaDelivered()) {
+                MemberTributary half = halfBay().members().get(m.id());
+                if (half != null && half.area() > at) {
+                    at = half.area();
+                }
+            }
+            double kll = memberKll(m);
+            // live-load reduction of this member by its own A_T
+            double[] factor = new double[NC];
+            Arrays.fill(factor, 1.0);
+            if (settings.liveLoadReduction()) {
+                for (Component c : Component.values()) {
+                    if (c.isLive() && !comp.get(c.ordinal()).isEmpty()) {
+                        factor[c.ordinal()] = LiveLoadReduction.floor(Math.max(l0[c.ordinal()], 1e-9), kll, at, 1,
+                                use(c), null).factor();
+                    }
+                }
+                if (!comp.get(Component.LR.ordinal()).isEmpty()) {
+                    factor[Component.LR.ordinal()] = LiveLoadReduction.roof(Math.max(l0[Component.LR.ordinal()], 1e-9), at, 0,
+                            null).factor();
+                }
+            }
+            Map<LoadCase, List<SpanLoad>> caseLoads = new EnumMap<>(LoadCase.class);
+            for (Component c : Component.values()) {
+                List<SpanLoad> list = caseLoads.computeIfAbsent(c.loadCase(), k -> new ArrayList<>());
+                double f = factor[c.ordinal()];
+                for (SpanLoad l : comp.get(c.ordinal())) {
+                    list.add(f == 1.0 ? l : l.scaled(f));
+                }
+            }
+            BeamLoads bl = BeamLoads.of(span, caseLoads);
+            Bracing bracing = m.kind() == MemberKind.BEAM || bracePoints.isEmpty() && own > 0 ? Bracing.continuous()
+                    : Bracing.atFractions(bracePoints.stream().distinct().mapToDouble(Double::doubleValue).toArray());
+            if (m.kind() == MemberKind.GIRDER && bracePoints.isEmpty() && own == 0) {
+                bracing = Bracing.equalSegments(1);
+            }
+            BeamCriteria criteria = new BeamCriteria(method, steel, bracing,
+                    new DeflectionLimits(settings.liveDeflection(), settings.totalDeflection()), true);
+            BeamDesigner designer = new BeamDesigner(bl, criteria);
+            BeamDesign d;
+            Optional<String> fixed = m.fixedSection();
+            if (fixed.isPresent()) {
+                Optional<Section> s = catalog.find(fixed.get());
+                if (s.isEmpty()) {
+                    problems.add(new Problem(Problem.Severity.ERROR, "unknown-section", "floor " + floor.id(), m.id(),
+                            "member " + m.id() + ": section " + fixed.get() + " is not in the catalog " + catalog.name()
+                                    + "; the member was sized instead", List.of(m.start(), m.end())));
+                    d = designer.search(catalog, filter(m.kind()));
+                } else {
+                    d = designer.checkFixed(s.get());
+                }
+            } else {
+                d = designer.search(catalog, filter(m.kind()));
+            }
+            if (d.status() == MemberStatus.OVERSTRESSED) {
+                problems.add(new Problem(Problem.Severity.ERROR, "overstressed", "floor " + floor.id(), m.id(),
+                        "member " + m.id() + (d.section() == null ? ": no section is allowed by the filters"
+                                : ": " + (fixed.isPresent() ? "the fixed size " : "no section passes; closest ")
+                                        + d.section().designation() + " at ratio "
+                                        + String.format(java.util.Locale.ROOT, "%.2f", d.maxRatio())),
+                        List.of(m.start(), m.end())));
+            }
+            // reactions by component, unreduced, with self-weight in D
+            double[] r0 = new double[NC];
+            double[] r1 = new double[NC];
+            for (int c = 0; c < NC; c++) {
+                if (comp.get(c).isEmpty()) {
+                    continue;
+                }
+                SimpleSpan s = SimpleSpan.of(span, comp.get(c));
+                r0[c] = s.leftReaction();
+                r1[c] = s.rightReaction();
+            }
+            double sw = d.section() == null ? 0 : d.section().weight() * span / 2;
+            r0[Component.D.ordinal()] += sw;
+            r1[Component.D.ordinal()] += sw;
+            return new MemberResult(m.id(), floor.id(), m.kind(), m.start(), m.end(), span, d.status(), d, own, at, kll,
+                    factor[Component.L_ORDINARY.ordinal()], r0, r1, sup[0].describe(), sup[1].describe(),
+                    mt == null ? List.of() : mt.polygons());
+        }
+
+        private FloorTributary halfBayCache;
+
+        /** Tributary areas with every deck turned 90°: girders then take half the bay on each side. */
+        private FloorTributary halfBay() {
+            if (halfBayCache == null) {
+                List<org.baywright.plan.Deck> decks = new ArrayList<>();
+                List<org.baywright.plan.Deck> src = floor.decks().isEmpty()
+                        ? List.of(new org.baywright.plan.Deck("slab", floor.slabEdge(), 0)) : floor.decks();
+                for (org.baywright.plan.Deck d : src) {
+                    decks.add(new org.baywright.plan.Deck(d.id(), d.outline(), d.spanAngle() + 90));
+                }
+                Floor turned = new Floor(floor.id(), floor.name(), floor.roof(), floor.slabEdge(), decks, floor.members(),
+                        floor.infills(), floor.openings(), floor.areaLoads(), List.of(), List.of());
+                halfBayCache = TributaryAnalysis.compute(turned, members, 1e-6);
+            }
+            return halfBayCache;
+        }
+
+        /** K_LL of a beam or girder (ASCE 7-16 Table 4.7-1): 1 for an edge member with a cantilever slab beyond it, else 2. */
+        private double memberKll(Member m) {
+            return SlabEdges.isEdgeWithCantilever(floor, members, m, CANTILEVER_SLAB, TOLERANCE) ? 1 : 2;
+        }
+    }
+
+    private static ReducibleUse use(Component c) {
+        return switch (c) {
+            case L_ASSEMBLY -> ReducibleUse.ASSEMBLY;
+            case L_GARAGE -> ReducibleUse.GARAGE;
+            case L_FIXED -> ReducibleUse.NOT_REDUCIBLE;
+            default -> ReducibleUse.ORDINARY;
+        };
+    }
+
+    /** Splits load values into components; records the largest live intensity per component in l0. */
+    private double[] components(LoadValues v, LiveLoadUse use, double[] l0) {
+        double[] q = new double[NC];
+        double partition = settings.partitionAsDead() ? 0 : v.partition();
+        q[Component.D.ordinal()] = v.dead() + v.superimposed() + (settings.partitionAsDead() ? v.partition() : 0);
+        double live = v.live() + partition;
+        Component lc = switch (use) {
+            case GARAGE -> Component.L_GARAGE;
+            case NOT_REDUCIBLE -> Component.L_FIXED;
+            case ASSEMBLY -> live > HEAVY_LIVE ? Component.L_HEAVY : Component.L_ASSEMBLY;
+            case ORDINARY -> live > HEAVY_LIVE ? Component.L_HEAVY : Component.L_ORDINARY;
+        };
+        q[lc.ordinal()] = live;
+        q[Component.LR.ordinal()] = v.roofLive();
+        q[Component.S.ordinal()] = v.snow();
+        if (l0 != null) {
+            l0[lc.ordinal()] = Math.max(l0[lc.ordinal()], live);
+            l0[Component.LR.ordinal()] = Math.max(l0[Component.LR.ordinal()], v.roofLive());
+        }
+        return q;
+    }
+
+    private SearchFilter filter(MemberKind kind) {
+        List<String> series = kind == MemberKind.GIRDER ? settings.girderSeries() : settings.beamSeries();
+        double maxD = settings.maxBeamDepth() > 0 ? settings.maxBeamDepth() : Double.POSITIVE_INFINITY;
+        Set<String> s = new LinkedHashSet<>();
+        for (String x : series) {
+            s.add(Section.normalize(x));
+        }
+        return new SearchFilter(0, maxD, s, Set.of());
+    }
+
+    private static double clampS(double s, double span) {
+        return Math.max(0, Math.min(span, s));
+    }
+
+    private static double projection(Member o, Point p) {
+        double dx = o.end().x() - o.start().x();
+        double dy = o.end().y() - o.start().y();
+        double len = Math.hypot(dx, dy);
+        return ((p.x() - o.start().x()) * dx + (p.y() - o.start().y()) * dy) / len;
+    }
+
+    private static Point along(Member o, double s) {
+        double len = o.length();
+        double f = s / len;
+        return new Point(o.start().x() + f * (o.end().x() - o.start().x()), o.start().y() + f * (o.end().y() - o.start().y()));
+    }
+
+    private static String fmt(Point p) {
+        return String.format(java.util.Locale.ROOT, "%.3f m, %.3f m", p.x(), p.y());
+    }
+
+    /** A member's reaction arriving on the member that supports it. */
+    private record Incoming(String from, double position, double[] reaction, double area, MemberKind kind, double[] l0) {
+    }
+
+    /** What supports a member end. */
+    private static final class Support {
+        static final Support NONE = new Support(null, null, 0);
+        final String column;
+        final String member;
+        final double position;
+
+        private Support(String column, String member, double position) {
+            this.column = column;
+            this.member = member;
+            this.position = position;
+        }
+
+        static Support column(String id) {
+            return new Support(id, null, 0);
+        }
+
+        static Support member(String id, double s) {
+            return new Support(null, id, s);
+        }
+
+        String describe() {
+            return column != null ? "column " + column : member != null ? "member " + member : "";
+        }
+    }
+
+    private TakedownResult run() {
+        List<Level> levels = plan.levels();
+        Map<String, Integer> levelIndex = new HashMap<>();
+        for (int i = 0; i < levels.size(); i++) {
+            levelIndex.put(levels.get(i).name(), i);
+        }
+        // columns present at each level
+        List<Set<String>> present = new ArrayList<>();
+        for (int i = 0; i < levels.size(); i++) {
+            Set<String> s = new LinkedHashSet<>();
+            for (Column c : plan.columns()) {
+                int top = c.topLevel() == null || c.topLevel().isEmpty() ? levels.size() - 1
+                        : levelIndex.getOrDefault(c.topLevel(), levels.size() - 1);
+                if (i <= top) {
+                    s.add(c.id());
+                }
+            }
+            present.add(s);
+        }
+        // design each floor layout once per set of columns present
+        Map<String, FloorRun> runs = new LinkedHashMap<>();
+        List<FloorRun> levelRuns = new ArrayList<>();
+        Map<String, String> levelFloors = new LinkedHashMap<>();
+        Map<String, List<MemberResult>> members = new LinkedHashMap<>();
+        for (int i = 0; i < levels.size(); i++) {
+            Level lv = levels.get(i);
+            Optional<Floor> f = plan.floor(lv.floor());
+            if (f.isEmpty()) {
+                problems.add(Problem.error("unknown-floor", "level " + lv.name(), lv.name(), "level " + lv.name()
+                        + " refers to floor layout \"" + lv.floor() + "\", which the plan does not have"));
+                levelRuns.add(null);
+                continue;
+            }
+            String key = f.get().id() + "|" + String.join(",", present.get(i));
+            FloorRun fr = runs.get(key);
+            if (fr == null) {
+                fr = new FloorRun(f.get(), present.get(i));
+                runs.put(key, fr);
+            }
+            levelRuns.add(fr);
+            String resultKey = runs.size() == 1 || key.equals(f.get().id() + "|" + String.join(",", present.get(levels.size() - 1)))
+                    ? f.get().id() : f.get().id() + "@" + lv.name();
+            if (!members.containsKey(resultKey)) {
+                members.put(resultKey, List.copyOf(fr.results.values()));
+            }
+            levelFloors.put(lv.name(), resultKey);
+        }
+        double floorArea = 0;
+        for (FloorRun fr : levelRuns) {
+            if (fr != null) {
+                floorArea += fr.loadedArea;
+            }
+        }
+        List<ColumnResult> columns = new ColumnDesigner(plan, catalog, steel, method, levelRuns.stream()
+                .map(fr -> fr == null ? null : new ColumnDesigner.LevelLoads(fr.columnLoads, fr.columnArea, fr.columnL0,
+                        fr.floor))
+                .toList(), problems).design();
+        List<Equilibrium> eq = equilibrium(levelRuns, columns);
+        return new TakedownResult(members, levelFloors, columns, eq, List.copyOf(problems), floorArea);
+    }
+
+    /** Applied loads per load case against the foundation reactions. */
+    private List<Equilibrium> equilibrium(List<FloorRun> levelRuns, List<ColumnResult> columns) {
+        double[] applied = new double[LoadCase.values().length];
+        for (FloorRun fr : levelRuns) {
+            if (fr == null) {
+                continue;
+            }
+            for (AreaLoad al : fr.floor.areaLoads()) {
+                double area = fr.trib.areaLoadAreas().getOrDefault(al.id(), 0.0);
+                add(applied, components(al.values(), al.use(), null), area);
+            }
+            for (LineLoad ll : fr.floor.lineLoads()) {
+                double len = 0;
+                for (int k = 0; k + 1 < ll.path().size(); k++) {
+                    len += ll.path().get(k).distance(ll.path().get(k + 1));
+                }
+                add(applied, components(ll.values(), LiveLoadUse.ORDINARY, null), len);
+            }
+            for (PointLoadItem p : fr.floor.pointLoads()) {
+                add(applied, components(p.values(), LiveLoadUse.ORDINARY, null), 1);
+            }
+            for (MemberResult m : fr.results.values()) {
+                applied[LoadCase.D.ordinal()] += m.steelWeight();
+            }
+        }
+        double[] reactions = new double[LoadCase.values().length];
+        for (ColumnResult c : columns) {
+            for (ColumnTier t : c.tiers()) {
+                applied[LoadCase.D.ordinal()] += t.weight() * t.length();
+            }
+            for (int k = 0; k < reactions.length; k++) {
+                reactions[k] += c.foundation()[k];
+            }
+        }
+        List<Equilibrium> out = new ArrayList<>();
+        for (LoadCase lc : LoadCase.values()) {
+            Equilibrium e = new Equilibrium(lc.symbol(), applied[lc.ordinal()], reactions[lc.ordinal()]);
+            out.add(e);
+            if (!e.holds()) {
+                problems.add(Problem.error("equilibrium", "load case " + lc.symbol(), "", String.format(java.util.Locale.ROOT,
+                        "load case %s: applied %.6g N but the foundations carry %.6g N (difference %.3g %%); see the"
+                                + " other problems for load that does not reach a column",
+                        lc.symbol(), e.applied(), e.reactions(), 100 * (e.reactions() - e.applied())
+                                / Math.max(Math.abs(e.applied()), 1e-30))));
+            }
+        }
+        return out;
+    }
+
+    private static void add(double[] perCase, double[] components, double scale) {
+        double[] byCase = Component.byCase(components);
+        for (int k = 0; k < perCase.length; k++) {
+            perCase[k] += byCase[k] * scale;
+        }
+    }
+}

@@ -1,0 +1,115 @@
+package org.baywright.demo;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Optional;
+import org.baywright.io.PlanFiles;
+import org.baywright.plan.AreaLoad;
+import org.baywright.plan.Column;
+import org.baywright.plan.Deck;
+import org.baywright.plan.Floor;
+import org.baywright.plan.Infill;
+import org.baywright.plan.Level;
+import org.baywright.plan.LineLoad;
+import org.baywright.plan.LiveLoadUse;
+import org.baywright.plan.LoadValues;
+import org.baywright.plan.Opening;
+import org.baywright.plan.Plan;
+import org.baywright.plan.Point;
+import org.baywright.plan.PointLoadItem;
+import org.baywright.plan.Polygon;
+import org.baywright.plan.RegularPlan;
+import org.baywright.units.Units;
+
+/**
+ * Builds the demo plan {@code plans/harbourview-offices.bay.json}: an invented four-storey office
+ * building used for demonstrations (all numbers are the scenario's own, not from any published
+ * example). Run its main to regenerate the file after a deliberate change.
+ *
+ * <p>Harbourview Offices: 4 × 3 bays of 30 ft × 35 ft, beams north–south at no more than 10 ft;
+ * Level 2 carries a file-storage zone (125 psf) in the north-east bay D–E/3–4; Levels 3 and 4 have a double-height
+ * atrium open in bay B–C/2–3; a balcony overhangs the south face between grid lines B and D,
+ * 8 ft deep at B tapering to 4 ft at D; cladding on every slab edge; the roof carries two rooftop
+ * units.
+ */
+public final class HarbourviewDemo {
+    private HarbourviewDemo() {
+    }
+
+    static double ft(double v) {
+        return Units.FT_.toSi(v);
+    }
+
+    static double psf(double v) {
+        return Units.PSF.toSi(v);
+    }
+
+    public static Plan plan() {
+        Plan base = RegularPlan.generate(new RegularPlan.Spec("Harbourview Offices (demo)", "us",
+                Collections.nCopies(4, ft(30)), Collections.nCopies(3, ft(35)), List.of(ft(14), ft(13), ft(13), ft(13)), true,
+                ft(10), new LoadValues(psf(56), psf(10), psf(50), 0, 0, psf(15)),
+                new LoadValues(psf(56), psf(15), 0, psf(20), 0, 0), new LoadValues(Units.KLF.toSi(0.4), 0, 0, 0, 0, 0)));
+        Floor typical = base.floor("typical").orElseThrow();
+        Floor roof = base.floor("roof").orElseThrow();
+
+        // slab edge with the balcony: south face between B (x = 30 ft) and D (x = 90 ft)
+        Polygon slab = new Polygon(List.of(new Point(0, 0), new Point(ft(30), 0), new Point(ft(30), ft(-8)),
+                new Point(ft(90), ft(-4)), new Point(ft(90), 0), new Point(ft(120), 0), new Point(ft(120), ft(105)),
+                new Point(0, ft(105))));
+        Polygon grid = Polygon.rectangle(0, 0, ft(120), ft(105));
+        Polygon balcony = new Polygon(List.of(new Point(ft(30), ft(-8)), new Point(ft(90), ft(-4)), new Point(ft(90), 0),
+                new Point(ft(30), 0)));
+        List<Deck> decks = List.of(new Deck("DK-main", grid, 0), new Deck("DK-balcony", balcony, 90));
+        List<Point> perimeter = new ArrayList<>(slab.vertices());
+        perimeter.add(slab.vertices().get(0));
+        List<LineLoad> cladding = List.of(new LineLoad("LL-cladding", perimeter, new LoadValues(Units.KLF.toSi(0.4), 0, 0, 0, 0, 0)));
+        LoadValues officeLoads = new LoadValues(psf(56), psf(10), psf(50), 0, 0, psf(15));
+        AreaLoad office = new AreaLoad("AL-office", slab, officeLoads, LiveLoadUse.ORDINARY);
+
+        // Level 2: file storage in bay D–E / 3–4 (light storage, ASCE 7-16 Table 4.3-1: 125 psf, no partitions)
+        Polygon officeL2 = new Polygon(List.of(new Point(0, 0), new Point(ft(30), 0), new Point(ft(30), ft(-8)),
+                new Point(ft(90), ft(-4)), new Point(ft(90), 0), new Point(ft(120), 0), new Point(ft(120), ft(70)),
+                new Point(ft(90), ft(70)), new Point(ft(90), ft(105)), new Point(0, ft(105))));
+        AreaLoad storage = new AreaLoad("AL-storage", Polygon.rectangle(ft(90), ft(70), ft(120), ft(105)),
+                new LoadValues(psf(56), psf(10), psf(125), 0, 0, 0), LiveLoadUse.ORDINARY);
+        Floor level2 = new Floor("level2", "Level 2 (storage zone)", false, slab, decks, typical.members(), typical.infills(),
+                List.of(), List.of(new AreaLoad("AL-office", officeL2, officeLoads, LiveLoadUse.ORDINARY), storage), cladding,
+                List.of());
+
+        // Levels 3–4: atrium open in bay B–C / 2–3; no infill there
+        List<Infill> infills = new ArrayList<>();
+        for (Infill i : typical.infills()) {
+            if (!i.id().equals("IF-BC-23")) {
+                infills.add(i);
+            }
+        }
+        Opening atrium = new Opening("OP-atrium", Polygon.rectangle(ft(30), ft(35), ft(60), ft(70)));
+        Floor atriumFloor = new Floor("typical", "Typical floor with atrium", false, slab, decks, typical.members(), infills,
+                List.of(atrium), List.of(office), cladding, List.of());
+
+        // Roof: two rooftop units (dead load 6 kip each, on the deck)
+        List<PointLoadItem> units = List.of(
+                new PointLoadItem("PL-RTU-1", new Point(ft(45), ft(20)), new LoadValues(Units.KIPS.toSi(6), 0, 0, 0, 0, 0)),
+                new PointLoadItem("PL-RTU-2", new Point(ft(75), ft(85)), new LoadValues(Units.KIPS.toSi(6), 0, 0, 0, 0, 0)));
+        AreaLoad roofLoad = new AreaLoad("AL-roof", slab, new LoadValues(psf(56), psf(15), 0, psf(20), 0, 0), LiveLoadUse.ORDINARY);
+        Floor roofFloor = new Floor("roof", "Roof", true, slab, decks, roof.members(), roof.infills(), List.of(),
+                List.of(roofLoad), cladding, units);
+
+        List<Level> levels = List.of(
+                new Level("Level 2", ft(14), ft(14), "level2"),
+                new Level("Level 3", ft(27), ft(13), "typical"),
+                new Level("Level 4", ft(40), ft(13), "typical"),
+                new Level("Roof", ft(53), ft(13), "roof"));
+        List<Column> columns = new ArrayList<>(base.columns());
+        return new Plan(base.name(), "us", base.settings(), base.grid(), levels, List.of(level2, atriumFloor, roofFloor),
+                columns.stream().map(c -> new Column(c.id(), c.at(), c.grid(), c.topLevel(), Optional.empty())).toList());
+    }
+
+    public static void main(String[] args) throws Exception {
+        Path out = Path.of(args.length > 0 ? args[0] : "plans/harbourview-offices.bay.json");
+        PlanFiles.write(plan(), out);
+        System.out.println("wrote " + out);
+    }
+}

@@ -1,0 +1,170 @@
+package org.baywright.io;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.function.Function;
+import org.baywright.io.PlanDocument.AreaLoadDoc;
+import org.baywright.io.PlanDocument.BayDoc;
+import org.baywright.io.PlanDocument.ColumnDoc;
+import org.baywright.io.PlanDocument.DeckDoc;
+import org.baywright.io.PlanDocument.DeflectionDoc;
+import org.baywright.io.PlanDocument.FloorDoc;
+import org.baywright.io.PlanDocument.GridLineDoc;
+import org.baywright.io.PlanDocument.InfillDoc;
+import org.baywright.io.PlanDocument.LevelDoc;
+import org.baywright.io.PlanDocument.LineLoadDoc;
+import org.baywright.io.PlanDocument.MemberDoc;
+import org.baywright.io.PlanDocument.OpeningDoc;
+import org.baywright.io.PlanDocument.PlanDoc;
+import org.baywright.io.PlanDocument.PointLoadDoc;
+import org.baywright.io.PlanDocument.SettingsDoc;
+import org.baywright.plan.AreaLoad;
+import org.baywright.plan.Column;
+import org.baywright.plan.Deck;
+import org.baywright.plan.DesignSettings;
+import org.baywright.plan.Floor;
+import org.baywright.plan.GridLine;
+import org.baywright.plan.Infill;
+import org.baywright.plan.Level;
+import org.baywright.plan.LineLoad;
+import org.baywright.plan.LoadValues;
+import org.baywright.plan.Member;
+import org.baywright.plan.Opening;
+import org.baywright.plan.Plan;
+import org.baywright.plan.Point;
+import org.baywright.plan.PointLoadItem;
+import org.baywright.plan.Polygon;
+import org.baywright.units.Unit;
+import org.baywright.units.UnitSystem;
+
+/**
+ * Turns a {@link Plan} into the document records of its file, writing every quantity in the plan's
+ * unit system: US as ft (coordinates, lengths), in (depth limit), psf, klf, kip and ksi; SI as m, mm,
+ * kPa, kN/m, kN and MPa. Absent optional values (a fixed section, a zero load) are left out.
+ */
+final class PlanWriter {
+    private final UnitSystem units;
+
+    private PlanWriter(UnitSystem units) {
+        this.units = units;
+    }
+
+    static PlanDoc document(Plan plan) {
+        UnitSystem system = "us".equals(plan.units()) ? UnitSystem.US : "si".equals(plan.units()) ? UnitSystem.SI : null;
+        if (system == null) {
+            throw new IllegalArgumentException("cannot write plan \"" + plan.name() + "\": its units are \"" + plan.units()
+                    + "\"; a plan's units are \"us\" or \"si\"");
+        }
+        return new PlanWriter(system).plan(plan);
+    }
+
+    private PlanDoc plan(Plan p) {
+        return new PlanDoc(PlanFiles.FORMAT, PlanFiles.VERSION, p.name(), p.units(), settings(p.settings()),
+                map(p.grid(), this::gridLine), map(p.levels(), this::level), map(p.floors(), this::floor),
+                map(p.columns(), this::column));
+    }
+
+    private SettingsDoc settings(DesignSettings s) {
+        return new SettingsDoc(s.method().toLowerCase(Locale.ROOT), q(s.fy(), units.stress()),
+                new DeflectionDoc(finite(s.liveDeflection()), finite(s.totalDeflection())), s.beamSeries(), s.girderSeries(),
+                s.columnSeries(), s.maxBeamDepth() == 0 ? null : q(s.maxBeamDepth(), units.smallLength()), s.spliceEvery(),
+                s.liveLoadReduction(), s.partitionAsDead() ? "dead" : "live", s.girderAreaDelivered() ? "delivered" : "half-bay",
+                s.catalog());
+    }
+
+    private GridLineDoc gridLine(GridLine g) {
+        String offset = length(g.offset());
+        return g.axis() == GridLine.Axis.X ? new GridLineDoc(g.label(), offset, null) : new GridLineDoc(g.label(), null, offset);
+    }
+
+    private LevelDoc level(Level l) {
+        return new LevelDoc(l.name(), length(l.elevation()), length(l.storeyHeight()), l.floor());
+    }
+
+    private FloorDoc floor(Floor f) {
+        return new FloorDoc(f.id(), f.name(), f.roof(), polygon(f.slabEdge()), map(f.decks(), this::deck),
+                map(f.members(), this::member), map(f.infills(), this::infill), map(f.openings(), this::opening),
+                map(f.areaLoads(), this::areaLoad), map(f.lineLoads(), this::lineLoad), map(f.pointLoads(), this::pointLoad));
+    }
+
+    private DeckDoc deck(Deck d) {
+        return new DeckDoc(d.id(), polygon(d.outline()), finite(d.spanAngle()));
+    }
+
+    private MemberDoc member(Member m) {
+        return new MemberDoc(m.id(), m.kind().name().toLowerCase(Locale.ROOT), point(m.start()), point(m.end()),
+                m.fixedSection().orElse(null));
+    }
+
+    private InfillDoc infill(Infill n) {
+        boolean byCount = n.count() > 0;
+        return new InfillDoc(n.id(), new BayDoc(List.of(n.x0(), n.x1()), List.of(n.y0(), n.y1())),
+                n.direction().name().toLowerCase(Locale.ROOT), byCount ? n.count() : null,
+                byCount ? null : length(n.maxSpacing()));
+    }
+
+    private OpeningDoc opening(Opening o) {
+        return new OpeningDoc(o.id(), polygon(o.outline()));
+    }
+
+    private AreaLoadDoc areaLoad(AreaLoad a) {
+        String[] v = loads(a.values(), units.areaLoad());
+        return new AreaLoadDoc(a.id(), polygon(a.outline()), v[0], v[1], v[2], v[3], v[4], v[5],
+                a.use().name().toLowerCase(Locale.ROOT).replace('_', '-'));
+    }
+
+    private LineLoadDoc lineLoad(LineLoad l) {
+        String[] v = loads(l.values(), units.lineLoad());
+        return new LineLoadDoc(l.id(), map(l.path(), this::point), v[0], v[1], v[2], v[3], v[4], v[5]);
+    }
+
+    private PointLoadDoc pointLoad(PointLoadItem l) {
+        String[] v = loads(l.values(), units.force());
+        return new PointLoadDoc(l.id(), point(l.at()), v[0], v[1], v[2], v[3], v[4], v[5]);
+    }
+
+    private ColumnDoc column(Column c) {
+        return new ColumnDoc(c.id(), point(c.at()), c.grid(), c.topLevel(), c.fixedSection().orElse(null));
+    }
+
+    /** The six load values; a zero value is left out of the file. */
+    private static String[] loads(LoadValues v, Unit unit) {
+        double[] values = {v.dead(), v.superimposed(), v.live(), v.roofLive(), v.snow(), v.partition()};
+        String[] out = new String[values.length];
+        for (int i = 0; i < values.length; i++) {
+            out[i] = values[i] == 0 ? null : q(values[i], unit);
+        }
+        return out;
+    }
+
+    private List<List<String>> polygon(Polygon p) {
+        return map(p.vertices(), this::point);
+    }
+
+    private List<String> point(Point p) {
+        return List.of(length(p.x()), length(p.y()));
+    }
+
+    private String length(double metres) {
+        return q(metres, units.length());
+    }
+
+    /** A quantity as the file holds it: the number in {@code unit}, then the unit symbol: {@code 30ft}. */
+    static String q(double si, Unit unit) {
+        return Numbers.format(unit.fromSi(si)) + unit.symbol();
+    }
+
+    private static Double finite(double v) {
+        Numbers.format(v); // refuses non-finite values
+        return v;
+    }
+
+    private static <T, R> List<R> map(List<T> list, Function<T, R> f) {
+        List<R> out = new ArrayList<>(list.size());
+        for (T t : list) {
+            out.add(f.apply(t));
+        }
+        return out;
+    }
+}

@@ -289,6 +289,9 @@ public final class Takedown {
             // deck: area loads through the width profiles
             if (mt != null) {
                 for (WidthSegment w : mt.widths()) {
+                    if (clampS(w.s1(), span) - clampS(w.s0(), span) <= 1e-9) {
+                        continue;
+                    }
                     areaFlow.add(new DistributedLoad(clampS(w.s0(), span), clampS(w.s1(), span), w.w0(), w.w1()));
                 }
                 for (AreaLoad al : floor.areaLoads()) {
@@ -298,6 +301,9 @@ public final class Takedown {
                     }
                     double[] q = components(al.values(), al.use(), l0);
                     for (WidthSegment w : segs) {
+                        if (clampS(w.s1(), span) - clampS(w.s0(), span) <= 1e-9) {
+                            continue;
+                        }
                         for (int c = 0; c < NC; c++) {
                             if (q[c] != 0) {
                                 comp.get(c).add(new DistributedLoad(clampS(w.s0(), span), clampS(w.s1(), span), w.w0() * q[c],
@@ -314,6 +320,9 @@ public final class Takedown {
                         continue;
                     }
                     double[] q = components(ll.values(), LiveLoadUse.ORDINARY, null);
+                    if (clampS(sh.s1(), span) - clampS(sh.s0(), span) <= 1e-9) {
+                        continue;
+                    }
                     for (int c = 0; c < NC; c++) {
                         if (q[c] != 0) {
                             comp.get(c).add(new DistributedLoad(clampS(sh.s0(), span), clampS(sh.s1(), span), sh.f0() * q[c],

@@ -16,16 +16,19 @@ import java.util.Map;
  * @param problems located problems, in the order found
  * @param pointShares by point load id: the members that receive it (empty when it is not delivered)
  * @param lineShares by line load id: the members that receive it (empty when it is not delivered)
+ * @param areaLoadAreas by area load id: the area of its outline lying on the loaded deck, m² (what the
+ *     load applies to the structure, independent of how it is shared among members)
  */
 public record FloorTributary(Map<String, MemberTributary> members, double loadedArea, double tributaryArea,
         List<GeometryProblem> problems, Map<String, List<LoadShare>> pointShares,
-        Map<String, List<LineShare>> lineShares) {
+        Map<String, List<LineShare>> lineShares, Map<String, Double> areaLoadAreas) {
 
     public FloorTributary {
         members = Collections.unmodifiableMap(new LinkedHashMap<>(members));
         problems = List.copyOf(problems);
         pointShares = copy(pointShares);
         lineShares = copy(lineShares);
+        areaLoadAreas = Collections.unmodifiableMap(new LinkedHashMap<>(areaLoadAreas));
     }
 
     /** The problems of one kind (see the constants of {@link GeometryProblem}). */

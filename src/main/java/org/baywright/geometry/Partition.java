@@ -29,9 +29,12 @@ final class Partition {
     private final List<Geometry> regions;
     private final Geometry decked;
     private final double loadedArea;
+    private final Geometry loadedUnion;
     private final List<Overlap> overlaps;
 
-    private Partition(List<Geometry> regions, Geometry decked, double loadedArea, List<Overlap> overlaps) {
+    private Partition(List<Geometry> regions, Geometry decked, double loadedArea, List<Overlap> overlaps,
+            Geometry loadedUnion) {
+        this.loadedUnion = loadedUnion;
         this.regions = regions;
         this.decked = decked;
         this.loadedArea = loadedArea;
@@ -51,7 +54,7 @@ final class Partition {
             empty.add(f.createPolygon());
         }
         if (n == 0) {
-            return new Partition(empty, null, 0, List.of());
+            return new Partition(empty, null, 0, List.of(), null);
         }
         List<Geometry> boundaries = new ArrayList<>();
         if (slab != null) {
@@ -83,6 +86,7 @@ final class Partition {
             shared.add(row);
         }
         double loadedArea = 0;
+        List<Geometry> loadedFaces = new ArrayList<>();
         for (Object o : polygonizer.getPolygons()) {
             Polygon face = (Polygon) o;
             if (!(face.getArea() > 0)) {
@@ -110,6 +114,7 @@ final class Partition {
                 continue;
             }
             loaded.get(owner).add(face);
+            loadedFaces.add(face);
             loadedArea += face.getArea();
         }
         List<Geometry> regions = new ArrayList<>();
@@ -127,7 +132,8 @@ final class Partition {
                 }
             }
         }
-        return new Partition(regions, deckedFaces.isEmpty() ? null : union(f, deckedFaces), loadedArea, overlaps);
+        return new Partition(regions, deckedFaces.isEmpty() ? null : union(f, deckedFaces), loadedArea, overlaps,
+                loadedFaces.isEmpty() ? null : union(f, loadedFaces));
     }
 
     /** Union of faces that share edges exactly; falls back to a general overlay should that fail. */
@@ -154,6 +160,11 @@ final class Partition {
     }
 
     /** Area of all loaded regions, m². */
+    /** The loaded deck (decks ∩ slab − openings) as one geometry, or null when empty. */
+    Geometry loaded() {
+        return loadedUnion;
+    }
+
     double loadedArea() {
         return loadedArea;
     }

@@ -97,6 +97,8 @@ public final class TributaryAnalysis {
         private double undeliveredArea;
         private Geometry decksUnion;
         private double loadedArea;
+        private Geometry loadedUnion;
+        private final Map<String, Double> areaLoadAreas = new java.util.LinkedHashMap<>();
 
         Run(Floor floor, List<Member> members, double tolerance) {
             this.floor = floor;
@@ -173,7 +175,7 @@ public final class TributaryAnalysis {
                         "width profiles integrate to %.9g m² but the tributary areas add up to %.9g m²",
                         widthSum, tributary), List.of()));
             }
-            return new FloorTributary(out, loadedArea, tributary, problems, pointShares, lineShares);
+            return new FloorTributary(out, loadedArea, tributary, problems, pointShares, lineShares, areaLoadAreas);
         }
 
         /** Runs a step; an unexpected failure becomes a located problem instead of an exception. */
@@ -270,6 +272,7 @@ public final class TributaryAnalysis {
             Partition parts = Partition.of(shapes, slab, inputs.stream().map(DeckInput::outline).toList(), openings);
             decksUnion = parts.decked();
             loadedArea = parts.loadedArea();
+            loadedUnion = parts.loaded();
             for (Partition.Overlap o : parts.overlaps()) {
                 DeckInput first = inputs.get(o.first());
                 DeckInput later = inputs.get(o.later());
@@ -436,6 +439,7 @@ public final class TributaryAnalysis {
                 return;
             }
             Geometry off = decksUnion == null ? g : shapes.difference(g, decksUnion);
+            areaLoadAreas.put(load.id(), loadedUnion == null ? 0.0 : shapes.frameIntersection(g, loadedUnion).getArea());
             if (shapes.substantial(off)) {
                 problems.add(new GeometryProblem(GeometryProblem.AREA_LOAD_OFF_DECK, load.id(), String.format(
                         "%.4g m² of area load %s lies outside the decks and slab edge; that part is not delivered",

@@ -320,11 +320,13 @@ public final class Takedown {
                         continue;
                     }
                     double[] q = components(ll.values(), LiveLoadUse.ORDINARY, null);
-                    if (clampS(sh.s1(), span) - clampS(sh.s0(), span) <= 1e-9) {
-                        continue;
-                    }
                     for (int c = 0; c < NC; c++) {
-                        if (q[c] != 0) {
+                        if (q[c] == 0) {
+                            continue;
+                        }
+                        if (sh.isConcentrated()) {
+                            comp.get(c).add(new PointLoad(clampS(sh.s0(), span), sh.force(q[c])));
+                        } else if (clampS(sh.s1(), span) - clampS(sh.s0(), span) > 1e-9) {
                             comp.get(c).add(new DistributedLoad(clampS(sh.s0(), span), clampS(sh.s1(), span), sh.f0() * q[c],
                                     sh.f1() * q[c]));
                         }

@@ -253,6 +253,7 @@ public final class RunSummary {
                     us.floorArea().fromSi(t.floorArea()), us.floorArea().symbol(),
                     t.floorArea() > 0 ? weight(w, us) / us.floorArea().fromSi(t.floorArea()) : 0, weightPerAreaUnit(us),
                     maxRatio(t)));
+            b.append(String.format(Locale.ROOT, "Run time: %.0f ms%n", run.milliseconds()));
             b.append("Equilibrium:");
             for (Equilibrium e : t.equilibrium()) {
                 b.append(String.format(Locale.ROOT, " %s %s", e.loadCase(), e.holds() ? "ok" : "FAILS"));

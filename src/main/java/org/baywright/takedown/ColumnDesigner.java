@@ -56,12 +56,9 @@ final class ColumnDesigner {
                 && !IShapeCompression.hasSlenderElement(s, steel.fy(), steel.e(), null));
     }
 
+    /** Designs every column line; lines are independent, so they are designed in parallel. */
     List<ColumnResult> design() {
-        List<ColumnResult> out = new ArrayList<>();
-        for (Column c : plan.columns()) {
-            out.add(design(c));
-        }
-        return out;
+        return plan.columns().parallelStream().map(this::design).toList();
     }
 
     private ColumnResult design(Column c) {

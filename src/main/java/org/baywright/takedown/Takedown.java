@@ -90,7 +90,8 @@ public final class Takedown {
     private final Catalog catalog;
     private final Steel steel;
     private final DesignMethod method;
-    private final List<Problem> problems = new ArrayList<>();
+    /** Problems found, in a list safe for the parallel stages. */
+    private final List<Problem> problems = java.util.Collections.synchronizedList(new ArrayList<>());
 
     private Takedown(Plan plan, Catalog catalog) {
         this.plan = plan;
@@ -586,33 +587,49 @@ public final class Takedown {
             }
             present.add(s);
         }
-        // design each floor layout once per set of columns present
-        Map<String, FloorRun> runs = new LinkedHashMap<>();
-        List<FloorRun> levelRuns = new ArrayList<>();
-        Map<String, String> levelFloors = new LinkedHashMap<>();
-        Map<String, List<MemberResult>> members = new LinkedHashMap<>();
+        // design each floor layout once per set of columns present; distinct layouts in parallel
+        Map<String, Floor> distinct = new LinkedHashMap<>();
+        Map<String, Set<String>> distinctColumns = new HashMap<>();
+        List<String> levelKeys = new ArrayList<>();
         for (int i = 0; i < levels.size(); i++) {
             Level lv = levels.get(i);
             Optional<Floor> f = plan.floor(lv.floor());
             if (f.isEmpty()) {
                 problems.add(Problem.error("unknown-floor", "level " + lv.name(), lv.name(), "level " + lv.name()
                         + " refers to floor layout \"" + lv.floor() + "\", which the plan does not have"));
-                levelRuns.add(null);
+                levelKeys.add(null);
                 continue;
             }
             String key = f.get().id() + "|" + String.join(",", present.get(i));
+            distinct.putIfAbsent(key, f.get());
+            distinctColumns.putIfAbsent(key, present.get(i));
+            levelKeys.add(key);
+        }
+        Map<String, FloorRun> runs = new java.util.concurrent.ConcurrentHashMap<>();
+        distinct.entrySet().parallelStream().forEach(e -> runs.put(e.getKey(),
+                new FloorRun(e.getValue(), distinctColumns.get(e.getKey()))));
+        // result keys: the layout id, or id@level when one layout runs with different columns
+        Map<String, String> resultKeys = new LinkedHashMap<>();
+        Map<String, Integer> perLayout = new HashMap<>();
+        for (String key : distinct.keySet()) {
+            perLayout.merge(distinct.get(key).id(), 1, Integer::sum);
+        }
+        List<FloorRun> levelRuns = new ArrayList<>();
+        Map<String, String> levelFloors = new LinkedHashMap<>();
+        Map<String, List<MemberResult>> members = new LinkedHashMap<>();
+        for (int i = 0; i < levels.size(); i++) {
+            String key = levelKeys.get(i);
+            if (key == null) {
+                levelRuns.add(null);
+                continue;
+            }
             FloorRun fr = runs.get(key);
-            if (fr == null) {
-                fr = new FloorRun(f.get(), present.get(i));
-                runs.put(key, fr);
-            }
             levelRuns.add(fr);
-            String resultKey = runs.size() == 1 || key.equals(f.get().id() + "|" + String.join(",", present.get(levels.size() - 1)))
-                    ? f.get().id() : f.get().id() + "@" + lv.name();
-            if (!members.containsKey(resultKey)) {
-                members.put(resultKey, List.copyOf(fr.results.values()));
-            }
-            levelFloors.put(lv.name(), resultKey);
+            String id = distinct.get(key).id();
+            String resultKey = resultKeys.computeIfAbsent(key, k -> perLayout.get(id) == 1 ? id : id + "@" + levels.get(
+                    levelKeys.indexOf(k)).name());
+            members.putIfAbsent(resultKey, List.copyOf(fr.results.values()));
+            levelFloors.put(levels.get(i).name(), resultKey);
         }
         double floorArea = 0;
         for (FloorRun fr : levelRuns) {

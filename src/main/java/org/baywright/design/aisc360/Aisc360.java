@@ -18,11 +18,13 @@ public final class Aisc360 {
 
     /** Reference text for an equation, e.g. {@code ref("F2-1")} → "AISC 360-16 Eq. F2-1". */
     public static String eq(String number) {
-        return EDITION + " Eq. " + number;
+        return REFS.computeIfAbsent("Eq. " + number, k -> EDITION + " " + k);
     }
+
+    private static final java.util.Map<String, String> REFS = new java.util.concurrent.ConcurrentHashMap<>();
 
     /** Reference text for a clause or table, e.g. {@code clause("Table B4.1b")}. */
     public static String clause(String clause) {
-        return EDITION + " " + clause;
+        return REFS.computeIfAbsent(clause, k -> EDITION + " " + k);
     }
 }

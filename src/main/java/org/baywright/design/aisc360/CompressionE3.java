@@ -24,13 +24,17 @@ public final class CompressionE3 {
     public static double fcr(double fy, double fe, double e, double slenderness, Calc calc) {
         double limit = 4.71 * Math.sqrt(e / fy);
         if (slenderness <= limit) {
-            Calc.branch(calc, "Lc/r = " + ShearG2.fmt(slenderness) + " ≤ 4.71√(E/Fy) = " + ShearG2.fmt(limit)
-                    + " → inelastic buckling", Aisc360.eq("E3-2"));
+            if (calc != null) {
+                calc.branch("Lc/r = " + ShearG2.fmt(slenderness) + " ≤ 4.71√(E/Fy) = " + ShearG2.fmt(limit)
+                        + " → inelastic buckling", Aisc360.eq("E3-2"));
+            }
             return Calc.eq(calc, "Fcr", "0.658^(Fy/Fe)·Fy", Aisc360.eq("E3-2"), Math.pow(0.658, fy / fe) * fy,
                     Quantity.STRESS, Arg.of("Fy", fy, Quantity.STRESS), Arg.of("Fe", fe, Quantity.STRESS));
         }
-        Calc.branch(calc, "Lc/r = " + ShearG2.fmt(slenderness) + " > 4.71√(E/Fy) = " + ShearG2.fmt(limit)
-                + " → elastic buckling", Aisc360.eq("E3-3"));
+        if (calc != null) {
+            calc.branch("Lc/r = " + ShearG2.fmt(slenderness) + " > 4.71√(E/Fy) = " + ShearG2.fmt(limit)
+                    + " → elastic buckling", Aisc360.eq("E3-3"));
+        }
         return Calc.eq(calc, "Fcr", "0.877·Fe", Aisc360.eq("E3-3"), 0.877 * fe, Quantity.STRESS,
                 Arg.of("Fe", fe, Quantity.STRESS));
     }

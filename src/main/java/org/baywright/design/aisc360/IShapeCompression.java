@@ -34,10 +34,12 @@ public final class IShapeCompression {
         double lrw = Slenderness.lambdaRwCompression(e, fy, calc);
         boolean sf = s.bfOver2tf() > lrf;
         boolean sw = s.hOverTw() > lrw;
-        Calc.branch(calc, "bf/2tf = " + CalcFormat.sig(s.bfOver2tf()) + (sf ? " > " : " ≤ ") + "λr = " + CalcFormat.sig(lrf)
+        if (calc != null) {
+            Calc.branch(calc, "bf/2tf = " + CalcFormat.sig(s.bfOver2tf()) + (sf ? " > " : " ≤ ") + "λr = " + CalcFormat.sig(lrf)
                 + "; h/tw = " + CalcFormat.sig(s.hOverTw()) + (sw ? " > " : " ≤ ") + "λr = " + CalcFormat.sig(lrw)
                 + (sf || sw ? " → slender element: E7 applies (not implemented)" : " → no slender elements: E3 applies"),
-                Aisc360.clause("Table B4.1a"));
+                    Aisc360.clause("Table B4.1a"));
+        }
         return sf || sw;
     }
 
@@ -49,10 +51,12 @@ public final class IShapeCompression {
         SectionProperties p = s.props();
         double sx = lcx / p.rx();
         double sy = lcy / p.ry();
-        Calc.eq(calc, "Lcx/rx", "Lcx/rx", Aisc360.clause("E2"), sx, Quantity.NUMBER,
-                Arg.of("Lcx", lcx, Quantity.SPAN_LENGTH), Arg.of("rx", p.rx(), Quantity.SECTION_LENGTH));
-        Calc.eq(calc, "Lcy/ry", "Lcy/ry", Aisc360.clause("E2"), sy, Quantity.NUMBER,
-                Arg.of("Lcy", lcy, Quantity.SPAN_LENGTH), Arg.of("ry", p.ry(), Quantity.SECTION_LENGTH));
+        if (calc != null) {
+            calc.eq("Lcx/rx", "Lcx/rx", Aisc360.clause("E2"), sx, Quantity.NUMBER,
+                    Arg.of("Lcx", lcx, Quantity.SPAN_LENGTH), Arg.of("rx", p.rx(), Quantity.SECTION_LENGTH));
+            calc.eq("Lcy/ry", "Lcy/ry", Aisc360.clause("E2"), sy, Quantity.NUMBER,
+                    Arg.of("Lcy", lcy, Quantity.SPAN_LENGTH), Arg.of("ry", p.ry(), Quantity.SECTION_LENGTH));
+        }
         boolean yGoverns = sy >= sx;
         double lc = yGoverns ? lcy : lcx;
         double r = yGoverns ? p.ry() : p.rx();

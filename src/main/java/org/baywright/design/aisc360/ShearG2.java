@@ -30,8 +30,10 @@ public final class ShearG2 {
     public static double cv1(double hOverTw, double kv, double e, double fy, Calc calc) {
         double limit = 1.10 * Math.sqrt(kv * e / fy);
         if (hOverTw <= limit) {
-            Calc.branch(calc, "h/tw = " + fmt(hOverTw) + " ≤ 1.10√(kv·E/Fy) = " + fmt(limit) + " → Cv1 = 1.0",
-                    Aisc360.eq("G2-3"));
+            if (calc != null) {
+                calc.branch("h/tw = " + fmt(hOverTw) + " ≤ 1.10√(kv·E/Fy) = " + fmt(limit) + " → Cv1 = 1.0",
+                        Aisc360.eq("G2-3"));
+            }
             return 1.0;
         }
         return Calc.eq(calc, "Cv1", "1.10·√(kv·E/Fy)/h_tw", Aisc360.eq("G2-4"), limit / hOverTw, Quantity.NUMBER,

@@ -20,11 +20,28 @@ import org.baywright.plan.Point;
  * @param startSupport id of what supports the start ("column C-A1", "member G-1"), or empty
  * @param endSupport id of what supports the end, or empty
  * @param tributary the tributary polygons for drawing
+ * @param loads the service loads the member was designed for (live loads reduced), for calculation
+ *     sheets; null when not designed
+ * @param criteria the design criteria used; null when not designed
  */
 public record MemberResult(String id, String floor, MemberKind kind, Point start, Point end, double length,
         MemberStatus status, BeamDesign design, double tributaryArea, double reductionArea, double kll,
         double liveFactor, double[] startReaction, double[] endReaction, String startSupport, String endSupport,
-        List<org.baywright.plan.Polygon> tributary) {
+        List<org.baywright.plan.Polygon> tributary, org.baywright.design.BeamLoads loads,
+        org.baywright.design.BeamCriteria criteria) {
+
+    /**
+     * Records the calculation sheet of this member's section, from the same equations the run used.
+     * Returns null when the member was not designed.
+     */
+    public org.baywright.calc.Calc calculation() {
+        if (design == null || design.section() == null || loads == null) {
+            return null;
+        }
+        org.baywright.calc.Calc calc = new org.baywright.calc.Calc();
+        new org.baywright.design.BeamDesigner(loads, criteria).check(design.section(), calc);
+        return calc;
+    }
 
     /** The chosen section designation, or empty. */
     public String section() {

@@ -232,7 +232,7 @@ public final class Takedown {
         private MemberResult notDesigned(Member m, MemberStatus status, Support[] sup) {
             return new MemberResult(m.id(), floor.id(), m.kind(), m.start(), m.end(), m.length(), status, null, 0, 0, 0, 1,
                     new double[NC], new double[NC], sup == null ? "" : sup[0].describe(), sup == null ? "" : sup[1].describe(),
-                    List.of());
+                    List.of(), null, null);
         }
 
         private Support support(Member m, Point p, Set<String> columnsPresent) {
@@ -449,7 +449,7 @@ public final class Takedown {
             r1[Component.D.ordinal()] += sw;
             return new MemberResult(m.id(), floor.id(), m.kind(), m.start(), m.end(), span, d.status(), d, own, at, kll,
                     factor[Component.L_ORDINARY.ordinal()], r0, r1, sup[0].describe(), sup[1].describe(),
-                    mt == null ? List.of() : mt.polygons());
+                    mt == null ? List.of() : mt.polygons(), bl, criteria);
         }
 
         private FloorTributary halfBayCache;

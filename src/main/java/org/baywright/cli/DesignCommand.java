@@ -13,7 +13,9 @@ import org.baywright.io.JsonText;
 import org.baywright.load.DesignMethod;
 import org.baywright.plan.DesignSettings;
 import org.baywright.plan.Plan;
+import org.baywright.report.ColumnSchedule;
 import org.baywright.report.RunSummary;
+import org.baywright.report.Takeoff;
 import org.baywright.run.PlanRun;
 import org.baywright.run.RunResult;
 import org.baywright.units.UnitSystem;
@@ -44,6 +46,15 @@ public final class DesignCommand implements Callable<Integer> {
     @Option(names = "--json", paramLabel = "OUT|-", description = "Write the full result as JSON to a file, or - for standard output.")
     String json;
 
+    @Option(names = "--takeoff", paramLabel = "FILE.csv", description = "Write the steel takeoff (by size, kind and level; totals) as CSV.")
+    Path takeoff;
+
+    @Option(names = "--schedule", paramLabel = "FILE.csv", description = "Write the column schedule (tiers, axial loads per level and case, foundation reactions) as CSV.")
+    Path schedule;
+
+    @Option(names = "--allowance", paramLabel = "PERCENT", defaultValue = "0", description = "Connection and miscellaneous steel allowance added to the takeoff, in percent (default ${DEFAULT-VALUE}), shown separately.")
+    double allowance;
+
     @Override
     public Integer call() throws IOException {
         PrintWriter out = spec.commandLine().getOut();
@@ -67,7 +78,18 @@ public final class DesignCommand implements Callable<Integer> {
         if (us == null) {
             throw new BadInputException("--units: \"" + units + "\" is not a unit system; use us or si");
         }
+        if (!(allowance >= 0 && allowance <= 100)) {
+            throw new BadInputException("--allowance: " + allowance + " is not allowed; use a percentage from 0 to 100");
+        }
         RunResult r = PlanRun.run(plan);
+        if (r.takedown() != null) {
+            if (takeoff != null) {
+                Files.writeString(takeoff, Takeoff.of(r, allowance).csv(us), StandardCharsets.UTF_8);
+            }
+            if (schedule != null) {
+                Files.writeString(schedule, ColumnSchedule.csv(r, us), StandardCharsets.UTF_8);
+            }
+        }
         if (json != null) {
             String text = JsonText.write(RunSummary.json(r, us));
             if (json.equals("-")) {

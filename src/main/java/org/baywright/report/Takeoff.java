@@ -182,7 +182,7 @@ public final class Takeoff {
         String lu = us.length().symbol();
         String wu = RunSummary.weightUnit(us);
         StringBuilder b = new StringBuilder();
-        b.append("group,item,count,length[").append(lu).append("],weight[").append(wu).append("],short tons,tonnes\n");
+        b.append("group,item,count,length[").append(lu).append("],weight[").append(wu).append("],short tons,tonnes,value\n");
         for (Row r : bySection()) {
             row(b, "section", r, us);
         }
@@ -197,10 +197,10 @@ public final class Takeoff {
                 -1, Double.NaN, allowance()), us);
         row(b, "total", new Row("total with allowance", -1, Double.NaN, grandTotal()), us);
         double area = us.floorArea().fromSi(floorArea);
-        b.append("total,floor area [").append(us.floorArea().symbol().replace("²", "2")).append("],,,")
-                .append(fmt(area)).append(",,\n");
-        b.append("total,weight per floor area [").append(us == UnitSystem.US ? "lb/ft2" : "kg/m2").append("],,,")
-                .append(fmt(area > 0 ? RunSummary.weight(grandTotal(), us) / area : 0)).append(",,\n");
+        b.append("total,floor area [").append(us.floorArea().symbol().replace("²", "2")).append("],,,,,,")
+                .append(fmt(area)).append('\n');
+        b.append("total,weight per floor area with allowance [").append(us == UnitSystem.US ? "lb/ft2" : "kg/m2")
+                .append("],,,,,,").append(fmt(area > 0 ? RunSummary.weight(grandTotal(), us) / area : 0)).append('\n');
         return b.toString();
     }
 
@@ -208,7 +208,7 @@ public final class Takeoff {
         b.append(group).append(',').append(csvText(r.item())).append(',').append(r.count() < 0 ? "" : Integer.toString(r.count()))
                 .append(',').append(Double.isNaN(r.length()) ? "" : fmt(us.length().fromSi(r.length()))).append(',')
                 .append(fmt(RunSummary.weight(r.weight(), us))).append(',').append(fmt(shortTons(r.weight()))).append(',')
-                .append(fmt(tonnes(r.weight()))).append('\n');
+                .append(fmt(tonnes(r.weight()))).append(",\n");
     }
 
     static String csvText(String s) {

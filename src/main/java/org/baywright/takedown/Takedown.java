@@ -80,8 +80,12 @@ public final class Takedown {
     public static final double TOLERANCE = 1e-3;
     /** Distance beyond a member or column at which the slab counts as a cantilever slab, m (1 ft). */
     public static final double CANTILEVER_SLAB = Units.FT_.toSi(1);
-    /** 100 psf: the live load above which §4.7.3 applies. */
-    public static final double HEAVY_LIVE = Units.PSF.toSi(100);
+    /**
+     * 100 psf (4.79 kN/m²): the live load above which §4.7.3 applies. The same limit as the reduction
+     * itself uses ({@link LiveLoadReduction#HEAVY_LIVE_LOAD}), so that a load is never classed heavy here
+     * and ordinary there (an assembly load of 4.79 kN/m² would otherwise be reduced as ordinary load).
+     */
+    public static final double HEAVY_LIVE = LiveLoadReduction.HEAVY_LIVE_LOAD;
 
     private static final int NC = Component.values().length;
 
@@ -167,25 +171,39 @@ public final class Takedown {
                 }
             }
             List<String> order = new ArrayList<>();
-            while (!ready.isEmpty()) {
-                String id = ready.poll();
-                order.add(id);
-                for (Support s : supports.get(id)) {
-                    if (s.member != null && pending.merge(s.member, -1, Integer::sum) == 0) {
-                        ready.add(s.member);
+            release(ready, order, supports, pending);
+            if (order.size() < supports.size()) {
+                // left over: the members of support loops, and the members they bear on (directly or not)
+                Set<String> stuck = new LinkedHashSet<>(supports.keySet());
+                stuck.removeAll(order);
+                Map<String, Set<String>> reach = new HashMap<>();
+                for (String id : stuck) {
+                    reach.put(id, bearsOn(id, supports, stuck));
+                }
+                Set<String> inLoop = new LinkedHashSet<>();
+                for (String id : stuck) {
+                    if (reach.get(id).contains(id)) {
+                        inLoop.add(id);
                     }
                 }
-            }
-            if (order.size() < supports.size()) {
-                Set<String> cyc = new LinkedHashSet<>(supports.keySet());
-                cyc.removeAll(order);
-                for (String id : cyc) {
+                for (String id : inLoop) {
                     Member m = byId.get(id);
+                    List<String> loop = inLoop.stream().filter(o -> reach.get(id).contains(o) && reach.get(o).contains(id)).toList();
                     problems.add(new Problem(Problem.Severity.ERROR, "support-cycle", "floor " + floor.id(), id,
-                            "member " + id + " is in a cycle of members supporting each other (" + String.join(", ", cyc)
+                            "member " + id + " is in a cycle of members supporting each other (" + String.join(", ", loop)
                                     + "); one of them must bear on a column or another member", List.of(m.start(), m.end())));
                     results.put(id, notDesigned(m, MemberStatus.UNSUPPORTED, supports.get(id)));
                 }
+                // the members a loop bears on are designed with the load that reaches them, like the member
+                // under an unsupported one; what the loop carries is missing, and the equilibrium shows it
+                for (String id : inLoop) {
+                    for (Support s : supports.get(id)) {
+                        if (s.member != null && !inLoop.contains(s.member) && pending.merge(s.member, -1, Integer::sum) == 0) {
+                            ready.add(s.member);
+                        }
+                    }
+                }
+                release(ready, order, supports, pending);
             }
             // 3. design in order, passing reactions on
             Map<String, List<Incoming>> incoming = new HashMap<>();
@@ -197,7 +215,10 @@ public final class Takedown {
                 for (int end = 0; end < 2; end++) {
                     Support s = sup[end];
                     double[] rx = end == 0 ? r.startReaction() : r.endReaction();
-                    double area = end == 0 ? r.reductionArea() * startShare(r) : r.reductionArea() * (1 - startShare(r));
+                    // the deck area actually delivered passes on (never a girder's half-bay A_T, which
+                    // would count the same deck twice in the columns' A_T)
+                    double delivered = memberDelivered.getOrDefault(id, r.reductionArea());
+                    double area = end == 0 ? delivered * startShare(r) : delivered * (1 - startShare(r));
                     if (s.member != null) {
                         incoming.computeIfAbsent(s.member, k -> new ArrayList<>()).add(new Incoming(id, s.position, rx, area,
                                 r.kind(), l0Of(r)));
@@ -217,9 +238,39 @@ public final class Takedown {
             }
         }
 
+        /** Kahn's algorithm: takes the ready members in turn, releasing those whose framing members are all taken. */
+        private void release(Deque<String> ready, List<String> order, Map<String, Support[]> supports,
+                Map<String, Integer> pending) {
+            while (!ready.isEmpty()) {
+                String id = ready.poll();
+                order.add(id);
+                for (Support s : supports.get(id)) {
+                    if (s.member != null && pending.merge(s.member, -1, Integer::sum) == 0) {
+                        ready.add(s.member);
+                    }
+                }
+            }
+        }
+
+        /** The members among {@code within} that a member bears on, directly or through others. */
+        private Set<String> bearsOn(String id, Map<String, Support[]> supports, Set<String> within) {
+            Set<String> seen = new LinkedHashSet<>();
+            Deque<String> todo = new ArrayDeque<>(List.of(id));
+            while (!todo.isEmpty()) {
+                for (Support s : supports.get(todo.poll())) {
+                    if (s.member != null && within.contains(s.member) && seen.add(s.member)) {
+                        todo.add(s.member);
+                    }
+                }
+            }
+            return seen;
+        }
+
         /** The member's largest live intensity per component, kept on the side for heavy-load checks. */
         private final Map<String, double[]> memberL0 = new HashMap<>();
         private final Map<String, Double> memberStartShare = new HashMap<>();
+        /** The deck area whose load each member receives (its own plus what frames into it), m². */
+        private final Map<String, Double> memberDelivered = new HashMap<>();
 
         private double[] l0Of(MemberResult r) {
             return memberL0.getOrDefault(r.id(), new double[NC]);
@@ -371,6 +422,7 @@ public final class Takedown {
             SimpleSpan flow = SimpleSpan.of(span, areaFlow);
             double at = own + incomingArea;
             memberStartShare.put(m.id(), at > 0 ? flow.leftReaction() / at : 0.5);
+            memberDelivered.put(m.id(), at);
             if (m.kind() == MemberKind.GIRDER && !settings.girderAreaDelivered()) {
                 MemberTributary half = halfBay().members().get(m.id());
                 if (half != null && half.area() > at) {

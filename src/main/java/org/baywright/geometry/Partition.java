@@ -87,8 +87,18 @@ final class Partition {
         }
         double loadedArea = 0;
         List<Geometry> loadedFaces = new ArrayList<>();
+        // JTS hands the faces back in an order (and with holes in an order) that varies between runs;
+        // normalise and sort them so that sums of areas are the same to the last bit every time
+        List<Polygon> faces = new ArrayList<>();
         for (Object o : polygonizer.getPolygons()) {
-            Polygon face = (Polygon) o;
+            faces.add((Polygon) ((Polygon) o).norm());
+        }
+        faces.sort(java.util.Comparator.comparingDouble((Polygon p) -> p.getEnvelopeInternal().getMinX())
+                .thenComparingDouble(p -> p.getEnvelopeInternal().getMinY())
+                .thenComparingDouble(p -> p.getEnvelopeInternal().getMaxX())
+                .thenComparingDouble(p -> p.getEnvelopeInternal().getMaxY())
+                .thenComparingDouble(Polygon::getArea));
+        for (Polygon face : faces) {
             if (!(face.getArea() > 0)) {
                 continue;
             }

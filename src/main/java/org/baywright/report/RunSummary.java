@@ -214,6 +214,7 @@ public final class RunSummary {
                 sj.put("axial", perCase(s.unreduced(), us));
                 sj.put("axialLiveReduced", perCase(s.reduced(), us));
                 sj.put("reductionArea", us.floorArea().fromSi(s.reductionArea()));
+                sj.put("roofArea", us.floorArea().fromSi(s.roofArea()));
                 sj.put("floorsSupported", s.floorsSupported());
                 sj.put("required", us.force().fromSi(s.required()));
                 sj.put("available", us.force().fromSi(s.available()));

@@ -238,7 +238,7 @@ final class ColumnDesigner {
             }
             IShapeCompression.Strength st = IShapeCompression.strength(s, steel.fy(), steel.e(), h, h, null);
             double avail = method.available(st.pn(), ResistanceFactors.PHI_C, ResistanceFactors.OMEGA_C);
-            storeys.add(0, new StoreyLoad(lv.get(i).name(), h, unreduced, reduced, atFloor[i] + atRoof[i], floors[i], req, avail,
+            storeys.add(0, new StoreyLoad(lv.get(i).name(), h, unreduced, reduced, atFloor[i], atRoof[i], floors[i], req, avail,
                     req / avail, gov));
         }
         return new ColumnTier(names(lo, hi), s.designation(), s.weight(), MemberStatus.SIZED, storeys, length, List.copyOf(rejected));

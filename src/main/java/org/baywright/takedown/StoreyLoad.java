@@ -7,7 +7,9 @@ package org.baywright.takedown;
  * @param unreduced axial force by {@link org.baywright.load.LoadCase} ordinal (D, L, Lr, S), N, with
  *     live loads unreduced; D includes all self-weight above the storey's base
  * @param reduced the same with live and roof live reduced (ASCE 7-16 §4.7, §4.8)
- * @param reductionArea cumulative A_T of the floors above, m²
+ * @param reductionArea cumulative A_T of the floors above (roofs excluded: roof live load reduces by
+ *     its own area, §4.8), m²
+ * @param roofArea cumulative area of the roofs above, m² (the A_T of roof live load)
  * @param floorsSupported floors with live load supported
  * @param required required strength (Pu or Pa), N
  * @param available available strength of the tier's section, N
@@ -15,6 +17,11 @@ package org.baywright.takedown;
  * @param combination governing combination
  */
 public record StoreyLoad(String level, double storeyHeight, double[] unreduced, double[] reduced,
-        double reductionArea, int floorsSupported, double required, double available, double ratio,
+        double reductionArea, double roofArea, int floorsSupported, double required, double available, double ratio,
         String combination) {
+
+    /** Everything delivered from above, floors and roofs, m². */
+    public double deliveredArea() {
+        return reductionArea + roofArea;
+    }
 }

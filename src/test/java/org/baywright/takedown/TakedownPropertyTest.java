@@ -256,7 +256,7 @@ class TakedownPropertyTest {
 
         // 4. A_T is conserved: every square foot of loaded deck reaches exactly one column, so the columns'
         //    cumulative A_T at the foundations adds up to the loaded floor area of all levels (openings out)
-        double columnArea = t.columns().stream().mapToDouble(col -> col.tiers().get(0).storeys().get(0).reductionArea()).sum();
+        double columnArea = t.columns().stream().mapToDouble(col -> col.tiers().get(0).storeys().get(0).deliveredArea()).sum();
         checks.add(() -> assertEquals(hand.deckArea(), columnArea, hand.deckSlack() + 1e-9 * hand.deckArea(),
                 "Σ column A_T at the foundations"));
         assertAll(checks);

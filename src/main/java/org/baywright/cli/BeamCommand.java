@@ -121,19 +121,19 @@ public final class BeamCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
-        double l = parse("--span", span, Dimension.LENGTH, true);
+        double l = CliValues.quantity("--span", span, Dimension.LENGTH, true);
         UnitSystem us = unitSystem();
         Map<LoadCase, List<SpanLoad>> loads = new EnumMap<>(LoadCase.class);
         loads.put(LoadCase.D, new ArrayList<>());
         loads.put(LoadCase.L, new ArrayList<>());
         if (dead != null) {
-            double w = parse("--dead", dead, Dimension.LINE_LOAD, false);
+            double w = CliValues.quantity("--dead", dead, Dimension.LINE_LOAD, false);
             if (w > 0) {
                 loads.get(LoadCase.D).add(DistributedLoad.full(l, w));
             }
         }
         if (live != null) {
-            double w = parse("--live", live, Dimension.LINE_LOAD, false);
+            double w = CliValues.quantity("--live", live, Dimension.LINE_LOAD, false);
             if (w > 0) {
                 loads.get(LoadCase.L).add(DistributedLoad.full(l, w));
             }
@@ -150,7 +150,7 @@ public final class BeamCommand implements Callable<Integer> {
         }
         Bracing b = bracing();
         DeflectionLimits dl = new DeflectionLimits(limit("--live-limit", liveLimit), limit("--total-limit", totalLimit));
-        double fyv = parse("--fy", fy, Dimension.STRESS, true);
+        double fyv = CliValues.quantity("--fy", fy, Dimension.STRESS, true);
         Steel steel = fyv == Steel.A992.fy() ? Steel.A992 : Steel.A992.withFy(fyv);
         if (fyv >= steel.e() / 10) {
             throw new BadInputException("--fy: \"" + fy + "\" is not a plausible structural steel yield stress");
@@ -158,8 +158,8 @@ public final class BeamCommand implements Callable<Integer> {
         boolean sw = onOff("--self-weight", selfWeight);
         Catalog cat = Catalogs.load(catalog);
 
-        double minD = minDepth == null ? 0 : parse("--min-depth", minDepth, Dimension.LENGTH, true);
-        double maxD = maxDepth == null ? Double.POSITIVE_INFINITY : parse("--max-depth", maxDepth, Dimension.LENGTH, true);
+        double minD = minDepth == null ? 0 : CliValues.quantity("--min-depth", minDepth, Dimension.LENGTH, true);
+        double maxD = maxDepth == null ? Double.POSITIVE_INFINITY : CliValues.quantity("--max-depth", maxDepth, Dimension.LENGTH, true);
         if (minD > maxD) {
             throw new BadInputException("--min-depth is larger than --max-depth");
         }
@@ -238,36 +238,20 @@ public final class BeamCommand implements Callable<Integer> {
 
     private UnitSystem unitSystem() {
         if (units != null) {
-            UnitSystem u = UnitSystem.parse(units);
-            if (u == null) {
-                throw new BadInputException("--units: \"" + units + "\" is not a unit system; use us or si");
-            }
-            return u;
+            return CliValues.units("--units", units);
         }
         String t = span.trim().toLowerCase(Locale.ROOT);
         return t.endsWith("mm") || t.endsWith("cm") || (t.endsWith("m") && !t.endsWith("in")) ? UnitSystem.SI : UnitSystem.US;
     }
 
-    private static double parse(String option, String text, Dimension d, boolean positive) {
-        try {
-            return positive ? Quantities.parsePositive(option, text, d) : Quantities.parseNonNegative(option, text, d);
-        } catch (UnitParseException e) {
-            throw new BadInputException(e.getMessage(), e);
-        }
-    }
 
     private static PointLoad point(String option, String text, double span) {
         int at = text.indexOf('@');
         if (at < 0 || text.indexOf('@', at + 1) >= 0) {
             throw new BadInputException(option + ": \"" + text + "\" is not a point load; write FORCE@POSITION, e.g. 12kip@10ft or 50kN@3m");
         }
-        double p = parse(option + " (force)", text.substring(0, at), Dimension.FORCE, false);
-        double x;
-        try {
-            x = Quantities.parseNonNegative(option + " (position)", text.substring(at + 1), Dimension.LENGTH);
-        } catch (UnitParseException e) {
-            throw new BadInputException(e.getMessage(), e);
-        }
+        double p = CliValues.quantity(option + " (force)", text.substring(0, at), Dimension.FORCE, false);
+        double x = CliValues.quantity(option + " (position)", text.substring(at + 1), Dimension.LENGTH, false);
         if (x > span * (1 + 1e-12)) {
             throw new BadInputException(option + ": \"" + text + "\": the position is beyond the span; it must lie between 0 and the span from the left support");
         }

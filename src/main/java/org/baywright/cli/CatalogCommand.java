@@ -49,11 +49,7 @@ public final class CatalogCommand implements Runnable {
         if (text == null) {
             return UnitSystem.US;
         }
-        UnitSystem u = UnitSystem.parse(text);
-        if (u == null) {
-            throw new BadInputException("--units: \"" + text + "\" is not a unit system; use us or si");
-        }
-        return u;
+        return CliValues.units("--units", text);
     }
 
     /** {@code catalog list}. */

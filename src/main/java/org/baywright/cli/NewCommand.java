@@ -85,20 +85,17 @@ public final class NewCommand implements Callable<Integer> {
         if (!along.equals("x") && !along.equals("y")) {
             throw new BadInputException("--beams-along: \"" + beamsAlong + "\" is not allowed; use x or y");
         }
-        double spacing = parse("--beam-spacing", beamSpacing, Dimension.LENGTH, true);
-        double d = parse("--dead", dead, Dimension.AREA_LOAD, false);
-        double sd = parse("--superimposed", superimposed, Dimension.AREA_LOAD, false);
-        double l = parse("--live", live, Dimension.AREA_LOAD, false);
-        double p = parse("--partition", partition, Dimension.AREA_LOAD, false);
-        double lr = parse("--roof-live", roofLive, Dimension.AREA_LOAD, false);
-        double s = parse("--snow", snow, Dimension.AREA_LOAD, false);
-        double edge = parse("--edge-load", edgeLoad, Dimension.LINE_LOAD, false);
+        double spacing = CliValues.quantity("--beam-spacing", beamSpacing, Dimension.LENGTH, true);
+        double d = CliValues.quantity("--dead", dead, Dimension.AREA_LOAD, false);
+        double sd = CliValues.quantity("--superimposed", superimposed, Dimension.AREA_LOAD, false);
+        double l = CliValues.quantity("--live", live, Dimension.AREA_LOAD, false);
+        double p = CliValues.quantity("--partition", partition, Dimension.AREA_LOAD, false);
+        double lr = CliValues.quantity("--roof-live", roofLive, Dimension.AREA_LOAD, false);
+        double s = CliValues.quantity("--snow", snow, Dimension.AREA_LOAD, false);
+        double edge = CliValues.quantity("--edge-load", edgeLoad, Dimension.LINE_LOAD, false);
         UnitSystem us;
         if (units != null) {
-            us = UnitSystem.parse(units);
-            if (us == null) {
-                throw new BadInputException("--units: \"" + units + "\" is not a unit system; use us or si");
-            }
+            us = CliValues.units("--units", units);
         } else {
             String t = baysX.trim().toLowerCase(Locale.ROOT);
             us = t.endsWith("mm") || (t.endsWith("m") && !t.endsWith("in")) ? UnitSystem.SI : UnitSystem.US;
@@ -120,11 +117,4 @@ public final class NewCommand implements Callable<Integer> {
         }
     }
 
-    private static double parse(String option, String text, Dimension d, boolean positive) {
-        try {
-            return positive ? Quantities.parsePositive(option, text, d) : Quantities.parseNonNegative(option, text, d);
-        } catch (UnitParseException e) {
-            throw new BadInputException(e.getMessage(), e);
-        }
-    }
 }

@@ -17,7 +17,6 @@ import org.baywright.load.DesignMethod;
 import org.baywright.load.LiveLoadReduction;
 import org.baywright.load.LoadCase;
 import org.baywright.load.LoadCombination;
-import org.baywright.load.ReducibleUse;
 import org.baywright.plan.Column;
 import org.baywright.plan.Floor;
 import org.baywright.plan.Level;
@@ -209,7 +208,7 @@ final class ColumnDesigner {
                 for (Component k : Component.values()) {
                     if (k.isLive() && comp[k.ordinal()] != 0) {
                         reducedComp[k.ordinal()] *= LiveLoadReduction.floor(Math.max(l0[i][k.ordinal()], 1e-9), kll, atFloor[i],
-                                Math.max(1, floors[i]), use(k), null).factor();
+                                Math.max(1, floors[i]), k.reducibleUse(), null).factor();
                     }
                 }
                 if (comp[Component.LR.ordinal()] != 0) {
@@ -244,12 +243,4 @@ final class ColumnDesigner {
         return new ColumnTier(names(lo, hi), s.designation(), s.weight(), MemberStatus.SIZED, storeys, length, List.copyOf(rejected));
     }
 
-    private static ReducibleUse use(Component c) {
-        return switch (c) {
-            case L_ASSEMBLY -> ReducibleUse.ASSEMBLY;
-            case L_GARAGE -> ReducibleUse.GARAGE;
-            case L_FIXED -> ReducibleUse.NOT_REDUCIBLE;
-            default -> ReducibleUse.ORDINARY;
-        };
-    }
 }

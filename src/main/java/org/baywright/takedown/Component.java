@@ -36,6 +36,16 @@ public enum Component {
         return loadCase;
     }
 
+    /** How live-load reduction treats this component (meaningful for live components). */
+    public org.baywright.load.ReducibleUse reducibleUse() {
+        return switch (this) {
+            case L_ASSEMBLY -> org.baywright.load.ReducibleUse.ASSEMBLY;
+            case L_GARAGE -> org.baywright.load.ReducibleUse.GARAGE;
+            case L_FIXED -> org.baywright.load.ReducibleUse.NOT_REDUCIBLE;
+            default -> org.baywright.load.ReducibleUse.ORDINARY;
+        };
+    }
+
     /** True for the live-load components. */
     public boolean isLive() {
         return loadCase == LoadCase.L;

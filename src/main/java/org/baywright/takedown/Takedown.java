@@ -37,7 +37,6 @@ import org.baywright.geometry.WidthSegment;
 import org.baywright.load.DesignMethod;
 import org.baywright.load.LiveLoadReduction;
 import org.baywright.load.LoadCase;
-import org.baywright.load.ReducibleUse;
 import org.baywright.plan.AreaLoad;
 import org.baywright.plan.Column;
 import org.baywright.plan.DesignSettings;
@@ -437,7 +436,7 @@ public final class Takedown {
                 for (Component c : Component.values()) {
                     if (c.isLive() && !comp.get(c.ordinal()).isEmpty()) {
                         factor[c.ordinal()] = LiveLoadReduction.floor(Math.max(l0[c.ordinal()], 1e-9), kll, at, 1,
-                                use(c), null).factor();
+                                c.reducibleUse(), null).factor();
                     }
                 }
                 if (!comp.get(Component.LR.ordinal()).isEmpty()) {
@@ -528,14 +527,6 @@ public final class Takedown {
         }
     }
 
-    private static ReducibleUse use(Component c) {
-        return switch (c) {
-            case L_ASSEMBLY -> ReducibleUse.ASSEMBLY;
-            case L_GARAGE -> ReducibleUse.GARAGE;
-            case L_FIXED -> ReducibleUse.NOT_REDUCIBLE;
-            default -> ReducibleUse.ORDINARY;
-        };
-    }
 
     /** Splits load values into components; records the largest live intensity per component in l0. */
     private double[] components(LoadValues v, LiveLoadUse use, double[] l0) {

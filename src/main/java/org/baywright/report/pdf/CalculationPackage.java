@@ -84,7 +84,7 @@ public final class CalculationPackage {
         }
         Summaries.problems(cx);
         f.close();
-        collectTitles(doc, f.titles(), 0, titles);
+        collectTitles(doc, f.titles(), titles);
 
         // contents: laid out once to count its pages, then again with the final page numbers
         List<PDPage> body = new ArrayList<>();
@@ -118,11 +118,12 @@ public final class CalculationPackage {
         return new PackageSummary(all.size(), entries, sheets[0], sheets[1]);
     }
 
-    private static void collectTitles(PDDocument doc, List<String> flowTitles, int from, Map<COSDictionary, String> out) {
+    /** The running title of each page the body flow started, keyed by the page's dictionary. */
+    private static void collectTitles(PDDocument doc, List<String> flowTitles, Map<COSDictionary, String> out) {
         int i = 0;
         for (PDPage p : doc.getPages()) {
-            if (i >= from && i - from < flowTitles.size()) {
-                out.put(p.getCOSObject(), flowTitles.get(i - from));
+            if (i < flowTitles.size()) {
+                out.put(p.getCOSObject(), flowTitles.get(i));
             }
             i++;
         }
@@ -151,7 +152,7 @@ public final class CalculationPackage {
                 + (cx.options.project().revision().isEmpty() ? "" : "  ·  rev. " + cx.options.project().revision());
         for (int i = 0; i < n; i++) {
             PDPage p = pages.get(i);
-            PageDecorator d = new PageDecorator(doc, fonts, p);
+            PageDecorator d = new PageDecorator(fonts);
             try (PDPageContentStream cs = new PDPageContentStream(doc, p, PDPageContentStream.AppendMode.APPEND, true, true)) {
                 d.cs = cs;
                 float w = p.getMediaBox().getWidth();
@@ -186,7 +187,7 @@ public final class CalculationPackage {
         final Fonts fonts;
         PDPageContentStream cs;
 
-        PageDecorator(PDDocument doc, Fonts fonts, PDPage page) {
+        PageDecorator(Fonts fonts) {
             this.fonts = fonts;
         }
 

@@ -1,7 +1,6 @@
 package org.baywright.report.pdf;
 
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
 import org.baywright.calc.Calc;
 import org.baywright.calc.CalcLine;
@@ -58,7 +57,7 @@ final class ColumnPages {
                 .right((lrfd ? "Pu" : "Pa") + " [" + fu + "]", 7).right((lrfd ? "φc·Pn" : "Pn/Ωc") + " [" + fu + "]", 7)
                 .right("Ratio", 5.5f).left("Combination", 13).fontSize(6.8f);
         for (ColumnResult c : cx.run.takedown().columns()) {
-            t.group(c.id() + "  (grid " + c.grid() + ", " + c.position() + ", K_LL = " + org.baywright.calc.CalcFormat.sig(c.kll()) + ")");
+            t.group(c.id() + "  (" + (c.grid().isEmpty() ? "" : "grid " + c.grid() + ", ") + c.position() + ", K_LL = " + org.baywright.calc.CalcFormat.sig(c.kll()) + ")");
             for (int ti = c.tiers().size() - 1; ti >= 0; ti--) {
                 ColumnTier tier = c.tiers().get(ti);
                 for (int si = tier.storeys().size() - 1; si >= 0; si--) {

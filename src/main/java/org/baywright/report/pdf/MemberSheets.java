@@ -93,7 +93,7 @@ final class MemberSheets {
     /** The sheet title as printed in the heading and in the contents. */
     static String title(String number, MemberResult m, int count, UnitSystem us) {
         String k = kind(m.kind(), count);
-        return number + "  " + m.section() + " " + k + ", span " + Fmt.v(m.length(), Quantity.SPAN_LENGTH, us)
+        return number + " " + m.section() + " " + k + ", span " + Fmt.v(m.length(), Quantity.SPAN_LENGTH, us)
                 + (count > 1 ? " (" + count + " members)" : " (" + m.id() + ")");
     }
 
@@ -288,9 +288,8 @@ final class MemberSheets {
         List<String> lines = f.wrap(s, main, w, w - (hang - indent));
         List<String> refs = ref.isEmpty() ? List.of() : f.wrap(f.smallGrey, ref, REF_COLUMN - 6);
         int n = Math.max(lines.size(), refs.size());
-        f.ensure(Math.min(n, 3) * s.leading());
+        f.ensure(n * s.leading()); // a line is never split across pages
         for (int k = 0; k < n; k++) {
-            f.ensure(s.leading());
             float base = f.y() - s.size();
             if (k < lines.size()) {
                 f.text(s, f.left() + (k == 0 ? indent : hang), base, lines.get(k));
@@ -308,7 +307,6 @@ final class MemberSheets {
         PageFlow f = cx.flow;
         UnitSystem us = cx.us;
         f.heading3("Checks of " + d.section().designation(), 50);
-        boolean lrfd = true;
         Table t = new Table().left("Check", 16).left("Combination", 15).right("Demand", 13).right("Capacity", 13)
                 .right("Ratio", 8).left("Where", 20).left("Clause", 18).fontSize(7f);
         for (Check c : d.checks()) {

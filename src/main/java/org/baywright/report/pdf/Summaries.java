@@ -14,7 +14,6 @@ import org.baywright.plan.LoadValues;
 import org.baywright.plan.Point;
 import org.baywright.plan.PointLoadItem;
 import org.baywright.plan.Problem;
-import org.baywright.report.RunSummary;
 import org.baywright.report.pdf.PageFlow.Rgb;
 import org.baywright.takedown.ColumnResult;
 import org.baywright.takedown.ColumnTier;

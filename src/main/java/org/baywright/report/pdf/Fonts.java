@@ -31,16 +31,20 @@ final class Fonts {
     }
 
     static Fonts load(PDDocument doc) throws IOException {
-        PDFont regular = load(doc, REGULAR);
+        return load(doc, Fonts.class.getClassLoader());
+    }
+
+    /** Loads the faces from the resources of {@code cl}. */
+    static Fonts load(PDDocument doc, ClassLoader cl) throws IOException {
+        PDFont regular = load(doc, cl, REGULAR);
         if (regular == null) {
             throw new IOException("the font resource " + REGULAR + " is missing from the class path");
         }
-        PDFont bold = load(doc, BOLD);
+        PDFont bold = load(doc, cl, BOLD);
         return new Fonts(regular, bold == null ? regular : bold);
     }
 
-    private static PDFont load(PDDocument doc, String resource) throws IOException {
-        ClassLoader cl = Fonts.class.getClassLoader();
+    private static PDFont load(PDDocument doc, ClassLoader cl, String resource) throws IOException {
         byte[] bytes;
         try (InputStream in = cl.getResourceAsStream(resource)) {
             if (in == null) {

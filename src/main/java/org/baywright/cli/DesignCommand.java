@@ -14,6 +14,9 @@ import org.baywright.load.DesignMethod;
 import org.baywright.plan.DesignSettings;
 import org.baywright.plan.Plan;
 import org.baywright.report.ColumnSchedule;
+import org.baywright.report.pdf.CalculationPackage;
+import org.baywright.report.pdf.PackageOptions;
+import org.baywright.report.pdf.ProjectInfo;
 import org.baywright.report.RunSummary;
 import org.baywright.report.Takeoff;
 import org.baywright.run.PlanRun;
@@ -45,6 +48,9 @@ public final class DesignCommand implements Callable<Integer> {
 
     @Option(names = "--json", paramLabel = "OUT|-", description = "Write the full result as JSON to a file, or - for standard output.")
     String json;
+
+    @Option(names = "--report", paramLabel = "FILE.pdf", description = "Write the calculation package (PDF): design basis, loads, a sheet per member group, column schedule, foundations, takeoff.")
+    Path report;
 
     @Option(names = "--takeoff", paramLabel = "FILE.csv", description = "Write the steel takeoff (by size, kind and level; totals) as CSV.")
     Path takeoff;
@@ -88,6 +94,11 @@ public final class DesignCommand implements Callable<Integer> {
             }
             if (schedule != null) {
                 Files.writeString(schedule, ColumnSchedule.csv(r, us), StandardCharsets.UTF_8);
+            }
+            if (report != null) {
+                var summary = CalculationPackage.write(r, report, PackageOptions.of(us)
+                        .withProject(ProjectInfo.named(plan.name(), java.time.LocalDate.now())).withAllowance(allowance));
+                err.println("wrote " + report + ": " + summary.pages() + " pages");
             }
         }
         if (json != null) {

@@ -14,6 +14,9 @@ import org.baywright.load.DesignMethod;
 import org.baywright.plan.DesignSettings;
 import org.baywright.plan.Plan;
 import org.baywright.report.ColumnSchedule;
+import org.baywright.report.drawing.DrawingExport;
+import org.baywright.report.drawing.DrawingOptions;
+import org.baywright.report.drawing.ReactionMode;
 import org.baywright.report.pdf.CalculationPackage;
 import org.baywright.report.pdf.PackageOptions;
 import org.baywright.report.pdf.ProjectInfo;
@@ -51,6 +54,15 @@ public final class DesignCommand implements Callable<Integer> {
 
     @Option(names = "--report", paramLabel = "FILE.pdf", description = "Write the calculation package (PDF): design basis, loads, a sheet per member group, column schedule, foundations, takeoff.")
     Path report;
+
+    @Option(names = "--drawing", paramLabel = "FILE.svg|png|pdf", description = "Write the framing plan of a level (the format follows the extension).")
+    Path drawing;
+
+    @Option(names = "--level", paramLabel = "NAME", description = "The level drawn by --drawing (default: the first level).")
+    String level;
+
+    @Option(names = "--reactions", paramLabel = "factored|service", defaultValue = "factored", description = "End reactions on the drawing (default ${DEFAULT-VALUE}).")
+    String reactions;
 
     @Option(names = "--takeoff", paramLabel = "FILE.csv", description = "Write the steel takeoff (by size, kind and level; totals) as CSV.")
     Path takeoff;
@@ -94,6 +106,26 @@ public final class DesignCommand implements Callable<Integer> {
             }
             if (schedule != null) {
                 Files.writeString(schedule, ColumnSchedule.csv(r, us), StandardCharsets.UTF_8);
+            }
+            if (drawing != null) {
+                String lv = level != null ? level : plan.levels().get(0).name();
+                if (plan.levels().stream().noneMatch(l -> l.name().equals(lv))) {
+                    throw new BadInputException("--level: \"" + lv + "\" is not a level of the plan; levels: "
+                            + String.join(", ", plan.levels().stream().map(org.baywright.plan.Level::name).toList()));
+                }
+                DrawingOptions opts = DrawingOptions.defaults().withUnits(us);
+                opts = switch (reactions.trim().toLowerCase(Locale.ROOT)) {
+                    case "factored" -> opts.withReactions(ReactionMode.FACTORED);
+                    case "service" -> opts.withReactions(ReactionMode.SERVICE);
+                    default -> throw new BadInputException("--reactions: \"" + reactions + "\" is not allowed; use factored or service");
+                };
+                opts = opts.withDate(java.time.LocalDate.now().toString());
+                try {
+                    DrawingExport.write(r, lv, drawing, opts);
+                } catch (IllegalArgumentException e) {
+                    throw new BadInputException("--drawing: " + e.getMessage(), e);
+                }
+                err.println("wrote " + drawing + ": framing plan of " + lv);
             }
             if (report != null) {
                 var summary = CalculationPackage.write(r, report, PackageOptions.of(us)

@@ -80,6 +80,37 @@ class PlanCommandsTest {
     }
 
     @Test
+    void oneCommandWritesTheDeliverables(@TempDir Path dir) throws Exception {
+        Path plan = dir.resolve("p.bay.json");
+        assertEquals(0, BeamCommandTest.run("new", "--bays-x", "2@30ft", "--bays-y", "2@30ft", "--levels", "2@13ft", "-o",
+                plan.toString()).code());
+        Path pdf = dir.resolve("calc.pdf");
+        Path svg = dir.resolve("level.svg");
+        Path png = dir.resolve("level.png");
+        Path csv = dir.resolve("takeoff.csv");
+        Path cols = dir.resolve("columns.csv");
+        BeamCommandTest.Run d = BeamCommandTest.run("design", plan.toString(), "--report", pdf.toString(), "--drawing",
+                svg.toString(), "--level", "Roof", "--takeoff", csv.toString(), "--schedule", cols.toString(), "--allowance", "10");
+        assertEquals(0, d.code(), d.err());
+        assertTrue(Files.size(pdf) > 10_000);
+        assertTrue(Files.readString(svg).contains("<svg"), "svg");
+        assertTrue(Files.readString(csv).startsWith("group,item,count,length[ft],weight[lb]"));
+        assertTrue(Files.readString(cols).startsWith("column,grid,position,level,section"));
+        try (var doc = org.apache.pdfbox.Loader.loadPDF(pdf.toFile())) {
+            String text = new org.apache.pdfbox.text.PDFTextStripper().getText(doc);
+            assertTrue(text.contains("AISC 360-16"), "design basis");
+            assertTrue(text.contains("licensed"), "caution");
+        }
+        assertEquals(0, BeamCommandTest.run("design", plan.toString(), "--drawing", png.toString()).code());
+        assertTrue(Files.size(png) > 10_000);
+        BeamCommandTest.Run badLevel = BeamCommandTest.run("design", plan.toString(), "--drawing", svg.toString(), "--level", "Attic");
+        assertEquals(2, badLevel.code());
+        assertTrue(badLevel.err().contains("Level 2"), badLevel.err());
+        BeamCommandTest.Run badExt = BeamCommandTest.run("design", plan.toString(), "--drawing", dir.resolve("x.doc").toString());
+        assertEquals(2, badExt.code(), badExt.err());
+    }
+
+    @Test
     void theDemoPlanRunsWithoutProblems() throws Exception {
         Path demo = Path.of("plans", "harbourview-offices.bay.json");
         BeamCommandTest.Run d = BeamCommandTest.run("design", demo.toString(), "--json", "-");

@@ -37,7 +37,7 @@ public final class CheckCommand implements Callable<Integer> {
             if (p.kind().equals("overstressed")) {
                 continue; // sizing is for 'design'; check reports the framing
             }
-            err.println(file + ": " + p);
+            err.println(ProblemLines.line(file, p));
             if (p.severity() == Problem.Severity.ERROR) {
                 errors++;
             }

@@ -81,6 +81,9 @@ public final class DesignCommand implements Callable<Integer> {
         if (plan == null) {
             return BaywrightCommand.EXIT_BAD_INPUT;
         }
+        PlanInput.checkOutput("--json", json == null || json.equals("-") ? null : Path.of(json), file);
+        PlanInput.checkOutput("--takeoff", takeoff, file);
+        PlanInput.checkOutput("--schedule", schedule, file);
         if (method != null) {
             DesignMethod m = DesignMethod.parse(method);
             if (m == null) {
@@ -143,10 +146,10 @@ public final class DesignCommand implements Callable<Integer> {
         }
         if (json == null || !json.equals("-")) {
             out.print(RunSummary.text(r, us));
-        } else {
-            for (org.baywright.plan.Problem p : r.problems()) {
-                err.println(file + ": " + p);
-            }
+        }
+        out.flush();
+        for (org.baywright.plan.Problem p : r.problems()) {
+            err.println(ProblemLines.line(file, p)); // also in the summary; standard error has them one per line
         }
         out.flush();
         if (r.takedown() == null) {

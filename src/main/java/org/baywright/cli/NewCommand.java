@@ -73,8 +73,15 @@ public final class NewCommand implements Callable<Integer> {
     @Option(names = {"-o", "--output"}, required = true, paramLabel = "PLAN.bay.json", description = "File to write.")
     Path output;
 
+    @Option(names = "--force", description = "Replace the output file if it exists (the previous one is kept as FILE.bak).")
+    boolean force;
+
     @Override
     public Integer call() throws IOException {
+        if (!force && java.nio.file.Files.exists(output)) {
+            throw new BadInputException("-o: " + output + " already exists; a new plan does not replace it unless you add "
+                    + "--force (the old file is then kept as " + output.getFileName() + ".bak)");
+        }
         List<Double> bx = list("--bays-x", baysX);
         List<Double> by = list("--bays-y", baysY);
         List<Double> st = list("--levels", levels);

@@ -27,15 +27,47 @@ final class JsonLayout {
 
     private static void value(StringBuilder b, JsonNode n, int depth, int lineSoFar) {
         if (n.isContainerNode() && !n.isEmpty()) {
-            String compact = compact(n);
-            if (lineSoFar + compact.length() + 1 <= WIDTH) {
-                b.append(compact);
-            } else {
+            int start = b.length();
+            if (!compact(b, n, start + WIDTH - lineSoFar - 1)) {
+                b.setLength(start); // too long for one line: lay it out over several
                 expanded(b, n, depth);
             }
         } else {
             b.append(compact(n));
         }
+    }
+
+    /**
+     * Appends the one-line form of {@code n}, giving up (false) as soon as the text would pass
+     * position {@code end} of {@code b}: a large list is not written out whole only to be found too long.
+     */
+    private static boolean compact(StringBuilder b, JsonNode n, int end) {
+        if (n.isObject()) {
+            b.append('{');
+            Iterator<Map.Entry<String, JsonNode>> it = n.properties().iterator();
+            while (it.hasNext() && b.length() <= end) {
+                Map.Entry<String, JsonNode> e = it.next();
+                b.append(string(e.getKey())).append(": ");
+                if (!compact(b, e.getValue(), end)) {
+                    return false;
+                }
+                if (it.hasNext()) {
+                    b.append(", ");
+                }
+            }
+            return b.append('}').length() <= end;
+        }
+        if (n.isArray()) {
+            b.append('[');
+            for (int i = 0; i < n.size() && b.length() <= end; i++) {
+                b.append(i > 0 ? ", " : "");
+                if (!compact(b, n.get(i), end)) {
+                    return false;
+                }
+            }
+            return b.append(']').length() <= end;
+        }
+        return b.append(compact(n)).length() <= end;
     }
 
     private static void expanded(StringBuilder b, JsonNode n, int depth) {

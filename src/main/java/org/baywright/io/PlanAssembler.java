@@ -28,6 +28,7 @@ import org.baywright.plan.Column;
 import org.baywright.plan.Deck;
 import org.baywright.plan.DesignSettings;
 import org.baywright.plan.Floor;
+import org.baywright.plan.Framing;
 import org.baywright.plan.GridLine;
 import org.baywright.plan.Infill;
 import org.baywright.plan.Level;
@@ -64,6 +65,8 @@ final class PlanAssembler {
     static final double MAX_FY = 1000e6;
     static final double MIN_RATIO = 60;
     static final double MAX_RATIO = 10000;
+    /** Most beams one infill may generate: more is a slip of the finger (a spacing in mm meant in m). */
+    static final int MAX_INFILL_BEAMS = org.baywright.takedown.Takedown.MAX_INFILL_BEAMS;
 
     private static final Map<String, String> METHODS = ordered("lrfd", "lrfd", "asd", "asd");
     private static final Map<String, MemberKind> KINDS = ordered("girder", MemberKind.GIRDER, "beam", MemberKind.BEAM);
@@ -155,6 +158,15 @@ final class PlanAssembler {
         boolean delivered = choice(s.girderArea(), p + "/girderArea", "", "girderArea", GIRDER_AREA_DELIVERED,
                 def.girderAreaDelivered());
         String catalog = s.catalog() == null ? def.catalog() : s.catalog();
+        if (!catalog.isBlank()) {
+            try {
+                java.nio.file.Path.of(catalog);
+            } catch (java.nio.file.InvalidPathException e) {
+                problems.error("bad-value", p + "/catalog", "", "catalog: \"" + ShapeCheck.clip(printable(catalog))
+                        + "\" is not a usable file name (" + e.getReason() + "); give the path of a catalog file, or \"\" for "
+                        + "the built-in W shapes");
+            }
+        }
         return new DesignSettings(method, fy, live, total, beamSeries, girderSeries, columnSeries, maxDepth, spliceEvery,
                 reduction, partitionAsDead, delivered, catalog);
     }
@@ -312,11 +324,12 @@ final class PlanAssembler {
                 : floors.stream().anyMatch(f -> f == null || f.id() == null)) {
             return; // some floor ids are unknown (reported): references cannot be checked
         }
-        List<String> ids = new ArrayList<>();
-        floors.stream().filter(f -> !ids.contains(f.id())).forEach(f -> ids.add(f.id()));
+        Set<String> idSet = new java.util.LinkedHashSet<>();
+        floors.forEach(f -> idSet.add(f.id()));
+        List<String> ids = List.copyOf(idSet);
         for (int i = 0; i < levels.size(); i++) {
             LevelDoc l = levels.get(i);
-            if (l != null && l.floor() != null && !ids.contains(l.floor())) {
+            if (l != null && l.floor() != null && !idSet.contains(l.floor())) {
                 problems.error("unknown-reference", Pointers.child("/levels", i) + "/floor", l.name() == null ? "" : l.name(),
                         "floor: there is no floor with id \"" + ShapeCheck.clip(l.floor()) + "\"; "
                                 + (ids.isEmpty() ? "the plan has no floors" : "the floors are " + quotedList(ids)));
@@ -334,9 +347,10 @@ final class PlanAssembler {
         }
         List<String> names = new ArrayList<>();
         levels.forEach(l -> names.add(l.name()));
+        Set<String> nameSet = new HashSet<>(names);
         for (int i = 0; i < columns.size(); i++) {
             ColumnDoc c = columns.get(i);
-            if (c != null && c.topLevel() != null && !c.topLevel().isEmpty() && !names.contains(c.topLevel())) {
+            if (c != null && c.topLevel() != null && !c.topLevel().isEmpty() && !nameSet.contains(c.topLevel())) {
                 problems.error("unknown-reference", Pointers.child("/columns", i) + "/topLevel", c.id() == null ? "" : c.id(),
                         "topLevel: there is no level named \"" + ShapeCheck.clip(c.topLevel()) + "\"; use "
                                 + (names.isEmpty() ? "" : "one of " + quotedList(names) + ", or ")
@@ -473,6 +487,10 @@ final class PlanAssembler {
                 problems.error("out-of-range", p + "/count", id, "count: " + count + " beams is not allowed; give 1 or more, "
                         + "or a maxSpacing instead");
                 spacingOk = false;
+            } else if (count > MAX_INFILL_BEAMS) {
+                problems.error("out-of-range", p + "/count", id, "count: " + count + " beams is not allowed; an infill has "
+                        + "at most " + MAX_INFILL_BEAMS + " beams");
+                spacingOk = false;
             }
         } else if (n.maxSpacing() != null) {
             spacing = length(n.maxSpacing(), p + "/maxSpacing", id, "maxSpacing");
@@ -491,7 +509,20 @@ final class PlanAssembler {
         if (xs == null || ys == null || direction == null || !spacingOk || n.id() == null) {
             return null;
         }
-        return new Infill(id, xs[0], xs[1], ys[0], ys[1], direction, count, spacing);
+        Infill infill = new Infill(id, xs[0], xs[1], ys[0], ys[1], direction, count, spacing);
+        if (count == 0) {
+            String[] across = direction == GridLine.Axis.X ? ys : xs;
+            double width = Math.abs(gridOffsets.get(across[1]) - gridOffsets.get(across[0]));
+            int beams = Framing.beamCount(infill, width);
+            if (beams > MAX_INFILL_BEAMS) {
+                problems.error("out-of-range", p + "/maxSpacing", id, "maxSpacing: \"" + ShapeCheck.clip(n.maxSpacing())
+                        + "\" would put " + (beams == Integer.MAX_VALUE - 1 ? "billions of" : Integer.toString(beams))
+                        + " beams in the " + Numbers.format(width) + " m wide bay; an infill has at most " + MAX_INFILL_BEAMS
+                        + " beams, so give a larger spacing (e.g. \"10ft\" or \"3m\")");
+                return null;
+            }
+        }
+        return infill;
     }
 
     /** The two labels of a bay's x or y lines, west/south first; null when wrong (reported). */
@@ -506,7 +537,6 @@ final class PlanAssembler {
                     + (labels.size() == 1 ? " label" : " labels"));
             return null;
         }
-        List<String> onAxis = gridAxes.entrySet().stream().filter(e -> e.getValue() == axis).map(Map.Entry::getKey).toList();
         boolean ok = true;
         for (int j = 0; j < 2; j++) {
             String label = labels.get(j);
@@ -519,6 +549,10 @@ final class PlanAssembler {
                 ok = false; // the grid line may be one of those with errors, reported there
                 continue;
             }
+            if (found == axis) {
+                continue;
+            }
+            List<String> onAxis = gridAxes.entrySet().stream().filter(e -> e.getValue() == axis).map(Map.Entry::getKey).toList();
             String allowed = onAxis.isEmpty() ? "the grid has no " + lines : "the " + lines + " are " + quotedList(onAxis);
             if (found == null) {
                 problems.error("unknown-reference", Pointers.child(p, j), id, "bay " + key + "[" + j
@@ -734,6 +768,19 @@ final class PlanAssembler {
                     + quotedList(List.copyOf(allowed.keySet())));
         }
         return t == null ? def : t;
+    }
+
+    /** Text with control characters shown as {@code \\uXXXX}, for messages. */
+    private static String printable(String s) {
+        StringBuilder b = new StringBuilder();
+        s.codePoints().forEach(c -> {
+            if (Character.isISOControl(c)) {
+                b.append(String.format(java.util.Locale.ROOT, "\\u%04X", c));
+            } else {
+                b.appendCodePoint(c);
+            }
+        });
+        return b.toString();
     }
 
     private static String orEmpty(String s) {

@@ -122,17 +122,15 @@ final class ShapeCheck {
     }
 
     private ObjectNode record(JsonNode node, Class<? extends Record> type, String pointer, String label, String parentId) {
-        String what = phrase(type);
+        Shape shape = SHAPES.get(type);
+        String what = shape.phrase;
         if (!node.isObject()) {
             wrongType(pointer, parentId, label.isEmpty() ? "the file" : label, "an object { … } (" + what + ")", node);
             return null;
         }
         String id = identity(node, type, parentId, pointer);
-        RecordComponent[] components = type.getRecordComponents();
-        List<String> names = new ArrayList<>();
-        for (RecordComponent c : components) {
-            names.add(c.getName());
-        }
+        RecordComponent[] components = shape.components;
+        List<String> names = shape.names;
         for (Map.Entry<String, JsonNode> field : node.properties()) {
             String key = field.getKey();
             if (!names.contains(key) && !(type == PlanDocument.PlanDoc.class && isCheckedEarlier(key))) {
@@ -165,6 +163,22 @@ final class ShapeCheck {
         }
         return out;
     }
+
+    /** What is known of a document record's type, worked out once: plans can hold many thousands of objects. */
+    private record Shape(String phrase, RecordComponent[] components, List<String> names) {
+    }
+
+    private static final ClassValue<Shape> SHAPES = new ClassValue<>() {
+        @Override
+        protected Shape computeValue(Class<?> type) {
+            RecordComponent[] components = type.getRecordComponents();
+            List<String> names = new ArrayList<>();
+            for (RecordComponent c : components) {
+                names.add(c.getName());
+            }
+            return new Shape(phrase(type), components, List.copyOf(names));
+        }
+    };
 
     private static boolean isCheckedEarlier(String key) {
         return key.equals("format") || key.equals("version");

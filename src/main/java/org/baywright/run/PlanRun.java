@@ -25,6 +25,10 @@ public final class PlanRun {
         } catch (CatalogException e) {
             problems.add(Problem.error("catalog", "/settings/catalog", "", e.getMessage()));
             return new RunResult(plan, null, problems, "", version(), 0);
+        } catch (java.nio.file.InvalidPathException e) {
+            problems.add(Problem.error("catalog", "/settings/catalog", "", "catalog: \"" + e.getInput().replaceAll("\\p{Cntrl}", "?")
+                    + "\" is not a usable file name (" + e.getReason() + ")"));
+            return new RunResult(plan, null, problems, "", version(), 0);
         }
         return run(plan, catalog);
     }

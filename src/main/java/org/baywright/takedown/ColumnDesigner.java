@@ -57,10 +57,19 @@ final class ColumnDesigner {
 
     /** Designs every column line; lines are independent, so they are designed in parallel. */
     List<ColumnResult> design() {
-        return plan.columns().parallelStream().map(this::design).toList();
+        record Designed(ColumnResult result, List<Problem> problems) {
+        }
+        List<Designed> all = plan.columns().parallelStream().map(c -> {
+            List<Problem> found = new ArrayList<>();
+            return new Designed(design(c, found), found);
+        }).toList();
+        for (Designed d : all) {
+            problems.addAll(d.problems()); // in the plan's order of columns, whatever order they finished in
+        }
+        return all.stream().map(Designed::result).toList();
     }
 
-    private ColumnResult design(Column c) {
+    private ColumnResult design(Column c, List<Problem> problems) {
         List<Level> lv = plan.levels();
         int top = lv.size() - 1;
         if (c.topLevel() != null && !c.topLevel().isEmpty()) {
@@ -162,11 +171,15 @@ final class ColumnDesigner {
                 }
             }
             if (chosen == null) {
-                chosen = best == null ? new ColumnTier(names(lo, hi), "", 0, MemberStatus.OVERSTRESSED, List.of(), length, rejected)
-                        : withStatus(best, MemberStatus.OVERSTRESSED);
+                // with no section at all the tier still carries its loads down (without its own weight),
+                // so that the foundation reactions and the equilibrium check stay whole
+                chosen = best == null ? withStatus(check(c, null, lo, hi, weightAbove, cum, atFloor, atRoof, floors, l0, kll,
+                        length, rejected), MemberStatus.OVERSTRESSED) : withStatus(best, MemberStatus.OVERSTRESSED);
                 problems.add(new Problem(Problem.Severity.ERROR, "overstressed", "column " + c.id(), c.id(),
-                        "column " + c.id() + ", tier " + String.join("–", names(lo, hi)) + ": no allowed column section passes"
-                                + (best == null ? "" : "; closest " + best.section() + " at ratio "
+                        "column " + c.id() + ", tier " + String.join("–", names(lo, hi)) + (best == null
+                                ? ": no section is allowed for columns (the column series " + plan.settings().columnSeries()
+                                        + " leave no non-slender shape of the catalog); choose other column series"
+                                : ": no allowed column section passes; closest " + best.section() + " at ratio "
                                         + String.format(Locale.ROOT, "%.2f", best.maxRatio())), List.of(c.at())));
             }
             result[t] = chosen;
@@ -191,6 +204,7 @@ final class ColumnDesigner {
         return out;
     }
 
+    /** The tier's storey loads and ratios with section {@code s}; with none (null), the loads alone (ratios NaN). */
     private ColumnTier check(Column c, Section s, int lo, int hi, double weightAbove, double[][] cum, double[] atFloor,
             double[] atRoof, int[] floors, double[][] l0, double kll, double length, List<String> rejected) {
         List<Level> lv = plan.levels();
@@ -198,7 +212,7 @@ final class ColumnDesigner {
         double own = 0;
         for (int i = hi; i >= lo; i--) {
             double h = lv.get(i).storeyHeight();
-            own += s.weight() * h;
+            own += s == null ? 0 : s.weight() * h;
             double[] comp = cum[i].clone();
             comp[Component.D.ordinal()] += weightAbove + own;
             double[] unreduced = Component.byCase(comp);
@@ -235,12 +249,17 @@ final class ColumnDesigner {
                     gov = combo.name();
                 }
             }
-            IShapeCompression.Strength st = IShapeCompression.strength(s, steel.fy(), steel.e(), h, h, null);
-            double avail = method.available(st.pn(), ResistanceFactors.PHI_C, ResistanceFactors.OMEGA_C);
+            double avail = Double.NaN;
+            if (s != null) {
+                IShapeCompression.Strength st = IShapeCompression.strength(s, steel.fy(), steel.e(), h, h, null);
+                avail = method.available(st.pn(), ResistanceFactors.PHI_C, ResistanceFactors.OMEGA_C);
+            }
             storeys.add(0, new StoreyLoad(lv.get(i).name(), h, unreduced, reduced, atFloor[i], atRoof[i], floors[i], req, avail,
                     req / avail, gov));
         }
-        return new ColumnTier(names(lo, hi), s.designation(), s.weight(), MemberStatus.SIZED, storeys, length, List.copyOf(rejected));
+        return s == null ? new ColumnTier(names(lo, hi), "", 0, MemberStatus.OVERSTRESSED, storeys, length, List.copyOf(rejected))
+                : new ColumnTier(names(lo, hi), s.designation(), s.weight(), MemberStatus.SIZED, storeys, length,
+                        List.copyOf(rejected));
     }
 
 }

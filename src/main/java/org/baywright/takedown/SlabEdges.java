@@ -48,7 +48,9 @@ public final class SlabEdges {
                     nearest = t;
                 }
             }
-            if (nearest > edge && edge > cantilever) {
+            // a member on the slab edge itself (within the tolerance) supports the slab up to the edge:
+            // no cantilever beyond it, whichever way rounding puts the two crossings
+            if (nearest > edge + tol && edge > cantilever) {
                 return true;
             }
         }

@@ -75,6 +75,8 @@ import org.baywright.units.Units;
  * foundation reactions, to {@link Equilibrium#TOLERANCE}.
  */
 public final class Takedown {
+    /** Grid of the tributary analysis: coordinates are snapped to it, m. */
+    public static final double GRID = 1e-6;
     /** Coincidence tolerance for supports, m. */
     public static final double TOLERANCE = 1e-3;
     /** Distance beyond a member or column at which the slab counts as a cantilever slab, m (1 ft). */
@@ -85,6 +87,9 @@ public final class Takedown {
      * and ordinary there (an assembly load of 4.79 kN/m² would otherwise be reduced as ordinary load).
      */
     public static final double HEAVY_LIVE = LiveLoadReduction.HEAVY_LIVE_LOAD;
+
+    /** Most beams one infill may generate; an infill asking for more is reported and left out. */
+    public static final int MAX_INFILL_BEAMS = 1000;
 
     private static final int NC = Component.values().length;
 
@@ -119,6 +124,8 @@ public final class Takedown {
         final Map<String, MemberResult> results = new LinkedHashMap<>();
         /** Column id → component loads delivered by this floor's members. */
         final Map<String, double[]> columnLoads = new LinkedHashMap<>();
+        /** This floor's problems in the order found; merged in the plan's order after the parallel stage. */
+        final List<Problem> problems = new ArrayList<>();
         /** Column id → A_T delivered. */
         final Map<String, Double> columnArea = new LinkedHashMap<>();
         /** Column id → the largest live intensity per component delivered (for §4.7.3). */
@@ -127,17 +134,46 @@ public final class Takedown {
 
         FloorRun(Floor floor, Set<String> columnsPresent) {
             this.floor = floor;
-            this.members = Framing.members(plan, floor);
+            this.members = members(floor);
             for (Member m : members) {
                 byId.put(m.id(), m);
             }
-            this.trib = TributaryAnalysis.compute(floor, members, 1e-6);
+            this.trib = TributaryAnalysis.compute(floor, members, GRID);
             this.loadedArea = trib.loadedArea();
             for (GeometryProblem g : trib.problems()) {
                 problems.add(new Problem(Problem.Severity.ERROR, g.kind(), "floor " + floor.id(), g.objectId(), g.message(),
                         g.where()));
             }
             design(columnsPresent);
+        }
+
+        /**
+         * The members drawn and those the infills generate; an infill that would generate more than
+         * {@link #MAX_INFILL_BEAMS} beams (a plan built in code; files are checked on reading) is
+         * reported and left out instead of exhausting memory.
+         */
+        private List<Member> members(Floor f) {
+            List<Member> out = new ArrayList<>(f.members());
+            for (org.baywright.plan.Infill inf : f.infills()) {
+                double width = bayWidth(inf);
+                int n = Framing.beamCount(inf, width);
+                if (n > MAX_INFILL_BEAMS) {
+                    problems.add(Problem.error("too-many-beams", "floor " + f.id(), inf.id(), "infill " + inf.id()
+                            + " would generate " + n + " beams; an infill has at most " + MAX_INFILL_BEAMS
+                            + " beams (give a smaller count or a larger maxSpacing); it was left out"));
+                    continue;
+                }
+                out.addAll(Framing.infillBeams(plan, inf));
+            }
+            return out;
+        }
+
+        /** The width of an infill's bay across its beams, m (0 when a grid line is unknown). */
+        private double bayWidth(org.baywright.plan.Infill inf) {
+            boolean alongX = inf.direction() == org.baywright.plan.GridLine.Axis.X;
+            Optional<org.baywright.plan.GridLine> a = plan.gridLine(alongX ? inf.y0() : inf.x0());
+            Optional<org.baywright.plan.GridLine> b = plan.gridLine(alongX ? inf.y1() : inf.x1());
+            return a.isPresent() && b.isPresent() ? Math.abs(b.get().offset() - a.get().offset()) : 0;
         }
 
         private void design(Set<String> columnsPresent) {
@@ -516,7 +552,7 @@ public final class Takedown {
                 }
                 Floor turned = new Floor(floor.id(), floor.name(), floor.roof(), floor.slabEdge(), decks, floor.members(),
                         floor.infills(), floor.openings(), floor.areaLoads(), List.of(), List.of());
-                halfBayCache = TributaryAnalysis.compute(turned, members, 1e-6);
+                halfBayCache = TributaryAnalysis.compute(turned, members, GRID);
             }
             return halfBayCache;
         }
@@ -651,6 +687,9 @@ public final class Takedown {
         Map<String, FloorRun> runs = new java.util.concurrent.ConcurrentHashMap<>();
         distinct.entrySet().parallelStream().forEach(e -> runs.put(e.getKey(),
                 new FloorRun(e.getValue(), distinctColumns.get(e.getKey()))));
+        for (String key : distinct.keySet()) {
+            problems.addAll(runs.get(key).problems); // in the plan's order, whatever order the floors finished in
+        }
         // result keys: the layout id, or id@level when one layout runs with different columns
         Map<String, String> resultKeys = new LinkedHashMap<>();
         Map<String, Integer> perLayout = new HashMap<>();
@@ -691,6 +730,7 @@ public final class Takedown {
     /** Applied loads per load case against the foundation reactions. */
     private List<Equilibrium> equilibrium(List<FloorRun> levelRuns, List<ColumnResult> columns) {
         double[] applied = new double[LoadCase.values().length];
+        double[] slack = new double[LoadCase.values().length];
         for (FloorRun fr : levelRuns) {
             if (fr == null) {
                 continue;
@@ -704,7 +744,11 @@ public final class Takedown {
                 for (int k = 0; k + 1 < ll.path().size(); k++) {
                     len += ll.path().get(k).distance(ll.path().get(k + 1));
                 }
-                add(applied, components(ll.values(), LiveLoadUse.ORDINARY, null), len);
+                double[] q = components(ll.values(), LiveLoadUse.ORDINARY, null);
+                add(applied, q, len);
+                // the analysis works on the path snapped to its grid: each point may move by up to
+                // half a step in x and in y, and pieces shorter than a step are not placed
+                add(slack, q, 2 * GRID * ll.path().size());
             }
             for (PointLoadItem p : fr.floor.pointLoads()) {
                 add(applied, components(p.values(), LiveLoadUse.ORDINARY, null), 1);
@@ -724,7 +768,8 @@ public final class Takedown {
         }
         List<Equilibrium> out = new ArrayList<>();
         for (LoadCase lc : LoadCase.values()) {
-            Equilibrium e = new Equilibrium(lc.symbol(), applied[lc.ordinal()], reactions[lc.ordinal()]);
+            Equilibrium e = new Equilibrium(lc.symbol(), applied[lc.ordinal()], reactions[lc.ordinal()],
+                    Math.abs(slack[lc.ordinal()]));
             out.add(e);
             if (!e.holds()) {
                 problems.add(Problem.error("equilibrium", "load case " + lc.symbol(), "", String.format(java.util.Locale.ROOT,

@@ -66,7 +66,7 @@ final class PlanAssembler {
     static final double MIN_RATIO = 60;
     static final double MAX_RATIO = 10000;
     /** Most beams one infill may generate: more is a slip of the finger (a spacing in mm meant in m). */
-    static final int MAX_INFILL_BEAMS = org.baywright.takedown.Takedown.MAX_INFILL_BEAMS;
+    static final int MAX_INFILL_BEAMS = org.baywright.plan.Framing.MAX_INFILL_BEAMS;
 
     private static final Map<String, String> METHODS = ordered("lrfd", "lrfd", "asd", "asd");
     private static final Map<String, MemberKind> KINDS = ordered("girder", MemberKind.GIRDER, "beam", MemberKind.BEAM);

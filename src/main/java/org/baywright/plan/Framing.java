@@ -17,6 +17,9 @@ public final class Framing {
     private Framing() {
     }
 
+    /** The most beams one infill may generate; a plan asking for more is refused with a located problem. */
+    public static final int MAX_INFILL_BEAMS = 1000;
+
     /** All members of a floor: explicit ones first, then infill beams in order. */
     public static List<Member> members(Plan plan, Floor floor) {
         List<Member> out = new ArrayList<>(floor.members());

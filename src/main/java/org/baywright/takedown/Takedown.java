@@ -89,7 +89,7 @@ public final class Takedown {
     public static final double HEAVY_LIVE = LiveLoadReduction.HEAVY_LIVE_LOAD;
 
     /** Most beams one infill may generate; an infill asking for more is reported and left out. */
-    public static final int MAX_INFILL_BEAMS = 1000;
+    public static final int MAX_INFILL_BEAMS = Framing.MAX_INFILL_BEAMS;
 
     private static final int NC = Component.values().length;
 

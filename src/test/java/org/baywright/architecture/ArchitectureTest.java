@@ -84,6 +84,15 @@ class ArchitectureTest {
     }
 
     @Test
+    void planFilesKnowOnlyTheModel() {
+        noClasses().that().resideInAPackage("org.baywright.io..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.baywright.takedown..", "org.baywright.run..",
+                        "org.baywright.report..", "org.baywright.design..", "org.baywright.geometry..", "org.baywright.cli..",
+                        "org.baywright.study..")
+                .check(classes);
+    }
+
+    @Test
     void noCyclesBetweenPackages() {
         slices().matching("org.baywright.(*)..").should().beFreeOfCycles().check(classes);
     }

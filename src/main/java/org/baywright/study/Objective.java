@@ -22,9 +22,12 @@ public record Objective(double pieceCost) {
         return new Objective(0);
     }
 
-    /** Score of a variant, N: steel weight + pieces × piece cost (NaN when it did not run). */
+    /**
+     * Score of a variant per floor area, Pa: (steel weight + pieces × piece cost) / floor area, so that
+     * layouts of different bay sizes compare fairly (NaN when it did not run).
+     */
     public double score(VariantResult v) {
-        return v.steelWeight() + v.pieces() * pieceCost;
+        return (v.steelWeight() + v.pieces() * pieceCost) / v.floorArea();
     }
 
     /**

@@ -1,0 +1,62 @@
+package org.baywright.study;
+
+import java.util.List;
+import org.baywright.catalog.Catalog;
+import org.baywright.catalog.CatalogFile;
+import org.baywright.plan.Plan;
+import org.baywright.run.PlanRun;
+
+/**
+ * Runs a study: every variant is a full run of its plan ({@link PlanRun#run(Plan, Catalog)}: tributary
+ * areas, the ordered design and the takedown, every level), spread over a pool of worker threads. A
+ * cancel token is checked before each variant starts; a cancelled study returns the variants that
+ * finished. Deterministic: the figures do not depend on the number of threads or their timing.
+ */
+public final class Study {
+    private Study() {
+    }
+
+    /** Runs on all cores with the catalog the base plan names, without progress or cancel. */
+    public static StudyResult run(StudySpec spec) {
+        return run(spec, catalogOf(spec.base()), Runtime.getRuntime().availableProcessors(), ProgressListener.NONE,
+                new CancelToken());
+    }
+
+    /** The catalog a plan's settings name (the built-in one when empty). */
+    public static Catalog catalogOf(Plan plan) {
+        String c = plan.settings().catalog();
+        return c == null || c.isBlank() ? CatalogFile.loadDefault() : CatalogFile.read(java.nio.file.Path.of(c));
+    }
+
+    /**
+     * Runs the study.
+     *
+     * @param parallelism worker threads (≥ 1)
+     * @param listener told after each finished variant
+     * @param cancel checked before each variant
+     */
+    public static StudyResult run(StudySpec spec, Catalog catalog, int parallelism, ProgressListener listener,
+            CancelToken cancel) {
+        long count = spec.count();
+        if (count > Integer.MAX_VALUE) {
+            throw new IllegalArgumentException("a study of " + count + " variants is too large");
+        }
+        return Parallel.run((int) count, i -> runOne(spec, i, catalog), parallelism, listener, cancel);
+    }
+
+    /** Runs one variant; settings that do not fit the plan give a failed result with the reason. */
+    static VariantResult runOne(StudySpec spec, int index, Catalog catalog) {
+        List<org.baywright.study.Setting> settings = spec.variant(index);
+        Plan plan;
+        try {
+            plan = Variations.apply(spec.base(), settings);
+        } catch (IllegalArgumentException e) {
+            return VariantResult.failed(index, settings, e.getMessage());
+        }
+        try {
+            return VariantResult.of(index, settings, PlanRun.run(plan, catalog));
+        } catch (RuntimeException e) {
+            return VariantResult.failed(index, settings, "the run failed: " + e);
+        }
+    }
+}

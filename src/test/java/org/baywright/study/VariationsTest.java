@@ -1,0 +1,112 @@
+package org.baywright.study;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.List;
+import org.baywright.plan.Deck;
+import org.baywright.plan.Floor;
+import org.baywright.plan.GridLine;
+import org.baywright.plan.Infill;
+import org.baywright.plan.MemberKind;
+import org.baywright.plan.Plan;
+import org.baywright.plan.Point;
+import org.baywright.io.PlanFiles;
+import org.baywright.units.Units;
+import org.junit.jupiter.api.Test;
+
+/** The variations on the irregular demo plan. */
+class VariationsTest {
+    static final Plan DEMO = PlanFiles.read(Path.of("plans/harbourview-offices.bay.json")).plan().orElseThrow();
+
+    static double ft(double v) {
+        return Units.FT_.toSi(v);
+    }
+
+    static void near(double expectedFt, double metres) {
+        assertEquals(ft(expectedFt), metres, 1e-9);
+    }
+
+    @Test
+    void bayXStretchesEveryCoordinatePiecewise() {
+        Plan p = Variations.bays(DEMO, GridLine.Axis.X, List.of(ft(35)));
+        near(0, p.gridLine("A").orElseThrow().offset());
+        near(35, p.gridLine("B").orElseThrow().offset());
+        near(140, p.gridLine("E").orElseThrow().offset());
+        near(35, p.gridLine("2").orElseThrow().offset()); // y lines untouched
+        Floor roof = p.floor("roof").orElseThrow();
+        // RTU-1 at 45 ft lies halfway between B (30) and C (60): halfway between 35 and 70
+        Point rtu = roof.pointLoads().stream().filter(l -> l.id().equals("PL-RTU-1")).findFirst().orElseThrow().at();
+        near(52.5, rtu.x());
+        near(20, rtu.y());
+        // the balcony slab edge beyond grid line 1 keeps its y and moves with B and D in x
+        Floor l2 = p.floor("level2").orElseThrow();
+        assertTrue(l2.slabEdge().vertices().contains(new Point(ft(35), ft(-8))) || l2.slabEdge().vertices().stream()
+                .anyMatch(v -> Math.abs(v.x() - ft(35)) < 1e-9 && Math.abs(v.y() - ft(-8)) < 1e-9));
+        assertTrue(l2.slabEdge().vertices().stream().anyMatch(v -> Math.abs(v.x() - ft(105)) < 1e-9 && Math.abs(v.y() - ft(-4)) < 1e-9));
+        // members and columns follow
+        assertTrue(p.columns().stream().anyMatch(c -> c.id().equals("C-E1") && Math.abs(c.at().x() - ft(140)) < 1e-9));
+        var g = l2.member("G-1-DE").orElseThrow();
+        near(105, g.start().x());
+        near(140, g.end().x());
+    }
+
+    @Test
+    void aListOfBayWidthsMustFitThePlan() {
+        Plan p = Variations.bays(DEMO, GridLine.Axis.Y, List.of(ft(30), ft(40), ft(30)));
+        near(70, p.gridLine("3").orElseThrow().offset());
+        near(100, p.gridLine("4").orElseThrow().offset());
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> Variations.bays(DEMO, GridLine.Axis.Y, List.of(ft(30), ft(40))));
+        assertTrue(e.getMessage().contains("2 bay widths given but the plan has 3 bays"), e.getMessage());
+    }
+
+    @Test
+    void beamDirectionTurnsInfillsDecksAndMemberKinds() {
+        Plan p = Variations.beamDirection(DEMO, GridLine.Axis.X);
+        Floor f = p.floor("typical").orElseThrow();
+        assertTrue(f.infills().stream().allMatch(i -> i.direction() == GridLine.Axis.X));
+        assertEquals(MemberKind.BEAM, f.member("G-1-AB").orElseThrow().kind());
+        assertEquals(MemberKind.GIRDER, f.member("B-A-12").orElseThrow().kind());
+        assertEquals(90, deck(f, "DK-main").spanAngle(), 0.0);
+        assertEquals(90, deck(f, "DK-balcony").spanAngle(), 0.0);
+        // the direction the plan already has changes nothing: the balcony, spanning onto the edge girder, keeps 90°
+        assertTrue(DEMO.equals(Variations.beamDirection(DEMO, GridLine.Axis.Y)));
+        // turning back from x turns every deck that spans onto the x beams, the balcony with them
+        Floor back = Variations.beamDirection(p, GridLine.Axis.Y).floor("typical").orElseThrow();
+        assertEquals(0, deck(back, "DK-main").spanAngle(), 0.0);
+        assertEquals(MemberKind.GIRDER, back.member("G-1-AB").orElseThrow().kind());
+    }
+
+    @Test
+    void spacingCountAndSettings() {
+        Plan s = Variations.beamSpacing(Variations.beamCount(DEMO, 2), ft(8));
+        for (Floor f : s.floors()) {
+            for (Infill i : f.infills()) {
+                assertEquals(0, i.count());
+                assertEquals(ft(8), i.maxSpacing(), 0.0);
+            }
+        }
+        assertTrue(Variations.beamCount(DEMO, 2).floors().stream().flatMap(f -> f.infills().stream()).allMatch(i -> i.count() == 2));
+        assertEquals("asd", Variations.method(DEMO, "asd").settings().method());
+        assertEquals(0.6, Variations.maxDepth(DEMO, 0.6).settings().maxBeamDepth(), 0.0);
+        assertEquals(List.of("W12"), Variations.columnSeries(DEMO, List.of("W12")).settings().columnSeries());
+    }
+
+    @Test
+    void theDemoStudiesWithoutErrors() {
+        StudySpec spec = new StudySpec(DEMO, List.of(SweepText.parse("--vary", "beam-direction=x,y", org.baywright.units.UnitSystem.US),
+                SweepText.parse("--vary", "bay-x=35ft", org.baywright.units.UnitSystem.US)));
+        StudyResult r = Study.run(spec, StudyTest.CATALOG, 2, ProgressListener.NONE, new CancelToken());
+        for (VariantResult v : r.variants()) {
+            assertEquals(0, v.errors(), v.toString());
+            assertTrue(v.steelWeight() > 0);
+        }
+    }
+
+    private static Deck deck(Floor f, String id) {
+        return f.decks().stream().filter(d -> d.id().equals(id)).findFirst().orElseThrow();
+    }
+}

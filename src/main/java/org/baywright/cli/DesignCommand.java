@@ -11,7 +11,6 @@ import org.baywright.calc.Caution;
 import org.baywright.design.MemberStatus;
 import org.baywright.io.JsonText;
 import org.baywright.load.DesignMethod;
-import org.baywright.plan.DesignSettings;
 import org.baywright.plan.Plan;
 import org.baywright.report.ColumnSchedule;
 import org.baywright.report.drawing.DrawingExport;
@@ -89,11 +88,7 @@ public final class DesignCommand implements Callable<Integer> {
             if (m == null) {
                 throw new BadInputException("--method: \"" + method + "\" is not a design method; use lrfd or asd");
             }
-            DesignSettings s = plan.settings();
-            plan = new Plan(plan.name(), plan.units(), new DesignSettings(m.name().toLowerCase(Locale.ROOT), s.fy(),
-                    s.liveDeflection(), s.totalDeflection(), s.beamSeries(), s.girderSeries(), s.columnSeries(),
-                    s.maxBeamDepth(), s.spliceEvery(), s.liveLoadReduction(), s.partitionAsDead(), s.girderAreaDelivered(),
-                    s.catalog()), plan.grid(), plan.levels(), plan.floors(), plan.columns());
+            plan = org.baywright.study.Variations.method(plan, m.name().toLowerCase(Locale.ROOT));
         }
         UnitSystem us = UnitSystem.parse(units != null ? units : plan.units());
         if (us == null) {

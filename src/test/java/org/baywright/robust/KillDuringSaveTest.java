@@ -129,7 +129,7 @@ class KillDuringSaveTest {
                     // later ones die while the file operations are under way: once the temporary file is there
                     long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(Guard.SECONDS);
                     while (names(dir).stream().noneMatch(n -> n.endsWith(".tmp") && !before.contains(n))) {
-                        assertTrue(System.nanoTime() < deadline && child.isAlive(), where + ": no save started\n" + tail(log));
+                        assertTrue(withinHangGuard(deadline) && child.isAlive(), where + ": no save started\n" + tail(log));
                         Thread.sleep(1);
                     }
                     Thread.sleep(round < KILLS ? random.nextInt(25) : 0);
@@ -187,5 +187,10 @@ class KillDuringSaveTest {
             List<String> out = new ArrayList<>(s.map(p -> p.getFileName().toString()).sorted().toList());
             return out;
         }
+    }
+
+    /** A guard against a hang (minutes, not a speed target): false once the deadline has passed. */
+    private static boolean withinHangGuard(long deadlineNanos) {
+        return System.nanoTime() < deadlineNanos;
     }
 }

@@ -94,10 +94,11 @@ public final class EditorModel {
         selected.set(null);
         run.set(null);
         file.set(path);
-        plan.set(p);
+        // the level first, so that whoever redraws on the new plan sees a level of it
         String keep = level.get();
         boolean has = p.levels().stream().anyMatch(l -> l.name().equals(keep));
         level.set(has ? keep : p.levels().isEmpty() ? null : p.levels().get(0).name());
+        plan.set(p);
         problems.setAll(fileProblems);
         rerun();
     }

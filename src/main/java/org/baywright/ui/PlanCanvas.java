@@ -71,7 +71,13 @@ public final class PlanCanvas extends Region {
             zoomToFit();
         });
         model.runProperty().addListener((o, a, b) -> redraw());
-        model.levelProperty().addListener((o, a, b) -> redraw());
+        model.levelProperty().addListener((o, a, b) -> {
+            if (followFit) {
+                zoomToFit();
+            } else {
+                redraw();
+            }
+        });
         model.selectedProperty().addListener((o, a, b) -> redraw());
         addEventHandler(MouseEvent.MOUSE_PRESSED, this::pressed);
         addEventHandler(MouseEvent.MOUSE_DRAGGED, this::dragged);

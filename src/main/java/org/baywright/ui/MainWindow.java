@@ -75,11 +75,11 @@ public final class MainWindow {
         root.setId("baywright-main");
         root.setTop(new VBox(menus(), tools()));
         SplitPane across = new SplitPane(canvas, propertiesPanel());
-        across.setDividerPositions(0.76);
+        across.setDividerPositions(0.77);
         SplitPane.setResizableWithParent(across.getItems().get(1), false);
         SplitPane down = new SplitPane(across, problemsPanel());
         down.setOrientation(Orientation.VERTICAL);
-        down.setDividerPositions(0.8);
+        down.setDividerPositions(0.84);
         root.setCenter(down);
         root.setBottom(statusBar());
         model.runProperty().addListener((o, a, b) -> refreshStatus());

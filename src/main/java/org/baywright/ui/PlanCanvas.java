@@ -42,6 +42,8 @@ public final class PlanCanvas extends Region {
     static final double FIT_MARGIN = 70;
     private static final double BUBBLE_R = 12;
     private static final double GRID_OVERRUN = 26;
+    /** Height of the legend strip along the bottom of the view, px. */
+    static final double LEGEND_H = 30;
 
     static final Color BACKGROUND = Color.web("#f6f5f1");
     private static final Color SLAB_FILL = Color.web("#e4e2da");
@@ -49,7 +51,7 @@ public final class PlanCanvas extends Region {
     private static final Color GRID = Color.web("#7d8591");
     private static final Color INK = Color.web("#1d1f22");
     private static final Color NOT_DESIGNED = Color.web("#9a9a9a");
-    private static final Color SELECTION = Color.rgb(214, 92, 40, 0.45);
+    private static final Color SELECTION = Color.rgb(214, 92, 40, 0.6);
 
     private final EditorModel model;
     private final Canvas canvas = new Canvas();
@@ -128,7 +130,8 @@ public final class PlanCanvas extends Region {
     public void zoomToFit() {
         double[] b = bounds();
         view = b == null ? ViewTransform.identity().panBy(getWidth() / 2, getHeight() / 2)
-                : ViewTransform.fit(b[0], b[1], b[2], b[3], Math.max(1, getWidth()), Math.max(1, getHeight()), FIT_MARGIN);
+                : ViewTransform.fit(b[0], b[1], b[2], b[3], Math.max(1, getWidth()),
+                        Math.max(1, getHeight() - LEGEND_H), FIT_MARGIN);
         followFit = true;
         redraw();
     }
@@ -252,7 +255,7 @@ public final class PlanCanvas extends Region {
         for (Column c : model.currentColumns()) {
             drawColumn(g, c);
         }
-        drawLegend(g, h);
+        drawLegend(g, w, h);
     }
 
     private void polygonPath(GraphicsContext g, Polygon poly) {
@@ -339,11 +342,12 @@ public final class PlanCanvas extends Region {
             if (line.axis() == GridLine.Axis.X) {
                 double x = view.screenX(line.offset());
                 g.strokeLine(x, top, x, bottom);
-                bubble(g, line.label(), x, top - BUBBLE_R);
+                // bubbles stay in view when the plan's edge is scrolled away
+                bubble(g, line.label(), x, Math.max(top - BUBBLE_R, BUBBLE_R + 3));
             } else {
                 double y = view.screenY(line.offset());
                 g.strokeLine(left, y, right, y);
-                bubble(g, line.label(), left - BUBBLE_R, y);
+                bubble(g, line.label(), Math.max(left - BUBBLE_R, BUBBLE_R + 3), y);
             }
         }
         g.setLineDashes();
@@ -484,51 +488,54 @@ public final class PlanCanvas extends Region {
         g.setLineDashes();
     }
 
-    private void drawLegend(GraphicsContext g, double h) {
-        double x = 14;
-        double y = h - 78;
-        double barW = 180;
-        g.setFill(Color.rgb(255, 255, 255, 0.92));
-        g.fillRect(x - 8, y - 20, barW + 190, 76);
-        g.setStroke(GRID);
+    private void drawLegend(GraphicsContext g, double w, double h) {
+        double y = h - LEGEND_H;
+        g.setFill(Color.web("#ecebe6"));
+        g.fillRect(0, y, w, LEGEND_H);
+        g.setStroke(Color.web("#c9c7bf"));
         g.setLineWidth(1);
         g.setLineDashes();
-        g.strokeRect(x - 8, y - 20, barW + 190, 76);
+        g.strokeLine(0, y + 0.5, w, y + 0.5);
+        double mid = y + LEGEND_H / 2;
+        double x = 12;
+        g.setTextBaseline(VPos.CENTER);
+        g.setTextAlign(TextAlignment.LEFT);
         g.setFont(Font.font(null, FontWeight.BOLD, 11));
         g.setFill(INK);
-        g.setTextAlign(TextAlignment.LEFT);
-        g.fillText("Demand / capacity", x, y - 5);
+        g.fillText("Demand / capacity", x, mid);
+        x += 118;
+        g.setFont(Font.font(11));
+        g.fillText("0", x, mid);
+        x += 12;
+        double barW = 150;
         for (int i = 0; i < barW; i++) {
             Rgb c = Cividis.at(i / (barW - 1));
             g.setFill(Color.rgb(c.r(), c.g(), c.b()));
-            g.fillRect(x + i, y, 1.5, 12);
+            g.fillRect(x + i, mid - 6, 1.5, 12);
         }
         g.setStroke(INK);
-        g.strokeRect(x, y, barW, 12);
-        g.setFont(Font.font(11));
+        g.strokeRect(x, mid - 6, barW, 12);
         g.setFill(INK);
-        g.setTextAlign(TextAlignment.CENTER);
-        g.fillText("0", x, y + 26);
-        g.fillText("0.5", x + barW / 2, y + 26);
-        g.fillText("1.0", x + barW, y + 26);
-        double lx = x + barW + 22;
+        g.fillText("1.0", x + barW + 6, mid);
+        x += barW + 44;
         g.setLineDashes(14, 6);
         g.setStroke(INK);
         g.setLineWidth(9);
-        g.strokeLine(lx, y + 6, lx + 40, y + 6);
+        g.strokeLine(x, mid, x + 40, mid);
         Rgb top = Cividis.at(1);
         g.setStroke(Color.rgb(top.r(), top.g(), top.b()));
         g.setLineWidth(6);
-        g.strokeLine(lx, y + 6, lx + 40, y + 6);
+        g.strokeLine(x, mid, x + 40, mid);
+        g.setLineDashes();
+        g.fillText("over 1.0: overstressed", x + 48, mid);
+        x += 48 + 150;
         g.setLineDashes(5, 4);
         g.setStroke(NOT_DESIGNED);
         g.setLineWidth(2);
-        g.strokeLine(lx, y + 30, lx + 40, y + 30);
+        g.strokeLine(x, mid, x + 40, mid);
         g.setLineDashes();
-        g.setFill(INK);
-        g.setTextAlign(TextAlignment.LEFT);
-        g.fillText("over 1.0: overstressed", lx + 48, y + 10);
-        g.fillText("unsupported / not run", lx + 48, y + 34);
+        g.fillText("unsupported / not run", x + 48, mid);
+        g.setTextBaseline(VPos.BASELINE);
     }
 
     /** The canvas itself (for snapshots). */

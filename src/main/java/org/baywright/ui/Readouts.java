@@ -68,6 +68,8 @@ public final class Readouts {
         rows.add(new Row("Status", m.status().label()));
         rows.add(new Row("Length", UnitSystem.format(m.length(), us.length(), 2)));
         rows.add(new Row("Tributary area", UnitSystem.format(m.tributaryArea(), us.floorArea(), 0)));
+        rows.add(new Row("Reduction area", UnitSystem.format(m.reductionArea(), us.floorArea(), 0)
+                + String.format(java.util.Locale.ROOT, "  (live × %.2f)", m.liveFactor())));
         rows.add(new Row("Highest ratio", ratio(m.maxRatio())));
         if (m.design() != null) {
             for (Check c : m.design().checks()) {

@@ -1,0 +1,251 @@
+package org.baywright.ui;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyBooleanProperty;
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+import org.baywright.io.PlanFiles;
+import org.baywright.io.PlanReadResult;
+import org.baywright.plan.Column;
+import org.baywright.plan.Floor;
+import org.baywright.plan.Level;
+import org.baywright.plan.Plan;
+import org.baywright.plan.Problem;
+import org.baywright.run.PlanRun;
+import org.baywright.run.RunResult;
+import org.baywright.takedown.MemberResult;
+import org.baywright.units.UnitSystem;
+
+/**
+ * The state of the main window, without any controls: the open plan and its file, the latest run, the
+ * level shown and the selected member. Runs go through a {@link TaskRunner}; a run that finishes after
+ * a newer plan was opened is dropped.
+ *
+ * <p>Properties are JavaFX observable values (from {@code javafx.base}, which needs no toolkit), so the
+ * model is tested with plain JUnit and bound by the window.
+ */
+public final class EditorModel {
+    private final TaskRunner runner;
+    private final ObjectProperty<Plan> plan = new SimpleObjectProperty<>(this, "plan");
+    private final ObjectProperty<Path> file = new SimpleObjectProperty<>(this, "file");
+    private final ObjectProperty<RunResult> run = new SimpleObjectProperty<>(this, "run");
+    private final StringProperty level = new SimpleStringProperty(this, "level");
+    private final StringProperty selected = new SimpleStringProperty(this, "selected");
+    private final BooleanProperty running = new SimpleBooleanProperty(this, "running");
+    private final StringProperty message = new SimpleStringProperty(this, "message", "");
+    private final ObservableList<Problem> problems = FXCollections.observableArrayList();
+    private List<Problem> fileProblems = List.of();
+    private long generation;
+
+    public EditorModel(TaskRunner runner) {
+        this.runner = Objects.requireNonNull(runner, "runner");
+        level.addListener((o, was, now) -> {
+            String id = selected.get();
+            if (id != null && currentMembers().stream().noneMatch(m -> m.id().equals(id))) {
+                selected.set(null);
+            }
+        });
+    }
+
+    /** What opening a file gave: whether the plan was taken, and the file's problems (errors and warnings). */
+    public record OpenResult(boolean opened, List<Problem> problems) {
+        public OpenResult {
+            problems = List.copyOf(problems);
+        }
+    }
+
+    /**
+     * Opens a plan file and runs it. A file with errors is not opened: the current plan stays and the
+     * errors are returned for the caller to show.
+     */
+    public OpenResult open(Path path) {
+        return take(PlanFiles.read(path), path);
+    }
+
+    /** Opens plan text that has no file (the built-in demo); Save then asks for a file. */
+    public OpenResult openText(String json, String sourceName) {
+        return take(PlanFiles.read(json, sourceName), null);
+    }
+
+    private OpenResult take(PlanReadResult read, Path path) {
+        if (!read.ok()) {
+            return new OpenResult(false, read.problems());
+        }
+        setPlan(read.plan().orElseThrow(), path, read.problems());
+        return new OpenResult(true, read.problems());
+    }
+
+    /** Shows a plan (already read) and starts its run. */
+    public void setPlan(Plan p, Path path, List<Problem> warnings) {
+        Objects.requireNonNull(p, "plan");
+        fileProblems = List.copyOf(warnings);
+        selected.set(null);
+        run.set(null);
+        file.set(path);
+        // the level first, so that whoever redraws on the new plan sees a level of it
+        String keep = level.get();
+        boolean has = p.levels().stream().anyMatch(l -> l.name().equals(keep));
+        level.set(has ? keep : p.levels().isEmpty() ? null : p.levels().get(0).name());
+        plan.set(p);
+        problems.setAll(fileProblems);
+        rerun();
+    }
+
+    /** Runs the current plan again. */
+    public void rerun() {
+        Plan p = plan.get();
+        if (p == null) {
+            return;
+        }
+        long gen = ++generation;
+        running.set(true);
+        message.set("Running…");
+        runner.submit(() -> PlanRun.run(p), r -> {
+            if (gen == generation) {
+                running.set(false);
+                run.set(r);
+                List<Problem> all = new ArrayList<>(fileProblems);
+                all.addAll(r.problems());
+                problems.setAll(all);
+                message.set(r.takedown() == null ? "The plan could not be run; see Problems." : "Run complete.");
+            }
+        }, e -> {
+            if (gen == generation) {
+                running.set(false);
+                message.set("The run failed: " + e);
+            }
+        });
+    }
+
+    /** Writes the plan to its file. */
+    public void save() throws IOException {
+        Path f = file.get();
+        if (f == null) {
+            throw new IllegalStateException("the plan has no file yet; use Save As");
+        }
+        PlanFiles.write(plan.get(), f);
+        message.set("Saved " + f.getFileName() + ".");
+    }
+
+    /** Writes the plan to a new file, which becomes its file. */
+    public void saveAs(Path f) throws IOException {
+        Objects.requireNonNull(f, "file");
+        if (plan.get() == null) {
+            throw new IllegalStateException("no plan is open");
+        }
+        PlanFiles.write(plan.get(), f);
+        file.set(f);
+        message.set("Saved " + f.getFileName() + ".");
+    }
+
+    /** The level names, bottom to top. */
+    public List<String> levelNames() {
+        Plan p = plan.get();
+        return p == null ? List.of() : p.levels().stream().map(Level::name).toList();
+    }
+
+    /** The floor layout at the current level. */
+    public Optional<Floor> currentFloor() {
+        Plan p = plan.get();
+        if (p == null || level.get() == null) {
+            return Optional.empty();
+        }
+        return p.levels().stream().filter(l -> l.name().equals(level.get())).findFirst()
+                .flatMap(l -> p.floor(l.floor()));
+    }
+
+    /** The designed members at the current level (infill beams included), empty before a run. */
+    public List<MemberResult> currentMembers() {
+        RunResult r = run.get();
+        if (r == null || r.takedown() == null || level.get() == null) {
+            return List.of();
+        }
+        String floor = r.takedown().levelFloors().get(level.get());
+        return floor == null ? List.of() : r.takedown().members().getOrDefault(floor, List.of());
+    }
+
+    /** The columns that pass through or stop at the current level. */
+    public List<Column> currentColumns() {
+        Plan p = plan.get();
+        if (p == null || level.get() == null) {
+            return List.of();
+        }
+        List<String> names = levelNames();
+        int here = names.indexOf(level.get());
+        return p.columns().stream().filter(c -> {
+            int top = c.topLevel() == null || c.topLevel().isBlank() ? names.size() - 1 : names.indexOf(c.topLevel());
+            return top < 0 || here <= top;
+        }).toList();
+    }
+
+    /** The result of the selected member at the current level. */
+    public Optional<MemberResult> selectedResult() {
+        String id = selected.get();
+        return id == null ? Optional.empty() : currentMembers().stream().filter(m -> m.id().equals(id)).findFirst();
+    }
+
+    /** Selects a member by id (null clears the selection). */
+    public void select(String memberId) {
+        selected.set(memberId);
+    }
+
+    /** The unit system the plan is written in. */
+    public UnitSystem units() {
+        Plan p = plan.get();
+        UnitSystem u = p == null ? null : UnitSystem.parse(p.units());
+        return u == null ? UnitSystem.US : u;
+    }
+
+    public ReadOnlyObjectProperty<Plan> planProperty() {
+        return plan;
+    }
+
+    public ReadOnlyObjectProperty<Path> fileProperty() {
+        return file;
+    }
+
+    public ReadOnlyObjectProperty<RunResult> runProperty() {
+        return run;
+    }
+
+    public StringProperty levelProperty() {
+        return level;
+    }
+
+    public StringProperty selectedProperty() {
+        return selected;
+    }
+
+    public ReadOnlyBooleanProperty runningProperty() {
+        return running;
+    }
+
+    public StringProperty messageProperty() {
+        return message;
+    }
+
+    /** The file's warnings and the run's problems, in that order. */
+    public ObservableList<Problem> problems() {
+        return problems;
+    }
+
+    public Plan plan() {
+        return plan.get();
+    }
+
+    public RunResult run() {
+        return run.get();
+    }
+}

@@ -1,0 +1,97 @@
+package org.baywright.ui;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.baywright.design.Check;
+import org.baywright.load.LoadCase;
+import org.baywright.report.RunSummary;
+import org.baywright.run.RunResult;
+import org.baywright.takedown.Component;
+import org.baywright.takedown.MemberResult;
+import org.baywright.takedown.TakedownResult;
+import org.baywright.units.UnitSystem;
+import org.baywright.units.Units;
+
+/** The texts the window shows: status bar totals and the Properties rows of a member. */
+public final class Readouts {
+    private Readouts() {
+    }
+
+    /** One labelled value of the Properties panel. */
+    public record Row(String label, String value) {
+    }
+
+    /** Total steel weight, e.g. "Steel 312,400 lb (156.2 short tons)"; a dash before a run. */
+    public static String steelWeight(RunResult run, UnitSystem us) {
+        TakedownResult t = run == null ? null : run.takedown();
+        if (t == null) {
+            return "Steel —";
+        }
+        double w = weight(t.steelWeight(), us);
+        return us == UnitSystem.US
+                ? String.format(Locale.ROOT, "Steel %,.0f lb (%.1f short tons)", w, w / 2000)
+                : String.format(Locale.ROOT, "Steel %,.0f kg (%.1f t)", w, w / 1000);
+    }
+
+    /** Steel weight per floor area, e.g. "8.41 lb/ft² of floor". */
+    public static String weightPerArea(RunResult run, UnitSystem us) {
+        TakedownResult t = run == null ? null : run.takedown();
+        if (t == null || !(t.floorArea() > 0)) {
+            return "— per floor area";
+        }
+        double per = weight(t.steelWeight(), us) / us.floorArea().fromSi(t.floorArea());
+        return String.format(Locale.ROOT, "%.2f %s of floor", per, us == UnitSystem.US ? "lb/ft²" : "kg/m²");
+    }
+
+    /** The highest demand/capacity ratio, e.g. "Highest ratio 0.97". */
+    public static String highestRatio(RunResult run) {
+        TakedownResult t = run == null ? null : run.takedown();
+        return t == null ? "Highest ratio —" : String.format(Locale.ROOT, "Highest ratio %.2f", RunSummary.maxRatio(t));
+    }
+
+    /** A ratio as printed on the plan and in Properties: two decimals, a dash when not designed. */
+    public static String ratio(double r) {
+        return Double.isNaN(r) ? "—" : String.format(Locale.ROOT, "%.2f", r);
+    }
+
+    private static double weight(double newtons, UnitSystem us) {
+        return us == UnitSystem.US ? newtons / Units.NEWTONS_PER_POUND : newtons / Units.STANDARD_GRAVITY;
+    }
+
+    /** The Properties rows of a member: identity, size, status, ratios and reactions. */
+    public static List<Row> member(MemberResult m, UnitSystem us) {
+        List<Row> rows = new ArrayList<>();
+        rows.add(new Row("Member", m.id()));
+        rows.add(new Row("Kind", m.kind().name().toLowerCase(Locale.ROOT)));
+        rows.add(new Row("Section", m.section().isEmpty() ? "—" : m.section()));
+        rows.add(new Row("Status", m.status().label()));
+        rows.add(new Row("Length", UnitSystem.format(m.length(), us.length(), 2)));
+        rows.add(new Row("Tributary area", UnitSystem.format(m.tributaryArea(), us.floorArea(), 0)));
+        rows.add(new Row("Reduction area", UnitSystem.format(m.reductionArea(), us.floorArea(), 0)
+                + String.format(java.util.Locale.ROOT, "  (live × %.2f)", m.liveFactor())));
+        rows.add(new Row("Highest ratio", ratio(m.maxRatio())));
+        if (m.design() != null) {
+            for (Check c : m.design().checks()) {
+                rows.add(new Row("  " + c.name(), ratio(c.ratio()) + (c.combination().isEmpty() ? "" : "  (" + c.combination() + ")")));
+            }
+        }
+        rows.add(new Row("Start reaction", reactions(m.startReaction(), us)));
+        rows.add(new Row("End reaction", reactions(m.endReaction(), us)));
+        rows.add(new Row("Start support", m.startSupport().isEmpty() ? "none" : m.startSupport()));
+        rows.add(new Row("End support", m.endSupport().isEmpty() ? "none" : m.endSupport()));
+        return rows;
+    }
+
+    /** Unreduced reactions by load case, non-zero cases only: "D 12.3 kip, L 10.1 kip". */
+    static String reactions(double[] components, UnitSystem us) {
+        double[] byCase = Component.byCase(components);
+        List<String> parts = new ArrayList<>();
+        for (LoadCase lc : LoadCase.values()) {
+            if (byCase[lc.ordinal()] != 0) {
+                parts.add(lc.symbol() + " " + UnitSystem.format(byCase[lc.ordinal()], us.force(), 1));
+            }
+        }
+        return parts.isEmpty() ? "0" : String.join(", ", parts);
+    }
+}

@@ -1,0 +1,117 @@
+package org.baywright.ui;
+
+import static org.junit.jupiter.api.Assertions.assertAll;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import javafx.geometry.Point2D;
+import javafx.scene.Node;
+import javafx.scene.Scene;
+import javafx.scene.control.Label;
+import javafx.scene.control.ToggleButton;
+import javafx.stage.Stage;
+import org.baywright.calc.Caution;
+import org.baywright.design.MemberStatus;
+import org.baywright.takedown.MemberResult;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/** The main window, headless (Monocle), with the demo plan and a synchronous run. */
+@ExtendWith(ApplicationExtension.class)
+class MainWindowFxTest {
+    private EditorModel model;
+    private MainWindow window;
+
+    @Start
+    void start(Stage stage) {
+        model = new EditorModel(TaskRunner.direct());
+        window = new MainWindow(model, stage::close);
+        stage.setScene(new Scene(window.root(), 1200, 740));
+        stage.show();
+        assertTrue(window.open(Path.of(BaywrightApp.DEMO)));
+    }
+
+    private static String text(FxRobot robot, String query) {
+        return robot.lookup(query).queryAs(Label.class).getText();
+    }
+
+    @Test
+    void statusBarShowsTheWeightAndTheCaution(FxRobot robot) {
+        assertAll(
+                () -> assertTrue(text(robot, "#status-weight").matches("Steel [0-9,]+ lb .*"), text(robot, "#status-weight")),
+                () -> assertTrue(text(robot, "#status-area").contains("lb/ft²")),
+                () -> assertTrue(text(robot, "#status-ratio").startsWith("Highest ratio 0.") || text(robot, "#status-ratio").startsWith("Highest ratio 1.")),
+                () -> assertEquals(Caution.TEXT, text(robot, "#caution")),
+                () -> assertTrue(MainWindow.aboutText().contains(Caution.TEXT)));
+    }
+
+    @Test
+    void toolsArePresentAndOnlySelectIsEnabled(FxRobot robot) {
+        for (String name : MainWindow.TOOLS) {
+            ToggleButton b = robot.lookup("#tool-" + name.toLowerCase(java.util.Locale.ROOT).replace(' ', '-'))
+                    .queryAs(ToggleButton.class);
+            assertEquals(name, b.getText());
+            assertEquals(!name.equals("Select"), b.isDisabled(), name);
+        }
+    }
+
+    @Test
+    void clickingAMemberShowsItsSectionInProperties(FxRobot robot) {
+        MemberResult target = model.currentMembers().stream()
+                .filter(m -> m.status() == MemberStatus.SIZED && m.length() > 8)
+                .findFirst().orElseThrow();
+        PlanCanvas canvas = window.canvas();
+        double mx = (target.start().x() + target.end().x()) / 2;
+        double my = (target.start().y() + target.end().y()) / 2;
+        Point2D local = canvas.transform().toScreen(mx, my);
+        assertEquals(java.util.Optional.of(target.id()), canvas.memberAt(local.getX(), local.getY()),
+                "the hit test finds the member at its own midpoint");
+        Point2D onScreen = canvas.localToScreen(local);
+        robot.clickOn(onScreen);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertAll(
+                () -> assertEquals(target.id(), model.selectedProperty().get()),
+                () -> assertEquals(target.id(), text(robot, "#prop-member")),
+                () -> assertEquals(target.section(), text(robot, "#prop-section")),
+                () -> assertEquals("sized", text(robot, "#prop-status")));
+        // clicking empty background clears the selection
+        robot.clickOn(canvas.localToScreen(new Point2D(5, 5)));
+        WaitForAsyncUtils.waitForFxEvents();
+        assertFalse(robot.lookup("#prop-section").tryQuery().isPresent());
+    }
+
+    @Test
+    void zoomToFitRestoresTheWholePlanAfterZoomingIn(FxRobot robot) {
+        PlanCanvas canvas = window.canvas();
+        ViewTransform fitted = canvas.transform();
+        double[] b = canvas.bounds();
+        assertTrue(fitted.screenX(b[0]) >= PlanCanvas.FIT_MARGIN - 1e-6);
+        assertTrue(fitted.screenX(b[2]) <= canvas.getWidth() - PlanCanvas.FIT_MARGIN + 1e-6);
+        assertTrue(fitted.screenY(b[3]) >= PlanCanvas.FIT_MARGIN - 1e-6);
+        assertTrue(fitted.screenY(b[1]) <= canvas.getHeight() - PlanCanvas.FIT_MARGIN + 1e-6);
+
+        robot.interact(() -> canvas.setTransform(fitted.zoomAt(200, 200, 3).panBy(40, -25)));
+        assertNotEquals(fitted, canvas.transform());
+        Node fit = robot.lookup("#zoom-fit").query();
+        robot.clickOn(fit);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(fitted, canvas.transform());
+    }
+
+    @Test
+    void levelSelectorChangesTheLevelShown(FxRobot robot) {
+        @SuppressWarnings("unchecked")
+        javafx.scene.control.ComboBox<String> levels = robot.lookup("#level-selector").queryAs(javafx.scene.control.ComboBox.class);
+        assertEquals("Level 2", levels.getValue());
+        robot.interact(() -> levels.setValue("Roof"));
+        assertEquals("Roof", model.levelProperty().get());
+        assertEquals("roof", model.currentFloor().orElseThrow().id());
+    }
+}

@@ -151,6 +151,43 @@ public final class EditorModel {
     }
 
     /** The level names, bottom to top. */
+    // ---- exports: the same entry points as the command line's design --drawing/--report/--takeoff/--schedule
+
+    /** Writes the framing plan of the current level; the format follows the extension (.svg, .png, .pdf). */
+    public void exportDrawing(Path out) throws java.io.IOException {
+        RunResult r = requireRun();
+        org.baywright.report.drawing.DrawingExport.write(r, levelProperty().get(), out,
+                org.baywright.report.drawing.DrawingOptions.defaults().withUnits(units())
+                        .withDate(java.time.LocalDate.now().toString()));
+    }
+
+    /** Writes the calculation package (PDF). */
+    public void exportPackage(Path out) throws java.io.IOException {
+        RunResult r = requireRun();
+        org.baywright.report.pdf.CalculationPackage.write(r, out, org.baywright.report.pdf.PackageOptions.of(units())
+                .withProject(org.baywright.report.pdf.ProjectInfo.named(r.plan().name(), java.time.LocalDate.now())));
+    }
+
+    /** Writes the steel takeoff (CSV) with a connection allowance in percent. */
+    public void exportTakeoff(Path out, double allowancePercent) throws java.io.IOException {
+        java.nio.file.Files.writeString(out, org.baywright.report.Takeoff.of(requireRun(), allowancePercent).csv(units()),
+                java.nio.charset.StandardCharsets.UTF_8);
+    }
+
+    /** Writes the column schedule (CSV). */
+    public void exportSchedule(Path out) throws java.io.IOException {
+        java.nio.file.Files.writeString(out, org.baywright.report.ColumnSchedule.csv(requireRun(), units()),
+                java.nio.charset.StandardCharsets.UTF_8);
+    }
+
+    private RunResult requireRun() {
+        RunResult r = run();
+        if (r == null || r.takedown() == null) {
+            throw new IllegalStateException("the plan has not been designed yet; nothing to export");
+        }
+        return r;
+    }
+
     public List<String> levelNames() {
         Plan p = plan.get();
         return p == null ? List.of() : p.levels().stream().map(Level::name).toList();

@@ -128,7 +128,18 @@ public final class MainWindow {
         MenuItem quit = item("Exit", null, exit);
         save.disableProperty().bind(model.planProperty().isNull());
         saveAs.disableProperty().bind(model.planProperty().isNull());
-        Menu file = new Menu("File", null, open, save, saveAs, new SeparatorMenuItem(), quit);
+        Menu export = new Menu("Export", null,
+                item("Framing plan of this level…", null, () -> export("Export the framing plan", "level.pdf",
+                        new String[] {"*.pdf", "*.svg", "*.png"}, model::exportDrawing)),
+                item("Calculation package…", null, () -> export("Export the calculation package", "calculations.pdf",
+                        new String[] {"*.pdf"}, model::exportPackage)),
+                item("Takeoff…", null, () -> export("Export the takeoff", "takeoff.csv", new String[] {"*.csv"},
+                        p -> model.exportTakeoff(p, 0))),
+                item("Column schedule…", null, () -> export("Export the column schedule", "columns.csv",
+                        new String[] {"*.csv"}, model::exportSchedule)));
+        export.setId("menu-export");
+        export.disableProperty().bind(model.runProperty().isNull());
+        Menu file = new Menu("File", null, open, save, saveAs, new SeparatorMenuItem(), export, new SeparatorMenuItem(), quit);
         MenuItem fit = item("Zoom to fit", "Shortcut+0", canvas::zoomToFit);
         fit.setId("menu-zoom-fit");
         MenuItem rerun = item("Run again", "F5", model::rerun);
@@ -362,6 +373,29 @@ public final class MainWindow {
             model.saveAs(chosen.toPath());
         } catch (IOException | RuntimeException e) {
             error("The plan was not saved", e);
+        }
+    }
+
+    /** An export that writes one file. */
+    @FunctionalInterface
+    interface Exporter {
+        void write(Path out) throws IOException;
+    }
+
+    private void export(String title, String name, String[] patterns, Exporter exporter) {
+        FileChooser chooser = new FileChooser();
+        chooser.setTitle(title);
+        chooser.setInitialFileName(name);
+        chooser.getExtensionFilters().add(new FileChooser.ExtensionFilter(String.join(", ", patterns), patterns));
+        File chosen = chooser.showSaveDialog(window());
+        if (chosen == null) {
+            return;
+        }
+        try {
+            exporter.write(chosen.toPath());
+            model.messageProperty().set("Wrote " + chosen.getName());
+        } catch (IOException | RuntimeException e) {
+            error("Nothing was exported", e);
         }
     }
 

@@ -1,0 +1,38 @@
+package org.baywright.ui;
+
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** File ▸ Export: the editor writes the same deliverables as {@code design --drawing/--report/--takeoff/--schedule}. */
+class EditorExportTest {
+    @Test
+    void exportsEveryDeliverableOfTheOpenPlan(@TempDir Path dir) throws Exception {
+        EditorModel m = new EditorModel(TaskRunner.direct());
+        assertTrue(m.open(EditorModelTest.DEMO).opened());
+        m.levelProperty().set("Level 3");
+        Path svg = dir.resolve("level-3.svg");
+        Path pdf = dir.resolve("calc.pdf");
+        Path takeoff = dir.resolve("takeoff.csv");
+        Path schedule = dir.resolve("columns.csv");
+        m.exportDrawing(svg);
+        m.exportPackage(pdf);
+        m.exportTakeoff(takeoff, 10);
+        m.exportSchedule(schedule);
+        assertTrue(Files.readString(svg).contains("Level 3"), "the drawing is of the selected level");
+        assertTrue(Files.size(pdf) > 100_000, "calculation package");
+        assertTrue(Files.readString(takeoff).startsWith("group,item,count,length[ft],weight[lb]"));
+        assertTrue(Files.readString(takeoff).contains("allowance 10.0 %"));
+        assertTrue(Files.readString(schedule).startsWith("column,grid,position,level,section"));
+    }
+
+    @Test
+    void nothingToExportBeforeAPlanIsDesigned(@TempDir Path dir) {
+        EditorModel m = new EditorModel(TaskRunner.direct());
+        assertThrows(IllegalStateException.class, () -> m.exportSchedule(dir.resolve("x.csv")));
+    }
+}

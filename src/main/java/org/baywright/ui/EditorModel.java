@@ -47,6 +47,12 @@ public final class EditorModel {
     private final StringProperty message = new SimpleStringProperty(this, "message", "");
     private final ObservableList<Problem> problems = FXCollections.observableArrayList();
     private List<Problem> fileProblems = List.of();
+    private final EditHistory<Plan> history = new EditHistory<>(200);
+    private final BooleanProperty dirty = new SimpleBooleanProperty(this, "dirty");
+    private final BooleanProperty canUndo = new SimpleBooleanProperty(this, "canUndo");
+    private final BooleanProperty canRedo = new SimpleBooleanProperty(this, "canRedo");
+    /** The plan as last saved or opened, to tell whether there are unsaved changes. */
+    private Plan savedPlan;
     private long generation;
 
     public EditorModel(TaskRunner runner) {
@@ -99,8 +105,69 @@ public final class EditorModel {
         boolean has = p.levels().stream().anyMatch(l -> l.name().equals(keep));
         level.set(has ? keep : p.levels().isEmpty() ? null : p.levels().get(0).name());
         plan.set(p);
+        history.reset(p);
+        savedPlan = p;
+        updateEditState();
         problems.setAll(fileProblems);
         rerun();
+    }
+
+    // ---- edits, undo and redo: a plan is a value, an edit is the next value --------------------
+
+    /** Applies an edit (the edited plan) with a label for the Edit menu, and runs it. */
+    public void apply(Plan edited, String label) {
+        Objects.requireNonNull(edited, "edited");
+        if (plan.get() == null || edited.equals(plan.get())) {
+            return;
+        }
+        history.push(edited, label);
+        showEdited(edited);
+    }
+
+    /** Undoes the last edit; false when there is nothing to undo. */
+    public boolean undo() {
+        return history.undo().map(p -> {
+            showEdited(p);
+            return true;
+        }).orElse(false);
+    }
+
+    /** Redoes the last undone edit; false when there is nothing to redo. */
+    public boolean redo() {
+        return history.redo().map(p -> {
+            showEdited(p);
+            return true;
+        }).orElse(false);
+    }
+
+    private void showEdited(Plan p) {
+        plan.set(p);
+        updateEditState();
+        rerun();
+    }
+
+    private void updateEditState() {
+        dirty.set(plan.get() != null && !plan.get().equals(savedPlan));
+        canUndo.set(history.canUndo());
+        canRedo.set(history.canRedo());
+    }
+
+    /** True while the plan differs from the one last opened or saved. */
+    public ReadOnlyBooleanProperty dirtyProperty() {
+        return dirty;
+    }
+
+    public ReadOnlyBooleanProperty canUndoProperty() {
+        return canUndo;
+    }
+
+    public ReadOnlyBooleanProperty canRedoProperty() {
+        return canRedo;
+    }
+
+    /** Label of the edit undo would revert ("" when none). */
+    public String undoLabel() {
+        return history.undoLabel();
     }
 
     /** Runs the current plan again. */
@@ -136,6 +203,8 @@ public final class EditorModel {
             throw new IllegalStateException("the plan has no file yet; use Save As");
         }
         PlanFiles.write(plan.get(), f);
+        savedPlan = plan.get();
+        updateEditState();
         message.set("Saved " + f.getFileName() + ".");
     }
 
@@ -147,6 +216,8 @@ public final class EditorModel {
         }
         PlanFiles.write(plan.get(), f);
         file.set(f);
+        savedPlan = plan.get();
+        updateEditState();
         message.set("Saved " + f.getFileName() + ".");
     }
 

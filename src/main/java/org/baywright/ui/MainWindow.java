@@ -140,12 +140,17 @@ public final class MainWindow {
         export.setId("menu-export");
         export.disableProperty().bind(model.runProperty().isNull());
         Menu file = new Menu("File", null, open, save, saveAs, new SeparatorMenuItem(), export, new SeparatorMenuItem(), quit);
+        MenuItem undo = item("Undo", "Shortcut+Z", model::undo);
+        MenuItem redo = item("Redo", "Shortcut+Shift+Z", model::redo);
+        undo.disableProperty().bind(model.canUndoProperty().not());
+        redo.disableProperty().bind(model.canRedoProperty().not());
+        Menu edit = new Menu("Edit", null, undo, redo);
         MenuItem fit = item("Zoom to fit", "Shortcut+0", canvas::zoomToFit);
         fit.setId("menu-zoom-fit");
         MenuItem rerun = item("Run again", "F5", model::rerun);
         Menu view = new Menu("View", null, fit, rerun);
         Menu help = new Menu("Help", null, item("About Baywright", null, this::about));
-        MenuBar bar = new MenuBar(file, view, help);
+        MenuBar bar = new MenuBar(file, edit, view, help);
         bar.setId("menu-bar");
         return bar;
     }

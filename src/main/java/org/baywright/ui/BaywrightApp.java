@@ -29,6 +29,11 @@ public final class BaywrightApp extends Application {
         stage.setScene(scene);
         stage.titleProperty().bind(javafx.beans.binding.Bindings.createStringBinding(window::title,
                 model.planProperty(), model.fileProperty()));
+        stage.setOnCloseRequest(e -> {
+            if (!window.confirmDiscard()) {
+                e.consume();
+            }
+        });
         stage.show();
         List<String> args = getParameters().getRaw();
         openFirst(window, model, args.isEmpty() ? null : Path.of(args.get(0)));

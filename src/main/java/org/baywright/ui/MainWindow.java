@@ -14,6 +14,8 @@ import javafx.geometry.Pos;
 import javafx.scene.Node;
 import javafx.scene.Parent;
 import javafx.scene.control.Alert;
+import javafx.scene.control.ButtonBar;
+import javafx.scene.control.ButtonType;
 import javafx.scene.control.Button;
 import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
@@ -125,7 +127,11 @@ public final class MainWindow {
         MenuItem open = item("Open…", "Shortcut+O", this::chooseAndOpen);
         MenuItem save = item("Save", "Shortcut+S", this::save);
         MenuItem saveAs = item("Save As…", "Shortcut+Shift+S", this::saveAs);
-        MenuItem quit = item("Exit", null, exit);
+        MenuItem quit = item("Exit", null, () -> {
+            if (confirmDiscard()) {
+                exit.run();
+            }
+        });
         save.disableProperty().bind(model.planProperty().isNull());
         saveAs.disableProperty().bind(model.planProperty().isNull());
         Menu export = new Menu("Export", null,
@@ -310,6 +316,9 @@ public final class MainWindow {
     }
 
     private void chooseAndOpen() {
+        if (!confirmDiscard()) {
+            return;
+        }
         FileChooser chooser = new FileChooser();
         chooser.setTitle("Open plan");
         chooser.getExtensionFilters().addAll(new FileChooser.ExtensionFilter("Baywright plans", "*" + PlanFiles.EXTENSION),
@@ -350,6 +359,29 @@ public final class MainWindow {
         text.setId("open-problems");
         a.getDialogPane().setContent(new VBox(6, new Label(problems.size() == 1 ? "1 problem:" : problems.size() + " problems:"), text));
         a.show();
+    }
+
+    /**
+     * Asks before unsaved changes would be lost: Save (then go on if it was saved), Discard, or Cancel.
+     * True when it is fine to go on.
+     */
+    public boolean confirmDiscard() {
+        if (!model.dirtyProperty().get()) {
+            return true;
+        }
+        ButtonType saveIt = new ButtonType("Save", ButtonBar.ButtonData.YES);
+        ButtonType discard = new ButtonType("Discard changes", ButtonBar.ButtonData.NO);
+        Alert a = new Alert(Alert.AlertType.CONFIRMATION, "The plan has changes that are not saved.", saveIt, discard,
+                ButtonType.CANCEL);
+        a.initOwner(window());
+        a.setTitle("Baywright");
+        a.setHeaderText("Save the changes to " + model.plan().name() + "?");
+        ButtonType answer = a.showAndWait().orElse(ButtonType.CANCEL);
+        if (answer == saveIt) {
+            save();
+            return !model.dirtyProperty().get();
+        }
+        return answer == discard;
     }
 
     private void save() {

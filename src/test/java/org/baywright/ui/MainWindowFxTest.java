@@ -114,4 +114,27 @@ class MainWindowFxTest {
         assertEquals("Roof", model.levelProperty().get());
         assertEquals("roof", model.currentFloor().orElseThrow().id());
     }
+
+    @Test
+    void undoAndRedoFromTheEditMenuAndTheUnsavedChangesPrompt(FxRobot robot) {
+        org.baywright.plan.Plan original = model.plan();
+        robot.interact(() -> model.apply(org.baywright.study.Variations.beamSpacing(original,
+                org.baywright.units.Units.FT_.toSi(7.5)), "beams at 7.5 ft"));
+        assertTrue(model.dirtyProperty().get());
+        robot.clickOn("Edit").clickOn("Undo");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(original, model.plan(), "Edit > Undo restores the plan exactly");
+        robot.clickOn("Edit").clickOn("Redo");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertNotEquals(original, model.plan());
+        // Exit with unsaved changes asks first; Cancel keeps everything
+        robot.clickOn("File").clickOn("Exit");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(robot.lookup("Save the changes to " + original.name() + "?").tryQuery().isPresent(),
+                "the prompt names the plan");
+        robot.clickOn("Cancel");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(model.dirtyProperty().get(), "nothing was lost");
+        assertNotEquals(original, model.plan(), "the edited plan is still open");
+    }
 }

@@ -186,7 +186,7 @@ final class ColumnDesigner {
             weightAbove += chosen.weight() * length;
         }
         // foundation: the bottom storey
-        StoreyLoad bottom = result[0].storeys().isEmpty() ? null : result[0].storeys().get(0);
+        StoreyLoad bottom = result.length == 0 || result[0].storeys().isEmpty() ? null : result[0].storeys().get(0);
         double[] found = bottom == null ? new double[LoadCase.values().length] : bottom.unreduced();
         double[] foundRed = bottom == null ? new double[LoadCase.values().length] : bottom.reduced();
         return new ColumnResult(c.id(), c.grid(), c.at(), kll, (String) pos[1], List.of(result), found, foundRed);

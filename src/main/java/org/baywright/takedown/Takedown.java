@@ -649,6 +649,10 @@ public final class Takedown {
 
     private TakedownResult run() {
         List<Level> levels = plan.levels();
+        if (levels.isEmpty()) {
+            problems.add(Problem.error("no-levels", "/levels", "", "the plan has no levels, so nothing stands on the"
+                    + " columns; add at least one level with a floor layout"));
+        }
         Map<String, Integer> levelIndex = new HashMap<>();
         for (int i = 0; i < levels.size(); i++) {
             levelIndex.put(levels.get(i).name(), i);

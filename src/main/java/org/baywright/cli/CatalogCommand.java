@@ -27,6 +27,7 @@ import org.baywright.catalog.ShapesTableImport;
 import org.baywright.io.JsonText;
 import org.baywright.units.UnitSystem;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -45,6 +46,18 @@ public final class CatalogCommand implements Runnable {
         spec.commandLine().usage(spec.commandLine().getOut());
     }
 
+    /** The options {@code list} and {@code show} share. */
+    static final class ViewOptions {
+        @Option(names = "--catalog", paramLabel = "FILE", description = "Catalog file (default: built-in W shapes).")
+        Path catalog;
+
+        @Option(names = "--units", paramLabel = "us|si", description = "Units (default us).")
+        String units;
+
+        @Option(names = "--json", description = "Print JSON.")
+        boolean json;
+    }
+
     static UnitSystem units(String text) {
         if (text == null) {
             return UnitSystem.US;
@@ -61,20 +74,14 @@ public final class CatalogCommand implements Runnable {
         @Option(names = "--series", paramLabel = "LIST", split = ",", description = "Only these nominal-depth series, e.g. W18 or W14,W16.")
         List<String> series = new ArrayList<>();
 
-        @Option(names = "--catalog", paramLabel = "FILE", description = "Catalog file (default: built-in W shapes).")
-        Path catalog;
-
-        @Option(names = "--units", paramLabel = "us|si", description = "Units (default us).")
-        String units;
-
-        @Option(names = "--json", description = "Print JSON.")
-        boolean json;
+        @Mixin
+        ViewOptions view;
 
         @Override
         public Integer call() {
             PrintWriter out = spec.commandLine().getOut();
-            UnitSystem us = units(units);
-            Catalog cat = Catalogs.load(catalog);
+            UnitSystem us = units(view.units);
+            Catalog cat = Catalogs.load(view.catalog);
             Set<String> wanted = new LinkedHashSet<>();
             for (String s : series) {
                 String n = Section.normalize(s);
@@ -84,7 +91,7 @@ public final class CatalogCommand implements Runnable {
                 wanted.add(n);
             }
             List<Section> list = cat.sections().stream().filter(s -> wanted.isEmpty() || wanted.contains(s.series())).toList();
-            if (json) {
+            if (view.json) {
                 List<Object> arr = new ArrayList<>();
                 for (Section s : list) {
                     arr.add(summary(s, us));
@@ -122,23 +129,17 @@ public final class CatalogCommand implements Runnable {
         @Parameters(paramLabel = "DESIGNATION", description = "e.g. W18X50")
         String designation;
 
-        @Option(names = "--catalog", paramLabel = "FILE", description = "Catalog file (default: built-in W shapes).")
-        Path catalog;
-
-        @Option(names = "--units", paramLabel = "us|si", description = "Units (default us).")
-        String units;
-
-        @Option(names = "--json", description = "Print JSON.")
-        boolean json;
+        @Mixin
+        ViewOptions view;
 
         @Override
         public Integer call() {
             PrintWriter out = spec.commandLine().getOut();
-            UnitSystem us = units(units);
-            Catalog cat = Catalogs.load(catalog);
+            UnitSystem us = units(view.units);
+            Catalog cat = Catalogs.load(view.catalog);
             Section s = cat.find(designation).orElseThrow(() -> new BadInputException("\"" + designation
                     + "\" is not in the catalog " + cat.name() + "; see 'baywright catalog list'"));
-            if (json) {
+            if (view.json) {
                 Map<String, Object> o = summary(s, us);
                 o.put("units", us.name().toLowerCase(Locale.ROOT));
                 Map<String, Object> comp = new LinkedHashMap<>();

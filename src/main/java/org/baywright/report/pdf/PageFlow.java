@@ -406,30 +406,26 @@ final class PageFlow {
 
     /** A level-2 heading, kept with at least {@code keep} points of what follows. */
     void heading2(String text, float keep) {
-        if (!atTop()) {
-            gap(6);
-        }
-        List<String> lines = wrap(h2, text, width());
-        ensure(h2.leading() * lines.size() + keep);
-        for (String l : lines) {
-            text(h2, left(), y - h2.size(), l);
-            y -= h2.leading();
-        }
-        y -= 3;
+        keptHeading(h2, text, keep, 6, 3);
     }
 
     /** A level-3 heading, kept with at least {@code keep} points of what follows. */
     void heading3(String text, float keep) {
+        keptHeading(h3, text, keep, 4, 1);
+    }
+
+    /** A wrapped heading in {@code style}, with a gap before it (unless at the top) and after it. */
+    private void keptHeading(Style style, String text, float keep, float before, float after) {
         if (!atTop()) {
-            gap(4);
+            gap(before);
         }
-        List<String> lines = wrap(h3, text, width());
-        ensure(h3.leading() * lines.size() + keep);
+        List<String> lines = wrap(style, text, width());
+        ensure(style.leading() * lines.size() + keep);
         for (String l : lines) {
-            text(h3, left(), y - h3.size(), l);
-            y -= h3.leading();
+            text(style, left(), y - style.size(), l);
+            y -= style.leading();
         }
-        y -= 1;
+        y -= after;
     }
 
     /** Label–value pairs in two columns, the label in bold. */

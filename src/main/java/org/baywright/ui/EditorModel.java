@@ -112,6 +112,17 @@ public final class EditorModel {
         rerun();
     }
 
+    /**
+     * Shows a plan recovered from an autosave: it runs like an opened plan but counts as unsaved, so
+     * closing it asks first. {@code path} is the file it was autosaved from (null when it had none).
+     */
+    public void openRecovered(Plan p, Path path) {
+        setPlan(p, path, List.of());
+        savedPlan = null;
+        updateEditState();
+        message.set("Recovered unsaved work; save it to keep it.");
+    }
+
     // ---- edits, undo and redo: a plan is a value, an edit is the next value --------------------
 
     /** Applies an edit (the edited plan) with a label for the Edit menu, and runs it. */

@@ -55,7 +55,14 @@ public final class Framing {
         return out;
     }
 
-    /** Number of beams: the count, or the fewest with spacing ≤ maxSpacing. */
+    /**
+     * Relative slack when a bay is a whole number of spacings: plan files keep ten significant digits
+     * (and US files convert feet to metres), so a bay of exactly two spacings may read back a few parts
+     * in 10⁹ either side of 2. One part per million is far below any drawing tolerance.
+     */
+    static final double WHOLE_SPACINGS_SLACK = 1e-6;
+
+    /** Number of beams: the count, or the fewest with spacing ≤ maxSpacing (to {@link #WHOLE_SPACINGS_SLACK}). */
     public static int beamCount(Infill inf, double bayWidth) {
         if (inf.count() > 0) {
             return inf.count();
@@ -63,6 +70,6 @@ public final class Framing {
         if (!(inf.maxSpacing() > 0) || !(bayWidth > 0)) {
             return 0;
         }
-        return Math.max(0, (int) Math.ceil(bayWidth / inf.maxSpacing() - 1e-9) - 1);
+        return Math.max(0, (int) Math.ceil(bayWidth / inf.maxSpacing() - WHOLE_SPACINGS_SLACK) - 1);
     }
 }

@@ -13,8 +13,14 @@ package org.baywright.takedown;
  *     by the load per length times a few grid steps per path point
  */
 public record Equilibrium(String loadCase, double applied, double reactions, double slack) {
-    /** Relative tolerance of the check. */
-    public static final double TOLERANCE = 1e-9;
+    /**
+     * Relative tolerance of the check: one part per million. The deck load reaches the members through
+     * tributary polygons and is applied through the area loads' own overlay, two computations on the
+     * 1 µm grid of the geometry; where members coincide or an opening grazes a slab edge they differ by
+     * up to about 1e-8 of the load (found by the plan fuzz test: 1.45e-8 of D on a 3 m bay, 0.0003 N).
+     * Lost load worth reporting is many orders above this.
+     */
+    public static final double TOLERANCE = 1e-6;
 
     /** A check with no geometric slack. */
     public Equilibrium(String loadCase, double applied, double reactions) {

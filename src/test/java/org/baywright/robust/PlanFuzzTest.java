@@ -148,6 +148,35 @@ class PlanFuzzTest {
         }
     }
 
+    /**
+     * Plans the property once found wrong, kept as examples. First: a bay of exactly two beam spacings,
+     * whose beam count flipped when the file's ten significant digits moved the ratio across 2 by a few
+     * parts in 10⁹. Second: a member lying on a column-line beam, whose deck split left 1.45e-8 of the
+     * dead load (0.0003 N) between the two overlays; the equilibrium tolerance is now one part per
+     * million. Third: an opening grazing the slab edge, 2.9e-9 of the roof live load.
+     */
+    @Example
+    void plansOnceFoundWrong() {
+        LoadValues floor = new LoadValues(1500, 0, 0, 0, 0, 0);
+        randomPlansRunAndSurviveTheirFile(new Recipe(
+                new Frame("us", List.of(3.0, 3.049, 3.602), List.of(3.0), List.of(2.8), true, 1.801, floor,
+                        new LoadValues(500.15, 11.96, 0, 0.45, 2367.17, 0)),
+                new Options("asd", false, false, false, 0.0, 3, 0.0, 2),
+                List.of(new DeckSplitX(true, 0.1003, -0.11, 0.0),
+                        new LineX(false, List.of(0.1214, -0.0077, 0.0998, 1.1), 0.04, 1418.24))));
+        randomPlansRunAndSurviveTheirFile(new Recipe(
+                new Frame("us", List.of(3.0), List.of(3.001), List.of(2.8), true, 1.8, floor,
+                        new LoadValues(500, 0, 0, 0, 0, 0)),
+                new Options("lrfd", true, true, true, 0.0, 1, 0.0, 0),
+                List.of(new FreeMemberX(false, 0.0, 0.0, 0.0, 0.0167, true))));
+        randomPlansRunAndSurviveTheirFile(new Recipe(
+                new Frame("si", List.of(3.002, 3.325), List.of(3.046, 3.007), List.of(2.8011, 4.3248, 2.8092), false, 2.455,
+                        new LoadValues(1501.8, 86.84, 0.42, 0, 0, 0.14), new LoadValues(502.03, 0.71, 0, 89.88, 0.36, 0)),
+                new Options("asd", false, false, false, 0.0, 1, 1500.0, 0),
+                List.of(new BayBeamX(false, 0.2173, 0.0526, true, false), new FreeMemberX(true, 0.0, 1.0E-4, 1.0, 1.0, false),
+                        new OpeningX(true, 0.1914, -0.0089, 0.0337, 0.0207))));
+    }
+
     /** The catalog named in the settings: a missing or unusable file is a located problem, not an exception. */
     @Example
     void aBadCatalogNameIsAProblemNotAnException() {

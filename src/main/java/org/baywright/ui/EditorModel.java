@@ -46,6 +46,16 @@ public final class EditorModel {
     private final BooleanProperty running = new SimpleBooleanProperty(this, "running");
     private final StringProperty message = new SimpleStringProperty(this, "message", "");
     private final ObservableList<Problem> problems = FXCollections.observableArrayList();
+    private final javafx.collections.ObservableSet<String> selection = FXCollections.observableSet(new java.util.LinkedHashSet<>());
+    private final ObjectProperty<Tool> tool = new SimpleObjectProperty<>(this, "tool", Tool.SELECT);
+    private final ToolSettings toolSettings = new ToolSettings();
+    private final BooleanProperty showReactions = new SimpleBooleanProperty(this, "showReactions");
+    private final BooleanProperty showTributary = new SimpleBooleanProperty(this, "showTributary");
+    private final javafx.beans.property.IntegerProperty opened = new javafx.beans.property.SimpleIntegerProperty(this, "opened");
+    private final ObjectProperty<Problem> shownProblem = new SimpleObjectProperty<>(this, "shownProblem");
+    /** Milliseconds from each edit to its run on screen, newest last (at most {@value #LATENCY_KEPT}). */
+    private final java.util.ArrayDeque<Double> latencies = new java.util.ArrayDeque<>();
+    static final int LATENCY_KEPT = 500;
     private List<Problem> fileProblems = List.of();
     private final EditHistory<Plan> history = new EditHistory<>(200);
     private final BooleanProperty dirty = new SimpleBooleanProperty(this, "dirty");
@@ -61,6 +71,15 @@ public final class EditorModel {
             String id = selected.get();
             if (id != null && currentMembers().stream().noneMatch(m -> m.id().equals(id))) {
                 selected.set(null);
+            }
+            selection.clear();
+        });
+        selected.addListener((o, was, now) -> {
+            if (now == null) {
+                selection.clear();
+            } else if (!selection.contains(now)) {
+                selection.clear();
+                selection.add(now);
             }
         });
     }
@@ -98,6 +117,7 @@ public final class EditorModel {
         Objects.requireNonNull(p, "plan");
         fileProblems = List.copyOf(warnings);
         selected.set(null);
+        selection.clear();
         run.set(null);
         file.set(path);
         // the level first, so that whoever redraws on the new plan sees a level of it
@@ -105,6 +125,7 @@ public final class EditorModel {
         boolean has = p.levels().stream().anyMatch(l -> l.name().equals(keep));
         level.set(has ? keep : p.levels().isEmpty() ? null : p.levels().get(0).name());
         plan.set(p);
+        opened.set(opened.get() + 1);
         history.reset(p);
         savedPlan = p;
         updateEditState();
@@ -153,8 +174,146 @@ public final class EditorModel {
 
     private void showEdited(Plan p) {
         plan.set(p);
+        // keep what is still there selected
+        Optional<Floor> f = currentFloor();
+        selection.removeIf(id -> !exists(p, f, id));
+        if (selected.get() != null && !exists(p, f, selected.get())) {
+            selected.set(null);
+        }
         updateEditState();
         rerun();
+    }
+
+    private static boolean exists(Plan p, Optional<Floor> f, String id) {
+        if (p.columns().stream().anyMatch(c -> c.id().equals(id))) {
+            return true;
+        }
+        if (f.isEmpty()) {
+            return false;
+        }
+        Floor fl = f.get();
+        String base = id.contains("/") ? id.substring(0, id.indexOf('/')) : id;
+        return fl.members().stream().anyMatch(m -> m.id().equals(id)) || fl.infills().stream().anyMatch(i -> i.id().equals(base))
+                || fl.openings().stream().anyMatch(o -> o.id().equals(id)) || fl.areaLoads().stream().anyMatch(a -> a.id().equals(id))
+                || fl.lineLoads().stream().anyMatch(l -> l.id().equals(id)) || fl.pointLoads().stream().anyMatch(q -> q.id().equals(id))
+                || fl.decks().stream().anyMatch(d -> d.id().equals(id));
+    }
+
+    /**
+     * Applies an edit given as a function of the current plan. An edit the plan refuses (an
+     * {@link IllegalArgumentException} from {@link org.baywright.plan.PlanEdits}) changes nothing and
+     * its reason becomes the message; returns whether the plan changed.
+     */
+    public boolean edit(java.util.function.UnaryOperator<Plan> change, String label) {
+        Plan p = plan.get();
+        if (p == null) {
+            message.set("No plan is open: use File › New or File › Open.");
+            return false;
+        }
+        Plan next;
+        try {
+            next = change.apply(p);
+        } catch (IllegalArgumentException e) {
+            message.set("Not done: " + e.getMessage() + ".");
+            return false;
+        }
+        if (next.equals(p)) {
+            return false;
+        }
+        apply(next, label);
+        message.set(label + ".");
+        return true;
+    }
+
+    /** The id of the floor layout at the current level. */
+    public String currentFloorId() {
+        return currentFloor().map(Floor::id).orElse(null);
+    }
+
+    /** The objects selected on the canvas (members, columns, loads, openings), the primary one first. */
+    public javafx.collections.ObservableSet<String> selection() {
+        return selection;
+    }
+
+    /** Adds an object to the selection, or takes it out when it is in (shift-click). */
+    public void toggleSelected(String id) {
+        if (selection.contains(id)) {
+            selection.remove(id);
+            if (id.equals(selected.get())) {
+                selected.set(selection.isEmpty() ? null : selection.iterator().next());
+            }
+        } else {
+            selection.add(id);
+            if (selected.get() == null) {
+                selected.set(id);
+            }
+        }
+    }
+
+    /** Selects several objects at once (a box selection); the first is the primary. */
+    public void selectAll(java.util.Collection<String> ids, boolean add) {
+        if (!add) {
+            selected.set(null);
+            selection.clear();
+        }
+        selection.addAll(ids);
+        if (selected.get() == null && !selection.isEmpty()) {
+            selected.set(selection.iterator().next());
+        }
+    }
+
+    /** Deletes the selected objects (one undoable edit). */
+    public boolean deleteSelection() {
+        if (selection.isEmpty()) {
+            return false;
+        }
+        List<String> ids = List.copyOf(selection);
+        String floorId = currentFloorId();
+        return edit(p -> org.baywright.plan.PlanEdits.delete(p, floorId, ids),
+                ids.size() == 1 ? "Deleted " + ids.get(0) : "Deleted " + ids.size() + " objects");
+    }
+
+    public ObjectProperty<Tool> toolProperty() {
+        return tool;
+    }
+
+    /** The options of the drawing tools (grid spacings, infill spacing, load values…). */
+    public ToolSettings toolSettings() {
+        return toolSettings;
+    }
+
+    /** Whether the canvas writes end reactions at member ends. */
+    public BooleanProperty showReactionsProperty() {
+        return showReactions;
+    }
+
+    /** Whether the canvas shades the members' tributary areas. */
+    public BooleanProperty showTributaryProperty() {
+        return showTributary;
+    }
+
+    /** Counts documents shown (opened, new, recovered); edits do not change it. */
+    public javafx.beans.property.ReadOnlyIntegerProperty openedProperty() {
+        return opened;
+    }
+
+    /** The problem picked in the Problems panel, drawn highlighted on the canvas. */
+    public ObjectProperty<Problem> shownProblemProperty() {
+        return shownProblem;
+    }
+
+    /** Edit-to-screen times of the latest runs, ms, oldest first. */
+    public List<Double> latencies() {
+        synchronized (latencies) {
+            return List.copyOf(latencies);
+        }
+    }
+
+    /** Starts a new, empty plan (the caller asks about unsaved changes first). */
+    public void newPlan(String name, UnitSystem units, int levels, double storeyHeight) {
+        setPlan(org.baywright.plan.PlanEdits.blank(name, units == UnitSystem.SI ? "si" : "us", levels, storeyHeight), null,
+                List.of());
+        message.set("New plan: type the grid spacings (Grid tool) to start.");
     }
 
     private void updateEditState() {
@@ -188,12 +347,19 @@ public final class EditorModel {
             return;
         }
         long gen = ++generation;
+        long started = System.nanoTime();
         running.set(true);
         message.set("Running…");
-        runner.submit(() -> PlanRun.run(p), r -> {
-            if (gen == generation) {
+        runner.submit(() -> generation == gen ? PlanRun.run(p) : null, r -> {
+            if (gen == generation && r != null) {
                 running.set(false);
                 run.set(r);
+                synchronized (latencies) {
+                    latencies.addLast((System.nanoTime() - started) / 1e6);
+                    if (latencies.size() > LATENCY_KEPT) {
+                        latencies.removeFirst();
+                    }
+                }
                 List<Problem> all = new ArrayList<>(fileProblems);
                 all.addAll(r.problems());
                 problems.setAll(all);

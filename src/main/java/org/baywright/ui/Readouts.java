@@ -94,4 +94,32 @@ public final class Readouts {
         }
         return parts.isEmpty() ? "0" : String.join(", ", parts);
     }
+
+    /** The non-zero values of a load, each with its case symbol, in a unit: "SD 15 psf, L 100 psf". */
+    static String values(org.baywright.plan.LoadValues v, org.baywright.units.Unit unit, int decimals) {
+        List<String> parts = new ArrayList<>();
+        String[] names = {"D", "SD", "L", "Lr", "S", "partitions"};
+        double[] xs = {v.dead(), v.superimposed(), v.live(), v.roofLive(), v.snow(), v.partition()};
+        for (int i = 0; i < xs.length; i++) {
+            if (xs[i] != 0) {
+                parts.add(names[i] + " " + UnitSystem.format(xs[i], unit, decimals));
+            }
+        }
+        return parts.isEmpty() ? "no load" : String.join(", ", parts);
+    }
+
+    /** An area load's values. */
+    public static String areaLoad(org.baywright.plan.LoadValues v, UnitSystem us) {
+        return values(v, us.areaLoad(), us == UnitSystem.US ? 0 : 2);
+    }
+
+    /** A line load's values. */
+    public static String lineLoad(org.baywright.plan.LoadValues v, UnitSystem us) {
+        return values(v, us.lineLoad(), 2);
+    }
+
+    /** A point load's values. */
+    public static String force(org.baywright.plan.LoadValues v, UnitSystem us) {
+        return values(v, us.force(), 1);
+    }
 }

@@ -53,13 +53,21 @@ class MainWindowFxTest {
     }
 
     @Test
-    void toolsArePresentAndOnlySelectIsEnabled(FxRobot robot) {
-        for (String name : MainWindow.TOOLS) {
-            ToggleButton b = robot.lookup("#tool-" + name.toLowerCase(java.util.Locale.ROOT).replace(' ', '-'))
-                    .queryAs(ToggleButton.class);
-            assertEquals(name, b.getText());
-            assertEquals(!name.equals("Select"), b.isDisabled(), name);
+    void everyToolIsOnTheToolBarAndItsKeyPicksIt(FxRobot robot) {
+        for (Tool t : Tool.values()) {
+            ToggleButton b = robot.lookup("#" + t.buttonId()).queryAs(ToggleButton.class);
+            assertEquals(t.label(), b.getText());
+            assertFalse(b.isDisabled(), t.label());
         }
+        robot.clickOn(window.canvas().localToScreen(new Point2D(5, 5)));
+        for (Tool t : Tool.values()) {
+            robot.type(t.key());
+            WaitForAsyncUtils.waitForFxEvents();
+            assertEquals(t, model.toolProperty().get(), "key " + t.key());
+            assertTrue(robot.lookup("#" + t.buttonId()).queryAs(ToggleButton.class).isSelected(), t.label());
+        }
+        robot.clickOn("#tool-select");
+        assertEquals(Tool.SELECT, model.toolProperty().get());
     }
 
     @Test

@@ -52,7 +52,6 @@ class EditorGesturesFxTest {
     @Start
     void start(Stage stage) {
         model = new EditorModel(TaskRunner.direct());
-        System.setProperty(RecentFiles.PROPERTY, System.getProperty("java.io.tmpdir") + "/baywright-test-recent.txt");
         window = new MainWindow(model, stage::close, new RecentFiles(Path.of(System.getProperty("java.io.tmpdir"),
                 "baywright-gestures-recent.txt")));
         stage.setScene(new Scene(window.root(), 1280, 800));

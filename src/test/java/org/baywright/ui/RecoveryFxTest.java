@@ -138,4 +138,30 @@ class RecoveryFxTest {
         assertFalse(robot.lookup("#recovery-list").tryQuery().isPresent());
         assertFalse(app.model().dirtyProperty().get(), "the demo plan is untouched");
     }
+
+    @Test
+    void closingWithDiscardChangesDeletesThisSessionsAutosave(FxRobot robot) throws Exception {
+        offered(robot);
+        robot.clickOn("#recovery-later");
+        WaitForAsyncUtils.waitForFxEvents();
+        Plan edited = renamed(app.model().plan(), "edited in this session");
+        robot.interact(() -> app.model().apply(edited, "rename"));
+        robot.interact(() -> app.recovery().saveNow());
+        RecoveryStore.Slot own = app.recovery().autosaver().slot();
+        WaitForAsyncUtils.waitFor(PATIENCE_SECONDS, TimeUnit.SECONDS, own::exists);
+        assertEquals(text(edited), text(own.planFile()));
+        // the window's close box: the unsaved-changes question, answered "Discard changes"
+        javafx.application.Platform.runLater(() -> stage.fireEvent(
+                new javafx.stage.WindowEvent(stage, javafx.stage.WindowEvent.WINDOW_CLOSE_REQUEST)));
+        WaitForAsyncUtils.waitFor(PATIENCE_SECONDS, TimeUnit.SECONDS,
+                () -> robot.lookup("Discard changes").tryQuery().isPresent());
+        robot.clickOn("Discard changes");
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.interact(() -> app.stop()); // what the toolkit calls once the last window has closed
+        assertAll(
+                () -> assertFalse(stage.isShowing()),
+                () -> assertFalse(own.exists(), "a clean close leaves no recovery file"),
+                () -> assertFalse(Files.exists(app.recovery().session().lockFile()), "and no lock"),
+                () -> assertTrue(Files.exists(leftFile), "the earlier session's work, kept for later, is untouched"));
+    }
 }

@@ -5,8 +5,10 @@ import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Duration;
 import java.util.List;
 import javafx.application.Application;
+import javafx.application.Platform;
 import javafx.scene.Scene;
 import javafx.stage.Stage;
 import org.baywright.plan.Problem;
@@ -14,6 +16,9 @@ import org.baywright.plan.Problem;
 /**
  * The Baywright editor. Opens the plan named as the first argument; with none, the demo plan
  * ({@value #DEMO} in the working folder, else the copy built into the jar), already run.
+ *
+ * <p>Unsaved work is autosaved to the recovery folder ({@link RecoveryStore}, {@link EditorRecovery});
+ * at start, plans autosaved by an editor that did not end normally are offered ({@link RecoveryDialog}).
  */
 public final class BaywrightApp extends Application {
     /** The demo plan, relative to the project folder. */
@@ -21,22 +26,136 @@ public final class BaywrightApp extends Application {
     /** The demo plan inside the jar. */
     static final String DEMO_RESOURCE = "/org/baywright/ui/demo/harbourview-offices.bay.json";
 
+    private final RecoveryStore store;
+    private final Duration interval;
+    private final List<String> args;
+    private final TaskRunner runner;
+
+    private EditorModel model;
+    private MainWindow window;
+    private Stage stage;
+    private EditorRecovery recovery;
+    /** True once the user has answered for unsaved changes on the way out (saved, discarded, or there were none). */
+    private boolean answered;
+
+    /** The editor as launched: recovery folder and autosave interval from the system properties. */
+    public BaywrightApp() {
+        this(null, null, null, null);
+    }
+
+    /**
+     * An editor with its recovery folder, autosave interval, arguments and run executor given (tests);
+     * a null takes what {@link #BaywrightApp()} takes.
+     */
+    BaywrightApp(RecoveryStore store, Duration interval, List<String> args, TaskRunner runner) {
+        this.store = store;
+        this.interval = interval;
+        this.args = args;
+        this.runner = runner;
+    }
+
     @Override
     public void start(Stage stage) {
-        EditorModel model = new EditorModel(TaskRunner.background());
-        MainWindow window = new MainWindow(model, stage::close);
-        Scene scene = new Scene(window.root(), 1440, 900);
+        this.stage = stage;
+        model = new EditorModel(runner != null ? runner : TaskRunner.background());
+        window = new MainWindow(model, () -> {
+            answered = true; // MainWindow's Exit asks about unsaved changes before it calls this
+            stage.close();
+        });
+        // 1440 × 900, or less on a smaller screen
+        javafx.geometry.Rectangle2D screen = javafx.stage.Screen.getPrimary().getVisualBounds();
+        Scene scene = new Scene(window.root(), Math.min(1440, screen.getWidth()), Math.min(900, screen.getHeight()));
         stage.setScene(scene);
         stage.titleProperty().bind(javafx.beans.binding.Bindings.createStringBinding(window::title,
                 model.planProperty(), model.fileProperty()));
         stage.setOnCloseRequest(e -> {
-            if (!window.confirmDiscard()) {
+            if (window.confirmDiscard()) {
+                answered = true;
+            } else {
                 e.consume();
             }
         });
         stage.show();
-        List<String> args = getParameters().getRaw();
-        openFirst(window, model, args.isEmpty() ? null : Path.of(args.get(0)));
+        List<String> named = args != null ? args : getParameters() == null ? List.of() : getParameters().getRaw();
+        openFirst(window, model, named.isEmpty() ? null : Path.of(named.get(0)));
+        startRecovery();
+    }
+
+    /** Starts autosaving, then looks for work left by earlier sessions in the background and offers it. */
+    private void startRecovery() {
+        RecoveryStore s = store != null ? store : new RecoveryStore(RecoveryStore.defaultDir());
+        Duration every = interval != null ? interval
+                : Autosaver.intervalFrom(System.getProperty(Autosaver.INTERVAL_PROPERTY), w -> {
+                    System.err.println("baywright: " + w);
+                    model.messageProperty().set(w);
+                });
+        RecoveryStore.Session session;
+        try {
+            session = s.open();
+        } catch (IOException | RuntimeException e) {
+            String why = "The recovery folder " + s.dir() + " cannot be used (" + e + "), so unsaved changes are not"
+                    + " autosaved in this session: save often, or start Baywright with -D" + RecoveryStore.DIR_PROPERTY
+                    + "=<a folder you can write to>.";
+            System.err.println("baywright: " + why);
+            javafx.scene.control.Alert a = new javafx.scene.control.Alert(javafx.scene.control.Alert.AlertType.WARNING, why);
+            a.initOwner(stage);
+            a.setTitle("Baywright");
+            a.setHeaderText("Autosave is off");
+            a.show();
+            return;
+        }
+        recovery = new EditorRecovery(model, session, every, Platform::runLater);
+        recovery.start();
+        Thread scan = new Thread(() -> {
+            RecoveryStore.LeftOver found = s.findLeftOver(session);
+            if (!found.isEmpty()) {
+                Platform.runLater(() -> offer(found));
+            }
+        }, "baywright-recovery-scan");
+        scan.setDaemon(true);
+        scan.start();
+    }
+
+    private void offer(RecoveryStore.LeftOver found) {
+        if (recovery == null || recovery.session().isClosed()) {
+            return;
+        }
+        RecoveryDialog.show(stage, found, entry -> {
+            if (!window.confirmDiscard()) {
+                return false;
+            }
+            recovery.recover(entry);
+            return true;
+        }, entry -> {
+            try {
+                recovery.discard(entry);
+                return true;
+            } catch (IOException e) {
+                model.messageProperty().set(entry.file() + " could not be deleted: " + e.getMessage());
+                return false;
+            }
+        });
+    }
+
+    /**
+     * Ends autosaving: after a clean close the recovery file is deleted, otherwise a last autosave is
+     * kept for the next start; the session's lock file goes either way.
+     */
+    @Override
+    public void stop() {
+        if (recovery != null) {
+            recovery.close(answered);
+        }
+    }
+
+    /** The editor's model (tests). */
+    EditorModel model() {
+        return model;
+    }
+
+    /** The autosave of the open document; null when autosave is off (tests). */
+    EditorRecovery recovery() {
+        return recovery;
     }
 
     /** Opens the named plan, or the demo when none is named. */

@@ -500,9 +500,14 @@ public final class MainWindow {
             }
             var m = sel.get();
             if (m.design() != null && !m.design().rejected().isEmpty()) {
-                addRow("Lighter, rejected", m.design().rejected().stream().limit(6)
-                        .map(x -> x.section().designation() + " (" + x.governing().name() + " " + Readouts.ratio(x.governing().ratio()) + ")")
-                        .collect(Collectors.joining(", ")), row++);
+                // the heaviest rejected sections are the informative ones: the last before the one chosen
+                var rejected = m.design().rejected();
+                var near = new java.util.ArrayList<>(rejected.subList(Math.max(0, rejected.size() - 4), rejected.size()));
+                java.util.Collections.reverse(near);
+                addRow("Lighter, rejected", near.stream()
+                        .map(x -> x.section().designation() + ": " + x.governing().name() + " " + Readouts.ratio(x.governing().ratio()))
+                        .collect(Collectors.joining("\n")) + (rejected.size() > 4 ? "\n(" + (rejected.size() - 4) + " lighter)" : ""),
+                        row++);
             }
             if (m.id().contains("/")) {
                 Label note = new Label("An infill beam: its spacing and direction belong to its bay (Infill tool). Delete"
@@ -595,6 +600,7 @@ public final class MainWindow {
         size.setPrefColumnCount(9);
         Button set = new Button("Set");
         set.setId("fixed-size-set");
+        set.setMinWidth(Region.USE_PREF_SIZE);
         String floorId = model.currentFloorId();
         Runnable apply = () -> {
             String text = size.getText() == null ? "" : size.getText().trim();

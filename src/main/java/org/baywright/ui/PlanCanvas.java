@@ -56,6 +56,7 @@ public final class PlanCanvas extends Region {
     private static final Color LOAD = Color.web("#8b3a62");
     private static final Color PROBLEM = Color.web("#b91c1c");
     private static final Color DECK = Color.web("#6f6a5d");
+    private static final Color REACTION = Color.web("#24507a");
 
     private final EditorModel model;
     private final Canvas canvas = new Canvas();
@@ -432,17 +433,29 @@ public final class PlanCanvas extends Region {
         double x1 = view.screenX(m.end().x());
         double y1 = view.screenY(m.end().y());
         double len = Math.hypot(x1 - x0, y1 - y0);
-        if (len < 60) {
+        Font font = Font.font(null, FontWeight.NORMAL, 9.5);
+        String a = Readouts.compactReactions(m.startReaction(), model.units());
+        String b = Readouts.compactReactions(m.endReaction(), model.units());
+        double need = textWidth(a, font) + textWidth(b, font) + 24;
+        if (len < need) {
             return;
         }
-        double ux = (x1 - x0) / len;
-        double uy = (y1 - y0) / len;
-        g.setFont(Font.font(null, FontWeight.NORMAL, 9.5));
-        String a = Readouts.reactions(m.startReaction(), model.units());
-        String b = Readouts.reactions(m.endReaction(), model.units());
-        double off = 16;
-        halo(g, a, x0 + ux * 22 - uy * off, y0 + uy * 22 + ux * off + 3, TextAlignment.LEFT, Color.web("#24507a"));
-        halo(g, b, x1 - ux * 22 - uy * off, y1 - uy * 22 + ux * off + 3, TextAlignment.RIGHT, Color.web("#24507a"));
+        // along the member, below it (the size is above), each near its own end
+        double angle = Math.toDegrees(Math.atan2(y1 - y0, x1 - x0));
+        boolean flipped = angle > 90.01 || angle <= -89.99;
+        if (flipped) {
+            angle += angle > 0 ? -180 : 180;
+            String t = a;
+            a = b;
+            b = t;
+        }
+        g.save();
+        g.translate((x0 + x1) / 2, (y0 + y1) / 2);
+        g.rotate(angle);
+        g.setFont(font);
+        halo(g, a, -len / 2 + 6, 13, TextAlignment.LEFT, REACTION);
+        halo(g, b, len / 2 - 6, 13, TextAlignment.RIGHT, REACTION);
+        g.restore();
     }
 
     private void drawLineLoad(GraphicsContext g, org.baywright.plan.LineLoad l) {
@@ -1004,6 +1017,11 @@ public final class PlanCanvas extends Region {
         g.strokeLine(x, mid, x + 40, mid);
         g.setLineDashes();
         g.fillText("unsupported / not run", x + 48, mid);
+        if (model.showReactionsProperty().get()) {
+            g.setFill(REACTION);
+            g.fillText("end reactions, service, unreduced: " + (model.units() == org.baywright.units.UnitSystem.SI ? "kN" : "kip"),
+                    x + 48 + 140, mid);
+        }
         g.setTextBaseline(VPos.BASELINE);
     }
 

@@ -122,4 +122,17 @@ public final class Readouts {
     public static String force(org.baywright.plan.LoadValues v, UnitSystem us) {
         return values(v, us.force(), 1);
     }
+
+    /** Reactions for the canvas, numbers only in kip or kN, non-zero cases: "D13.5 L12.3". */
+    public static String compactReactions(double[] components, UnitSystem us) {
+        double[] byCase = Component.byCase(components);
+        List<String> parts = new ArrayList<>();
+        for (LoadCase lc : LoadCase.values()) {
+            double v = byCase[lc.ordinal()];
+            if (v != 0) {
+                parts.add(lc.symbol() + String.format(Locale.ROOT, "%.1f", us.force().fromSi(v)));
+            }
+        }
+        return String.join(" ", parts);
+    }
 }

@@ -521,7 +521,12 @@ public final class PlanCanvas extends Region {
 
     private void drawProblems(GraphicsContext g) {
         org.baywright.plan.Problem shown = model.shownProblemProperty().get();
+        String here = model.currentFloorId();
         for (org.baywright.plan.Problem pr : model.problems()) {
+            if (pr.location().startsWith("floor ") && here != null && !pr.location().equals("floor " + here)
+                    && !pr.location().startsWith("floor " + here + " ")) {
+                continue; // drawn on the levels of its own floor layout
+            }
             boolean hot = pr.equals(shown);
             for (Point q : pr.where()) {
                 double x = view.screenX(q.x());

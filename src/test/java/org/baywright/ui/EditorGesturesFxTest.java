@@ -301,4 +301,37 @@ class EditorGesturesFxTest {
         assertEquals(UnitSystem.US, model.units());
         assertEquals("lrfd", model.plan().settings().method());
     }
+
+    @Test
+    void aFixedSizeIsSetInPropertiesAndAnUnsupportedBeamIsAProblemLinkedToTheCanvas(FxRobot robot) {
+        newPlanWithTypedGrid(robot);
+        robot.clickOn("#tool-girder");
+        drag(robot, 0, 0, 30 * FT, 0);
+        robot.clickOn("#tool-select");
+        robot.clickOn(screen(15 * FT, 0));
+        WaitForAsyncUtils.waitForFxEvents();
+        String lightest = member("G-1-AB").section();
+        typeInto(robot, "#fixed-size", "w27x94");
+        robot.clickOn("#fixed-size-set");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertAll(() -> assertEquals(java.util.Optional.of("W27X94"),
+                        model.currentFloor().orElseThrow().member("G-1-AB").orElseThrow().fixedSection()),
+                () -> assertEquals("W27X94", member("G-1-AB").section()),
+                () -> assertEquals(MemberStatus.FIXED_SIZE, member("G-1-AB").status()),
+                () -> assertNotEquals("W27X94", lightest, "the lightest adequate size was another"));
+
+        // a beam drawn in the middle of a bay, touching nothing: located problems, drawn and linked
+        robot.clickOn("#tool-beam");
+        drag(robot, 40 * FT, 40 * FT, 50 * FT, 50 * FT);
+        var problem = model.problems().stream().filter(p -> p.kind().equals("unsupported-member")).findFirst()
+                .orElseThrow(() -> new AssertionError(model.problems().toString()));
+        assertEquals("B-1", problem.objectId());
+        assertFalse(problem.where().isEmpty(), "the problem says where it is");
+        @SuppressWarnings("unchecked")
+        javafx.scene.control.ListView<org.baywright.plan.Problem> list = robot.lookup("#problems")
+                .queryAs(javafx.scene.control.ListView.class);
+        robot.interact(() -> list.getSelectionModel().select(problem));
+        assertEquals(problem, model.shownProblemProperty().get());
+        assertEquals("B-1", model.selectedProperty().get(), "picking the problem selects its member");
+    }
 }

@@ -335,8 +335,18 @@ public final class MainWindow {
         levels.setId("level-selector");
         levels.setPromptText("level");
         Label levelLabel = new Label("Level");
+        Label layout = new Label();
+        layout.setId("floor-layout");
+        layout.setStyle("-fx-text-fill: #5d5f63;");
+        Runnable sayLayout = () -> layout.setText(model.currentFloor().map(f -> {
+            long n = model.plan().levels().stream().filter(l -> l.floor().equals(f.id())).count();
+            return "edits go to layout \"" + f.name() + "\"" + (n > 1 ? " (" + n + " levels)" : "");
+        }).orElse(""));
+        model.levelProperty().addListener((o, a, b) -> sayLayout.run());
+        model.planProperty().addListener((o, a, b) -> sayLayout.run());
+        sayLayout.run();
         bar.getItems().addAll(new Separator(Orientation.VERTICAL), fit, new Separator(Orientation.VERTICAL),
-                levelLabel, levels);
+                levelLabel, levels, layout);
         return bar;
     }
 

@@ -70,6 +70,16 @@ public final class Readouts {
         rows.add(new Row("Tributary area", UnitSystem.format(m.tributaryArea(), us.floorArea(), 0)));
         rows.add(new Row("Reduction area", UnitSystem.format(m.reductionArea(), us.floorArea(), 0)
                 + String.format(java.util.Locale.ROOT, "  (live × %.2f)", m.liveFactor())));
+        if (m.loads() != null) {
+            List<String> parts = new ArrayList<>();
+            for (LoadCase lc : m.loads().present()) {
+                var span = m.loads().of(lc);
+                parts.add(lc.symbol() + " " + UnitSystem.format(span.totalLoad(), us.force(), 1)
+                        + (span.loads().size() > 1 ? " (" + span.loads().size() + " loads)" : ""));
+            }
+            rows.add(new Row("Loads on span", parts.isEmpty() ? "none" : String.join(", ", parts)
+                    + "; self-weight added by the design"));
+        }
         rows.add(new Row("Highest ratio", ratio(m.maxRatio())));
         if (m.design() != null) {
             for (Check c : m.design().checks()) {

@@ -239,43 +239,42 @@ public final class MainWindow {
     }
 
     private Menu unitsMenu() {
-        ToggleGroup g = new ToggleGroup();
-        RadioMenuItem us = new RadioMenuItem("US customary (ft, kip, psf)");
-        RadioMenuItem si = new RadioMenuItem("SI (m, kN, kPa)");
-        us.setId("menu-units-us");
-        si.setId("menu-units-si");
-        us.setToggleGroup(g);
-        si.setToggleGroup(g);
-        us.setOnAction(e -> model.edit(p -> org.baywright.plan.PlanEdits.withUnits(p, "us"), "Units: US customary"));
-        si.setOnAction(e -> model.edit(p -> org.baywright.plan.PlanEdits.withUnits(p, "si"), "Units: SI"));
-        Runnable sync = () -> {
-            boolean isSi = model.units() == org.baywright.units.UnitSystem.SI;
-            us.setSelected(!isSi);
-            si.setSelected(isSi);
-        };
-        model.planProperty().addListener((o, a, b) -> sync.run());
-        sync.run();
-        return new Menu("Units", null, us, si);
+        return choiceMenu("Units", p -> p.units(), org.baywright.plan.PlanEdits::withUnits,
+                new Choice("US customary (ft, kip, psf)", "menu-units-us", "us", "Units: US customary"),
+                new Choice("SI (m, kN, kPa)", "menu-units-si", "si", "Units: SI"));
     }
 
     private Menu methodMenu() {
+        return choiceMenu("Design method", p -> p.settings().method(), org.baywright.plan.PlanEdits::withMethod,
+                new Choice("LRFD", "menu-method-lrfd", "lrfd", "Design method: LRFD"),
+                new Choice("ASD", "menu-method-asd", "asd", "Design method: ASD"));
+    }
+
+    /** One choice of a radio menu: its text, node id, the plan value it sets and the edit's label. */
+    private record Choice(String text, String id, String value, String label) {
+    }
+
+    /** A radio menu whose choices are undoable plan edits, kept in step with the plan shown. */
+    private Menu choiceMenu(String title, java.util.function.Function<org.baywright.plan.Plan, String> current,
+            java.util.function.BiFunction<org.baywright.plan.Plan, String, org.baywright.plan.Plan> set, Choice... choices) {
         ToggleGroup g = new ToggleGroup();
-        RadioMenuItem lrfd = new RadioMenuItem("LRFD");
-        RadioMenuItem asd = new RadioMenuItem("ASD");
-        lrfd.setId("menu-method-lrfd");
-        asd.setId("menu-method-asd");
-        lrfd.setToggleGroup(g);
-        asd.setToggleGroup(g);
-        lrfd.setOnAction(e -> model.edit(p -> org.baywright.plan.PlanEdits.withMethod(p, "lrfd"), "Design method: LRFD"));
-        asd.setOnAction(e -> model.edit(p -> org.baywright.plan.PlanEdits.withMethod(p, "asd"), "Design method: ASD"));
+        List<RadioMenuItem> items = new java.util.ArrayList<>();
+        for (Choice c : choices) {
+            RadioMenuItem item = new RadioMenuItem(c.text());
+            item.setId(c.id());
+            item.setToggleGroup(g);
+            item.setOnAction(e -> model.edit(p -> set.apply(p, c.value()), c.label()));
+            items.add(item);
+        }
         Runnable sync = () -> {
-            boolean isAsd = model.plan() != null && "asd".equalsIgnoreCase(model.plan().settings().method());
-            lrfd.setSelected(!isAsd);
-            asd.setSelected(isAsd);
+            String now = model.plan() == null ? choices[0].value() : current.apply(model.plan());
+            for (int i = 0; i < choices.length; i++) {
+                items.get(i).setSelected(choices[i].value().equalsIgnoreCase(now));
+            }
         };
         model.planProperty().addListener((o, a, b) -> sync.run());
         sync.run();
-        return new Menu("Design method", null, lrfd, asd);
+        return new Menu(title, null, items.toArray(new MenuItem[0]));
     }
 
     private void fillRecent(Menu menu) {

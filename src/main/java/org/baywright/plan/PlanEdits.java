@@ -201,6 +201,55 @@ public final class PlanEdits {
                 : regrid(p, xs, ys, xs, moved, false, null);
     }
 
+    /**
+     * Adds one grid line at an offset. After the last line it takes the next label (and, with
+     * {@code columns}, a column at each new intersection, as {@link #withGrid}); before the first or
+     * between two lines it takes an intermediate label as drafters write them (common practice): the
+     * lower neighbour's label with ".5", or ".1", ".2"… when that is taken. Nothing else moves. A line
+     * before the first is refused (it would relabel the grid): type the spacings from a new first line.
+     */
+    public static Plan addGridLine(Plan p, GridLine.Axis axis, double offset, boolean columns) {
+        List<GridLine> same = lines(p, axis);
+        if (same.stream().anyMatch(g -> Math.abs(g.offset() - offset) < 0.01)) {
+            throw new IllegalArgumentException("there is a grid line there already");
+        }
+        if (same.isEmpty() || offset > same.get(same.size() - 1).offset()) {
+            List<Double> spacings = new ArrayList<>();
+            for (int i = 1; i < same.size(); i++) {
+                spacings.add(same.get(i).offset() - same.get(i - 1).offset());
+            }
+            if (same.isEmpty()) {
+                List<GridLine> grid = new ArrayList<>(p.grid());
+                grid.add(new GridLine(axis == GridLine.Axis.X ? "A" : "1", axis, offset));
+                return new Plan(p.name(), p.units(), p.settings(), grid, p.levels(), p.floors(), p.columns());
+            }
+            spacings.add(offset - same.get(same.size() - 1).offset());
+            return axis == GridLine.Axis.X ? withGrid(p, spacings, null, columns, null) : withGrid(p, null, spacings, columns, null);
+        }
+        Set<String> used = new HashSet<>();
+        p.grid().forEach(g -> used.add(g.label()));
+        String base = same.get(0).label();
+        for (GridLine g : same) {
+            if (g.offset() < offset) {
+                base = g.label();
+            }
+        }
+        if (offset < same.get(0).offset()) {
+            throw new IllegalArgumentException("a drawn grid line goes after grid line " + same.get(0).label()
+                    + "; to start the grid further out, type its spacings");
+        }
+        String label = base + ".5";
+        for (int k = 1; used.contains(label) && k < 10; k++) {
+            label = base + "." + k;
+        }
+        if (used.contains(label)) {
+            throw new IllegalArgumentException("no free label for a grid line there; type the spacings instead");
+        }
+        List<GridLine> grid = new ArrayList<>(p.grid());
+        grid.add(new GridLine(label, axis, offset));
+        return new Plan(p.name(), p.units(), p.settings(), grid, p.levels(), p.floors(), p.columns());
+    }
+
     /** The grid lines of one axis, by offset. */
     public static List<GridLine> lines(Plan p, GridLine.Axis axis) {
         return p.grid().stream().filter(g -> g.axis() == axis)

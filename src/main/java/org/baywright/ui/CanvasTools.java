@@ -460,38 +460,11 @@ public final class CanvasTools {
     }
 
     private void addGridLine(Point a, Point b) {
-        Plan p = model.plan();
         boolean vertical = Math.abs(b.y() - a.y()) >= Math.abs(b.x() - a.x());
         GridLine.Axis axis = vertical ? GridLine.Axis.X : GridLine.Axis.Y;
         double at = vertical ? a.x() : a.y();
-        List<GridLine> same = PlanEdits.lines(p, axis);
-        if (same.stream().anyMatch(g -> Math.abs(g.offset() - at) < 0.01)) {
-            model.messageProperty().set("Grid: there is a grid line there already.");
-            return;
-        }
-        if (same.isEmpty()) {
-            model.edit(q -> withFirstLine(q, axis, at), "Added grid line " + (axis == GridLine.Axis.X ? "A" : "1"));
-            return;
-        }
-        if (at < same.get(same.size() - 1).offset()) {
-            model.messageProperty().set("Grid: a drawn line goes after the last one; to add lines between, type the"
-                    + " spacings in the tool options; to move a line, drag it with Select.");
-            return;
-        }
-        List<Double> spacings = new ArrayList<>();
-        for (int i = 1; i < same.size(); i++) {
-            spacings.add(same.get(i).offset() - same.get(i - 1).offset());
-        }
-        spacings.add(at - same.get(same.size() - 1).offset());
         boolean cols = model.toolSettings().gridColumns.get();
-        model.edit(q -> axis == GridLine.Axis.X ? PlanEdits.withGrid(q, spacings, null, cols, PlanEdits.OFFICE_FLOOR)
-                : PlanEdits.withGrid(q, null, spacings, cols, PlanEdits.OFFICE_FLOOR), "Added a grid line");
-    }
-
-    private static Plan withFirstLine(Plan p, GridLine.Axis axis, double at) {
-        List<GridLine> grid = new ArrayList<>(p.grid());
-        grid.add(new GridLine(axis == GridLine.Axis.X ? "A" : "1", axis, at));
-        return new Plan(p.name(), p.units(), p.settings(), grid, p.levels(), p.floors(), p.columns());
+        model.edit(q -> PlanEdits.addGridLine(q, axis, at, cols), "Added a grid line");
     }
 
     /** A double click (the second press arrives first through {@link #pressed}). */

@@ -8,7 +8,7 @@ public enum Tool {
     SELECT("Select", KeyCode.S, "Click to select, Shift-click to add, drag on empty plan to box-select, drag a selection"
             + " to move it, drag a grid line to move it; Delete removes the selection."),
     GRID("Grid", KeyCode.G, "Type bay spacings in the tool options (e.g. 3@30ft or 25'-6\" 30' 30') and press Apply,"
-            + " or drag across the plan to add a grid line (a vertical drag adds a lettered line)."),
+            + " or drag across the plan to add a grid line where the drag starts (a vertical drag adds a lettered line)."),
     GIRDER("Girder", KeyCode.R, "Drag from one support to another (or click both ends) to add a girder."),
     BEAM("Beam", KeyCode.B, "Drag between supports (or click both ends) to add a beam."),
     INFILL("Infill", KeyCode.I, "Click a bay to fill it with beams at the spacing or count in the tool options;"

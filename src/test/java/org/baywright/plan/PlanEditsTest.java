@@ -197,4 +197,19 @@ class PlanEditsTest {
         Plan turned = PlanEdits.setDeckSpan(p, f, deck, 270);
         assertEquals(90, turned.floor(f).orElseThrow().decks().get(0).spanAngle(), 1e-12, "folded into [0, 180)");
     }
+
+    @Test
+    void drawnGridLinesTakeTheNextOrAnIntermediateLabel() {
+        Plan p = gridded();
+        Plan after = PlanEdits.addGridLine(p, GridLine.Axis.X, 80 * FT, true);
+        assertEquals(List.of("A", "B", "C", "D"), PlanEdits.lines(after, GridLine.Axis.X).stream().map(GridLine::label).toList());
+        assertEquals(8, after.columns().size(), "a column at each new intersection");
+        Plan between = PlanEdits.addGridLine(p, GridLine.Axis.Y, 12 * FT, true);
+        assertEquals(List.of("1", "1.5", "2"), PlanEdits.lines(between, GridLine.Axis.Y).stream().map(GridLine::label).toList());
+        assertEquals(p.columns(), between.columns(), "an intermediate line adds no columns");
+        Plan again = PlanEdits.addGridLine(between, GridLine.Axis.Y, 6 * FT, true);
+        assertEquals(List.of("1", "1.1", "1.5", "2"), PlanEdits.lines(again, GridLine.Axis.Y).stream().map(GridLine::label).toList());
+        assertThrows(IllegalArgumentException.class, () -> PlanEdits.addGridLine(p, GridLine.Axis.X, -5 * FT, true));
+        assertThrows(IllegalArgumentException.class, () -> PlanEdits.addGridLine(p, GridLine.Axis.X, 30 * FT, true));
+    }
 }

@@ -105,4 +105,37 @@ class EditorModelTest {
         assertSame(second, m.run().plan());
         assertFalse(m.runningProperty().get());
     }
+
+    @Test
+    void aQueuedRunOfAnOlderEditIsSkippedAndOnlyTheLatestIsShown() throws Exception {
+        List<Runnable> pending = new java.util.ArrayList<>();
+        int[] ran = {0};
+        TaskRunner later = new TaskRunner() {
+            @Override
+            public <T> void submit(java.util.function.Supplier<T> work, java.util.function.Consumer<T> done,
+                    java.util.function.Consumer<Throwable> failed) {
+                pending.add(() -> {
+                    T r = work.get();
+                    if (r != null) {
+                        ran[0]++;
+                    }
+                    done.accept(r);
+                });
+            }
+        };
+        EditorModel m = new EditorModel(later);
+        assertTrue(m.openText(Files.readString(DEMO), "demo").opened());
+        pending.remove(0).run();
+        ran[0] = 0;
+        // three quick edits: the first two are stale before their turn comes
+        for (double d : new double[] {0.3, 0.6, 0.9}) {
+            m.edit(p -> org.baywright.plan.PlanEdits.moveGridLine(p, "B", p.gridLine("B").orElseThrow().offset() + d), "move B");
+        }
+        assertEquals(3, pending.size());
+        Plan latest = m.plan();
+        pending.forEach(Runnable::run);
+        assertEquals(1, ran[0], "only the latest edit's run did any work");
+        assertSame(latest, m.run().plan());
+        assertEquals(2, m.latencies().size(), "a latency for each result shown: the opening run and the latest edit");
+    }
 }

@@ -35,6 +35,7 @@ public final class BaywrightApp extends Application {
     private MainWindow window;
     private Stage stage;
     private EditorRecovery recovery;
+    private Duration every;
     /** True once the user has answered for unsaved changes on the way out (saved, discarded, or there were none). */
     private boolean answered;
 
@@ -75,6 +76,7 @@ public final class BaywrightApp extends Application {
                 e.consume();
             }
         });
+        window.setNewWindowOpener(this::openInNewWindow);
         stage.show();
         List<String> named = args != null ? args : getParameters() == null ? List.of() : getParameters().getRaw();
         openFirst(window, model, named.isEmpty() ? null : Path.of(named.get(0)));
@@ -89,6 +91,7 @@ public final class BaywrightApp extends Application {
                     System.err.println("baywright: " + w);
                     model.messageProperty().set(w);
                 });
+        this.every = every;
         RecoveryStore.Session session;
         try {
             session = s.open();
@@ -157,6 +160,41 @@ public final class BaywrightApp extends Application {
     EditorRecovery recovery() {
         return recovery;
     }
+
+    /**
+     * Opens a plan in a window of its own as a new, unsaved document (a study variant), with its own
+     * undo history and, when autosave is on, its own recovery copy in this session.
+     */
+    void openInNewWindow(org.baywright.plan.Plan plan) {
+        Stage s = new Stage();
+        EditorModel m = new EditorModel(runner != null ? runner : TaskRunner.background());
+        boolean[] clean = {false};
+        MainWindow w = new MainWindow(m, () -> {
+            clean[0] = true;
+            s.close();
+        });
+        w.setNewWindowOpener(this::openInNewWindow);
+        s.setScene(new Scene(w.root(), stage.getScene().getWidth(), stage.getScene().getHeight()));
+        s.titleProperty().bind(javafx.beans.binding.Bindings.createStringBinding(w::title, m.planProperty(), m.fileProperty()));
+        s.setOnCloseRequest(e -> {
+            if (w.confirmDiscard()) {
+                clean[0] = true;
+            } else {
+                e.consume();
+            }
+        });
+        s.show();
+        m.openUnsaved(plan, "Opened " + plan.name() + " as a new plan; save it to keep it.");
+        if (recovery != null && !recovery.session().isClosed()) {
+            EditorRecovery r = new EditorRecovery(m, recovery.session(), every, Platform::runLater);
+            r.start();
+            s.setOnHidden(e -> r.close(clean[0]));
+        }
+        others.add(s);
+    }
+
+    /** Windows opened besides the first (tests). */
+    final List<Stage> others = new java.util.ArrayList<>();
 
     /** Opens the named plan, or the demo when none is named. */
     static void openFirst(MainWindow window, EditorModel model, Path file) {

@@ -144,6 +144,17 @@ public final class EditorModel {
         message.set("Recovered unsaved work; save it to keep it.");
     }
 
+    /**
+     * Shows a plan that has no file yet as a new document (a study variant): it runs, counts as unsaved
+     * and Save asks for a file.
+     */
+    public void openUnsaved(Plan p, String note) {
+        setPlan(p, null, List.of());
+        savedPlan = null;
+        updateEditState();
+        message.set(note);
+    }
+
     // ---- edits, undo and redo: a plan is a value, an edit is the next value --------------------
 
     /** Applies an edit (the edited plan) with a label for the Edit menu, and runs it. */

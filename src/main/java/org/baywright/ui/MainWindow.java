@@ -85,6 +85,8 @@ public final class MainWindow {
     private final TextArea calculation = new TextArea();
     private final TabPane sideTabs = new TabPane();
     private boolean syncingTable;
+    /** Opens a plan in a new window (set by the application; by default the plan replaces this one). */
+    private java.util.function.Consumer<org.baywright.plan.Plan> newWindow;
 
     public MainWindow(EditorModel model, Runnable exit) {
         this(model, exit, RecentFiles.standard());
@@ -152,6 +154,20 @@ public final class MainWindow {
         Tab t = new Tab(name, content);
         t.setId("tab-" + name.toLowerCase(Locale.ROOT));
         return t;
+    }
+
+    /** How "open as a new document" works: the application opens a window of its own. */
+    public void setNewWindowOpener(java.util.function.Consumer<org.baywright.plan.Plan> opener) {
+        this.newWindow = opener;
+    }
+
+    /** Opens a plan as a new document: in a new window when the application allows it, else here after asking. */
+    public void openAsNewDocument(org.baywright.plan.Plan plan) {
+        if (newWindow != null) {
+            newWindow.accept(plan);
+        } else if (confirmDiscard()) {
+            model.openUnsaved(plan, "Opened " + plan.name() + " as a new plan; save it to keep it.");
+        }
     }
 
     /** Adds a tab to the side panel (the Study panel lives there). */

@@ -1,0 +1,61 @@
+package org.baywright.ui;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.List;
+import javafx.stage.Stage;
+import org.baywright.plan.Plan;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.junit.jupiter.api.io.TempDir;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+
+/** A plan opened as a new document (a study variant) gets a window, an undo history and an autosave of its own. */
+@ExtendWith(ApplicationExtension.class)
+class NewWindowFxTest {
+    @TempDir
+    Path dir;
+
+    private BaywrightApp app;
+
+    @Start
+    void start(Stage stage) {
+        app = new BaywrightApp(new RecoveryStore(dir.resolve("recovery")), Duration.ofMillis(200), List.of(BaywrightApp.DEMO),
+                TaskRunner.direct());
+        app.start(stage);
+    }
+
+    @AfterEach
+    void stop(FxRobot robot) {
+        robot.interact(() -> {
+            app.others.forEach(Stage::hide);
+            app.stop();
+        });
+    }
+
+    @Test
+    void aVariantOpensInItsOwnUnsavedWindowAndIsAutosaved(FxRobot robot) throws Exception {
+        Plan variant = org.baywright.study.Variations.beamSpacing(app.model().plan(), org.baywright.units.Units.FT_.toSi(8));
+        robot.interact(() -> app.openInNewWindow(variant));
+        assertEquals(1, app.others.size());
+        Stage second = app.others.get(0);
+        assertTrue(second.isShowing());
+        assertTrue(second.getTitle().contains("(not saved)"), second.getTitle());
+        assertTrue(!app.model().dirtyProperty().get(), "the first window's plan is untouched");
+        // its own autosave copy appears in the recovery folder
+        org.testfx.util.WaitForAsyncUtils.waitFor(60, java.util.concurrent.TimeUnit.SECONDS, () -> {
+            try (var files = Files.list(dir.resolve("recovery"))) {
+                return files.anyMatch(f -> f.getFileName().toString().endsWith(".bay.json"));
+            }
+        });
+        assertNull(app.recovery() == null ? "autosave is off" : null);
+    }
+}

@@ -334,4 +334,47 @@ class EditorGesturesFxTest {
         assertEquals(problem, model.shownProblemProperty().get());
         assertEquals("B-1", model.selectedProperty().get(), "picking the problem selects its member");
     }
+
+    @Test
+    void theOtherToolsByClicking(FxRobot robot) {
+        newPlanWithTypedGrid(robot);
+        // Deck: a click turns the span by 90°
+        robot.clickOn("#tool-deck");
+        robot.clickOn(screen(45 * FT, 45 * FT));
+        assertEquals(90, model.currentFloor().orElseThrow().decks().get(0).spanAngle(), 1e-9);
+        // Opening: four corners, then the first again closes it
+        robot.clickOn("#tool-opening");
+        double[][] corners = {{35, 35}, {45, 35}, {45, 50}, {35, 50}, {35, 35}};
+        for (double[] c : corners) {
+            robot.clickOn(screen(c[0] * FT, c[1] * FT));
+        }
+        WaitForAsyncUtils.waitForFxEvents();
+        var openings = model.currentFloor().orElseThrow().openings();
+        assertEquals(1, openings.size());
+        // free points: the robot clicks whole pixels (about 0.1 ft here), then the point rounds to the inch
+        assertEquals(150 * FT * FT, Math.abs(openings.get(0).outline().signedArea()), 3 * FT * FT, "10 ft × 15 ft");
+        assertEquals(4, openings.get(0).outline().vertices().size());
+        // Line load: three points, Enter finishes
+        robot.clickOn("#tool-line-load");
+        robot.clickOn(screen(0, 5 * FT)).clickOn(screen(0, 25 * FT)).clickOn(screen(10 * FT, 25 * FT));
+        robot.type(KeyCode.ENTER);
+        WaitForAsyncUtils.waitForFxEvents();
+        var line = model.currentFloor().orElseThrow().lineLoads();
+        assertEquals(1, line.size());
+        assertEquals(3, line.get(0).path().size());
+        // Point load and Column: one click each
+        robot.clickOn("#tool-point-load");
+        robot.clickOn(screen(15 * FT, 45 * FT));
+        robot.clickOn("#tool-column");
+        robot.clickOn(screen(15 * FT, 15 * FT));
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(1, model.currentFloor().orElseThrow().pointLoads().size());
+        assertEquals(10, model.plan().columns().size(), "nine at the intersections and one placed");
+        // Esc abandons an outline half drawn
+        robot.clickOn("#tool-load-area");
+        robot.clickOn(screen(5 * FT, 5 * FT)).clickOn(screen(10 * FT, 5 * FT));
+        robot.type(KeyCode.ESCAPE);
+        assertEquals(CanvasTools.Mode.IDLE, window.canvas().tools().mode());
+        assertEquals(1, model.currentFloor().orElseThrow().areaLoads().size(), "only the floor load");
+    }
 }

@@ -488,7 +488,6 @@ public final class Takedown {
                     list.add(f == 1.0 ? l : l.scaled(f));
                 }
             }
-            BeamLoads bl = BeamLoads.of(span, caseLoads);
             Bracing bracing = m.kind() == MemberKind.BEAM || bracePoints.isEmpty() && own > 0 ? Bracing.continuous()
                     : Bracing.atFractions(bracePoints.stream().distinct().mapToDouble(Double::doubleValue).toArray());
             if (m.kind() == MemberKind.GIRDER && bracePoints.isEmpty() && own == 0) {
@@ -496,21 +495,22 @@ public final class Takedown {
             }
             BeamCriteria criteria = new BeamCriteria(method, steel, bracing,
                     new DeflectionLimits(settings.liveDeflection(), settings.totalDeflection()), true);
-            BeamDesigner designer = new BeamDesigner(bl, criteria);
+            BeamLoads bl;
             BeamDesign d;
             Optional<String> fixed = m.fixedSection();
-            if (fixed.isPresent()) {
-                Optional<Section> s = catalog.find(fixed.get());
-                if (s.isEmpty()) {
+            Optional<Section> fixedSection = fixed.flatMap(catalog::find);
+            if (fixedSection.isPresent()) {
+                bl = BeamLoads.of(span, caseLoads);
+                d = new BeamDesigner(bl, criteria).checkFixed(fixedSection.get());
+            } else {
+                if (fixed.isPresent()) {
                     problems.add(new Problem(Problem.Severity.ERROR, "unknown-section", "floor " + floor.id(), m.id(),
                             "member " + m.id() + ": section " + fixed.get() + " is not in the catalog " + catalog.name()
                                     + "; the member was sized instead", List.of(m.start(), m.end())));
-                    d = designer.search(catalog, filter(m.kind()));
-                } else {
-                    d = designer.checkFixed(s.get());
                 }
-            } else {
-                d = designer.search(catalog, filter(m.kind()));
+                Sized sized = sized(span, caseLoads, criteria, filter(m.kind()));
+                bl = sized.loads();
+                d = sized.design();
             }
             if (d.status() == MemberStatus.OVERSTRESSED) {
                 problems.add(new Problem(Problem.Severity.ERROR, "overstressed", "floor " + floor.id(), m.id(),
@@ -563,6 +563,38 @@ public final class Takedown {
         }
     }
 
+
+    /**
+     * The inputs that fix the outcome of a lightest-section search: span, service loads by load case,
+     * criteria and filter (the catalog is the run's). Equal keys give equal designs, so a search is run
+     * once per key: on a regular floor most beams carry exactly the same loads.
+     */
+    private record SearchKey(double span, List<List<SpanLoad>> loads, BeamCriteria criteria, SearchFilter filter) {
+    }
+
+    /** A member's service loads and the search's outcome for them. */
+    private record Sized(BeamLoads loads, BeamDesign design) {
+    }
+
+    /** Searches done in this run, by their inputs (floors run in parallel). */
+    private final Map<SearchKey, Sized> searches = new java.util.concurrent.ConcurrentHashMap<>();
+
+    /** The lightest section for these loads: searched once per distinct set of inputs in a run. */
+    private Sized sized(double span, Map<LoadCase, List<SpanLoad>> caseLoads, BeamCriteria criteria, SearchFilter filter) {
+        List<List<SpanLoad>> byCase = new ArrayList<>();
+        for (LoadCase c : LoadCase.values()) {
+            byCase.add(List.copyOf(caseLoads.getOrDefault(c, List.of())));
+        }
+        SearchKey key = new SearchKey(span, byCase, criteria, filter);
+        Sized done = searches.get(key);
+        if (done == null) {
+            BeamLoads bl = BeamLoads.of(span, caseLoads);
+            done = new Sized(bl, new BeamDesigner(bl, criteria).search(catalog, filter));
+            Sized raced = searches.putIfAbsent(key, done);
+            done = raced != null ? raced : done;
+        }
+        return done;
+    }
 
     /** Splits load values into components; records the largest live intensity per component in l0. */
     private double[] components(LoadValues v, LiveLoadUse use, double[] l0) {

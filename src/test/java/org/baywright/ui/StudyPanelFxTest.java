@@ -185,6 +185,7 @@ class StudyPanelFxTest {
         robot.interact(() -> plan = PlanFiles.read(Path.of("plans", "harbourview-offices.bay.json")).plan().orElseThrow());
         // every variant a different building: nothing is shared between them
         type(robot, "bay-x", "25ft..40ft:0.5ft");
+        type(robot, "bay-y", "30ft..40ft:1ft");
         type(robot, "beam-count", "2..5:1");
         type(robot, "method", "lrfd,asd");
         robot.clickOn("#study-run");
@@ -194,7 +195,7 @@ class StudyPanelFxTest {
         WaitForAsyncUtils.waitForFxEvents();
         StudyResult r = panel.result();
         assertNotNull(r, "the study ended with a result, not an exception");
-        assertEquals(31 * 4 * 2, r.total());
+        assertEquals(31 * 11 * 4 * 2, r.total());
         assertTrue(r.cancelled());
         assertTrue(r.variants().size() >= 1 && r.variants().size() < r.total(), r.variants().size() + " of " + r.total());
         String progress = text(robot, "#study-progress-text");

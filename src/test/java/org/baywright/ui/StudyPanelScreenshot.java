@@ -47,8 +47,9 @@ public final class StudyPanelScreenshot {
             values.forEach((k, v) -> ((TextField) p.lookup("#study-field-" + k)).setText(v));
             panel.set(p);
             stage.set(s);
-            p.lookup("#study-run").getProperties();
-            ((javafx.scene.control.Button) p.lookup("#study-run")).fire();
+            javafx.scene.control.Button run = (javafx.scene.control.Button) p.lookup("#study-run");
+            run.requestFocus();
+            run.fire();
         });
         long until = System.nanoTime() + TimeUnit.MINUTES.toNanos(10);
         while (System.nanoTime() < until && (panel.get() == null || panel.get().result() == null)) {

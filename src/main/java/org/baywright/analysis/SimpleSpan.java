@@ -273,7 +273,11 @@ public final class SimpleSpan {
      * @param x position from the left support, m, within {@code [0, L]}
      */
     public double moment(double x) {
-        int k = piece(x);
+        return momentOn(piece(x), x);
+    }
+
+    /** The moment at x on piece k (the piece holding x). */
+    private double momentOn(int k, double x) {
         double t = clamp(x) - xs[k];
         return mc[4 * k] + t * (mc[4 * k + 1] + t * (mc[4 * k + 2] + t * mc[4 * k + 3]));
     }
@@ -523,7 +527,8 @@ public final class SimpleSpan {
         }
         double x = 0.5 * (lo + hi);
         for (int i = 0; i < 100; i++) {
-            double s = eiSlope(x, w);
+            int k = piece(x); // one look-up for the slope and the moment at x
+            double s = eiSlope(k, x, w);
             if (s == 0.0) {
                 break;
             }
@@ -532,7 +537,7 @@ public final class SimpleSpan {
             } else {
                 hi = x;
             }
-            double curvature = -(moment(x) + w * x * (length - x) / 2.0); // EI·y'' = −M
+            double curvature = -(momentOn(k, x) + w * x * (length - x) / 2.0); // EI·y'' = −M
             double next = curvature < 0.0 ? x - s / curvature : Double.NaN;
             if (!(next > lo && next < hi)) {
                 next = 0.5 * (lo + hi);
@@ -566,7 +571,11 @@ public final class SimpleSpan {
 
     /** EI × slope at x with a uniform load w added: d/dx of EI·y. */
     private double eiSlope(double x, double w) {
-        int k = piece(x);
+        return eiSlope(piece(x), x, w);
+    }
+
+    /** {@link #eiSlope(double, double)} with the piece of x already known. */
+    private double eiSlope(int k, double x, double w) {
         double t = clamp(x) - xs[k];
         int o = 6 * k;
         double s = yc[o + 1] + t * (2.0 * yc[o + 2] + t * (3.0 * yc[o + 3] + t * (4.0 * yc[o + 4] + t * 5.0 * yc[o + 5])));
@@ -687,10 +696,17 @@ public final class SimpleSpan {
         if (x <= 0.0) {
             return 0;
         }
-        int k = Arrays.binarySearch(xs, x);
-        if (k < 0) {
-            k = -k - 2;
+        // the last breakpoint at or before x (0 < x < L here, so xs[0] = 0 <= x < xs[last + 1] = L)
+        int lo = 0;
+        int hi = last;
+        while (lo < hi) {
+            int mid = (lo + hi + 1) >>> 1;
+            if (xs[mid] <= x) {
+                lo = mid;
+            } else {
+                hi = mid - 1;
+            }
         }
-        return Math.min(k, last);
+        return lo;
     }
 }

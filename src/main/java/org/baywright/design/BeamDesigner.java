@@ -36,6 +36,15 @@ import org.baywright.load.LoadCombination;
  * the designation in alphabetical order ({@link Catalog#SEARCH_ORDER}).
  */
 public final class BeamDesigner {
+    // the references recorded on calculation sheets, built once (the search evaluates these functions without a sheet)
+    private static final String CLAUSE_A3_1 = Aisc360.clause("A3.1");
+    private static final String CLAUSE_F1 = Aisc360.clause("F1");
+    private static final String CLAUSE_F2 = Aisc360.clause("F2");
+    private static final String CLAUSE_F3 = Aisc360.clause("F3");
+    private static final String CLAUSE_G1 = Aisc360.clause("G1");
+    private static final String CLAUSE_G2_1_A = Aisc360.clause("G2.1(a)");
+    private static final String CLAUSE_G2_1_B = Aisc360.clause("G2.1(b)");
+
     /** Length-independent strengths of a section for one steel, computed once and shared by all designers. */
     private record Strengths(IShapeFlexure.Constants flexure, IShapeShear.Strength shear) {
     }
@@ -342,12 +351,12 @@ public final class BeamDesigner {
     private Check toCheck(int i, IShapeFlexure.Constants k, IShapeShear.Strength vs, double w) {
         return switch (i) {
             case FLEX -> new Check("flexure", demand[i], capacity[i], ratio[i], combos.get(combo[i]).name(),
-                    Aisc360.clause(k.flange() == IShapeFlexure.FlangeClass.COMPACT ? "F2" : "F3"), Quantity.MOMENT,
+                    k.flange() == IShapeFlexure.FlangeClass.COMPACT ? CLAUSE_F2 : CLAUSE_F3, Quantity.MOMENT,
                     position[i], flexLb, flexLb == 0 ? Double.NaN : flexCb,
                     !k.webCompact() ? "noncompact web: AISC 360-16 F4 not implemented"
                             : bounds.length > 2 ? segmentNotes[flexSeg] : "");
             case SHEAR -> new Check("shear", demand[i], capacity[i], ratio[i], combos.get(combo[i]).name(),
-                    Aisc360.clause(vs.caseA() ? "G2.1(a)" : "G2.1(b)"), Quantity.FORCE, position[i], Double.NaN,
+                    vs.caseA() ? CLAUSE_G2_1_A : CLAUSE_G2_1_B, Quantity.FORCE, position[i], Double.NaN,
                     Double.NaN, (position[i] == 0 ? "left" : "right") + " support");
             case LIVE -> new Check("live-load deflection", demand[i], capacity[i], ratio[i], liveName,
                     DeflectionLimits.SOURCE, Quantity.SECTION_LENGTH, position[i], Double.NaN, Double.NaN,
@@ -386,7 +395,7 @@ public final class BeamDesigner {
         Steel steel = criteria.steel();
         boolean lrfd = criteria.method() == DesignMethod.LRFD;
         calc.heading("Section " + s.designation());
-        calc.value("Fy", steel.fy(), Quantity.STRESS, steel.name(), Aisc360.clause("A3.1"),
+        calc.value("Fy", steel.fy(), Quantity.STRESS, steel.name(), CLAUSE_A3_1,
                 Arg.of("E", steel.e(), Quantity.STRESS));
         calc.value("wsw", w, Quantity.LINE_LOAD, criteria.selfWeight() ? "self-weight: nominal weight of "
                 + s.designation() + ", added to D" : "self-weight not added: the dead load is taken to include it", "");
@@ -406,7 +415,7 @@ public final class BeamDesigner {
         IShapeShear.Strength vs = IShapeShear.strength(s, steel.fy(), steel.e(), calc);
         calc.value(lrfd ? "Vu" : "Va", shear.demand(), Quantity.FORCE, "at the " + shear.note()
                 + " (statics of the simple span)", "");
-        calc.eq(lrfd ? "φv·Vn" : "Vn/Ωv", lrfd ? "φv·Vn" : "Vn/Ωv", Aisc360.clause("G1"), shear.capacity(), Quantity.FORCE,
+        calc.eq(lrfd ? "φv·Vn" : "Vn/Ωv", lrfd ? "φv·Vn" : "Vn/Ωv", CLAUSE_G1, shear.capacity(), Quantity.FORCE,
                 Arg.num(lrfd ? "φv" : "Ωv", lrfd ? vs.phi() : vs.omega()), Arg.of("Vn", vs.vn(), Quantity.FORCE));
         calc.eq("ratio", "V_req/V_avail", shear.clause(), shear.ratio(), Quantity.NUMBER,
                 Arg.of("V_req", shear.demand(), Quantity.FORCE), Arg.of("V_avail", shear.capacity(), Quantity.FORCE));
@@ -435,7 +444,7 @@ public final class BeamDesigner {
             BendingCoefficient.cb(mm[0], moment(c, w, a + q), moment(c, w, a + 2 * q), moment(c, w, a + 3 * q), calc);
         }
         IShapeFlexure.mn(k, lb, cb, calc);
-        calc.eq(lrfd ? "φb·Mn" : "Mn/Ωb", lrfd ? "φb·Mn" : "Mn/Ωb", Aisc360.clause("F1"),
+        calc.eq(lrfd ? "φb·Mn" : "Mn/Ωb", lrfd ? "φb·Mn" : "Mn/Ωb", CLAUSE_F1,
                 criteria.method().available(mn, ResistanceFactors.PHI_B, ResistanceFactors.OMEGA_B), Quantity.MOMENT,
                 Arg.num(lrfd ? "φb" : "Ωb", lrfd ? ResistanceFactors.PHI_B : ResistanceFactors.OMEGA_B),
                 Arg.of("Mn", mn, Quantity.MOMENT));

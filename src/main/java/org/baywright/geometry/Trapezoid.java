@@ -25,6 +25,33 @@ record Trapezoid(int member, double va, double vb, double a0, double a1, double 
         return 0.5 * (vb - va) * (chordA() + chordB());
     }
 
+    /**
+     * True when no trapezoid of {@code a} shares interior with a trapezoid of {@code b}, decided with
+     * exact comparisons of their coordinates: for every pair, their ranges across the span meet at most
+     * at a line, or they lie in the same strip and one ends along the span where the other begins, at
+     * both of the strip's lines (their sides are straight, so then all along). A deck layout makes
+     * neighbouring parts share such edges exactly. False means "not shown apart", not "overlapping":
+     * the caller then intersects the areas.
+     */
+    static boolean apart(java.util.List<Trapezoid> a, java.util.List<Trapezoid> b) {
+        if (a == null || b == null) {
+            return false;
+        }
+        for (Trapezoid s : a) {
+            for (Trapezoid t : b) {
+                if (s.vb() <= t.va() || t.vb() <= s.va()) {
+                    continue;
+                }
+                boolean sameStrip = s.va() == t.va() && s.vb() == t.vb();
+                if (sameStrip && (s.a1() <= t.a0() && s.b1() <= t.b0() || t.a1() <= s.a0() && t.b1() <= s.b0())) {
+                    continue;
+                }
+                return false;
+            }
+        }
+        return true;
+    }
+
     /** The trapezoid as a JTS polygon of the frame, repeated corners dropped; null when it has no area. */
     Polygon toJts(GeometryFactory f) {
         if (!(area() > 0)) {

@@ -357,7 +357,7 @@ public final class TributaryAnalysis {
                 unions.put(e.getKey(), u);
                 drawn.put(e.getKey(), Drawing.polygons(u, polys, frame));
             }
-            checkOverlaps(unions, frame, found);
+            checkOverlaps(unions, byMember, frame, found);
 
             for (Map.Entry<Integer, List<Trapezoid>> e : byMember.entrySet()) {
                 PlacedMember m = placed.get(e.getKey());
@@ -396,13 +396,22 @@ public final class TributaryAnalysis {
             }
         }
 
-        private void checkOverlaps(Map<Integer, Geometry> unions, SpanFrame frame, List<GeometryProblem> found) {
+        /**
+         * Reports members whose tributary areas overlap. A pair whose trapezoids are provably apart
+         * ({@link Trapezoid#apart}) cannot overlap and is not intersected; any other pair with touching envelopes
+         * is intersected with JTS and reported when the overlap is substantial.
+         */
+        private void checkOverlaps(Map<Integer, Geometry> unions, Map<Integer, List<Trapezoid>> traps, SpanFrame frame,
+                List<GeometryProblem> found) {
             List<Map.Entry<Integer, Geometry>> list = new ArrayList<>(unions.entrySet());
             for (int i = 0; i < list.size(); i++) {
                 Envelope ei = list.get(i).getValue().getEnvelopeInternal();
                 for (int j = i + 1; j < list.size(); j++) {
                     Geometry gj = list.get(j).getValue();
                     if (!ei.intersects(gj.getEnvelopeInternal())) {
+                        continue;
+                    }
+                    if (Trapezoid.apart(traps.get(list.get(i).getKey()), traps.get(list.get(j).getKey()))) {
                         continue;
                     }
                     Geometry both = shapes.frameIntersection(list.get(i).getValue(), gj);

@@ -7,6 +7,7 @@ import org.baywright.catalog.CatalogException;
 import org.baywright.catalog.CatalogFile;
 import org.baywright.plan.Plan;
 import org.baywright.plan.Problem;
+import org.baywright.takedown.FloorCache;
 import org.baywright.takedown.Takedown;
 import org.baywright.takedown.TakedownResult;
 
@@ -35,8 +36,17 @@ public final class PlanRun {
 
     /** Runs a plan with a given catalog. */
     public static RunResult run(Plan plan, Catalog catalog) {
+        return run(plan, catalog, null);
+    }
+
+    /**
+     * Runs a plan with a given catalog, sharing floor designs with other runs through {@code reuse}
+     * (null: none). The result is the same as {@link #run(Plan, Catalog)}'s; a study passes one cache to
+     * all its variants.
+     */
+    public static RunResult run(Plan plan, Catalog catalog, FloorCache reuse) {
         long t0 = System.nanoTime();
-        TakedownResult t = Takedown.run(plan, catalog);
+        TakedownResult t = Takedown.run(plan, catalog, reuse);
         double ms = (System.nanoTime() - t0) / 1e6;
         return new RunResult(plan, t, List.of(), catalog.name(), version(), ms);
     }

@@ -75,8 +75,9 @@ public final class Optimiser {
             representative.put(layout(all.plan(i)), i);
         }
         List<Integer> chosen = new ArrayList<>(representative.values());
-        StudyResult r = Parallel.run(chosen.size(), k -> Study.runOne(all, chosen.get(k), catalog), parallelism, listener,
-                cancel);
+        org.baywright.takedown.FloorCache reuse = new org.baywright.takedown.FloorCache(catalog);
+        StudyResult r = Parallel.run(chosen.size(), k -> Study.runOne(all, chosen.get(k), catalog, reuse), parallelism,
+                listener, cancel);
         List<VariantResult> best = r.best(objective, depthLimit, n);
         return new Optimum(best, (int) all.count(), r.variants().size(), r.cancelled());
     }

@@ -5,12 +5,18 @@ import org.baywright.catalog.Catalog;
 import org.baywright.catalog.CatalogFile;
 import org.baywright.plan.Plan;
 import org.baywright.run.PlanRun;
+import org.baywright.takedown.FloorCache;
 
 /**
  * Runs a study: every variant is a full run of its plan ({@link PlanRun#run(Plan, Catalog)}: tributary
  * areas, the ordered design and the takedown, every level), spread over a pool of worker threads. A
  * cancel token is checked before each variant starts; a cancelled study returns the variants that
  * finished. Deterministic: the figures do not depend on the number of threads or their timing.
+ *
+ * <p>Variants often share floor layouts exactly (a column series changes no floor; beam spacings that
+ * give the same number of beams in every bay frame a floor alike): a study designs each distinct floor
+ * layout once and lets every variant with it reuse the design ({@link FloorCache}). Only designs with
+ * every input equal are shared, so each variant's figures are those of its own full run.
  */
 public final class Study {
     private Study() {
@@ -41,11 +47,16 @@ public final class Study {
         if (count > Integer.MAX_VALUE) {
             throw new IllegalArgumentException("a study of " + count + " variants is too large");
         }
-        return Parallel.run((int) count, i -> runOne(spec, i, catalog), parallelism, listener, cancel);
+        FloorCache reuse = new FloorCache(catalog);
+        return Parallel.run((int) count, i -> runOne(spec, i, catalog, reuse), parallelism, listener, cancel);
     }
 
-    /** Runs one variant; settings that do not fit the plan give a failed result with the reason. */
-    static VariantResult runOne(StudySpec spec, int index, Catalog catalog) {
+    /**
+     * Runs one variant; settings that do not fit the plan give a failed result with the reason. Floor
+     * designs are shared with the study's other variants through {@code reuse} (null: none); a variant's
+     * figures are the same either way.
+     */
+    static VariantResult runOne(StudySpec spec, int index, Catalog catalog, FloorCache reuse) {
         List<org.baywright.study.Setting> settings = spec.variant(index);
         Plan plan;
         try {
@@ -54,7 +65,7 @@ public final class Study {
             return VariantResult.failed(index, settings, e.getMessage());
         }
         try {
-            return VariantResult.of(index, settings, PlanRun.run(plan, catalog));
+            return VariantResult.of(index, settings, PlanRun.run(plan, catalog, reuse));
         } catch (RuntimeException e) {
             return VariantResult.failed(index, settings, "the run failed: " + e);
         }

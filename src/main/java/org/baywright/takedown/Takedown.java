@@ -101,10 +101,14 @@ public final class Takedown {
     /** Problems found, in a list safe for the parallel stages. */
     private final List<Problem> problems = java.util.Collections.synchronizedList(new ArrayList<>());
 
-    private Takedown(Plan plan, Catalog catalog) {
+    /** Floor designs shared with other runs, or null. */
+    private final FloorCache reuse;
+
+    private Takedown(Plan plan, Catalog catalog, FloorCache reuse) {
         this.plan = plan;
         this.settings = plan.settings();
         this.catalog = catalog;
+        this.reuse = reuse != null && reuse.catalog() == catalog ? reuse : null;
         this.steel = Steel.A992.fy() == settings.fy() ? Steel.A992 : Steel.A992.withFy(settings.fy());
         DesignMethod m = DesignMethod.parse(settings.method());
         this.method = m == null ? DesignMethod.LRFD : m;
@@ -112,7 +116,86 @@ public final class Takedown {
 
     /** Runs the takedown of a valid plan. */
     public static TakedownResult run(Plan plan, Catalog catalog) {
-        return new Takedown(plan, catalog).run();
+        return new Takedown(plan, catalog, null).run();
+    }
+
+    /**
+     * Runs the takedown of a valid plan, taking the design of a floor layout from {@code reuse} when a
+     * run with the same catalog has designed one with exactly the same inputs (see {@link FloorCache}),
+     * and leaving its own there. The result is the same as without it.
+     *
+     * @param reuse floor designs shared between runs, or null
+     */
+    public static TakedownResult run(Plan plan, Catalog catalog, FloorCache reuse) {
+        return new Takedown(plan, catalog, reuse).run();
+    }
+
+    /** A floor's members as designed: those drawn and those its infills generate, and the infills left out. */
+    private record Expansion(List<Member> members, List<Problem> problems) {
+    }
+
+    /**
+     * The members drawn and those the infills generate; an infill that would generate more than
+     * {@link #MAX_INFILL_BEAMS} beams (a plan built in code; files are checked on reading) is
+     * reported and left out instead of exhausting memory.
+     */
+    private Expansion expand(Floor f) {
+        List<Member> out = new ArrayList<>(f.members());
+        List<Problem> left = new ArrayList<>();
+        for (org.baywright.plan.Infill inf : f.infills()) {
+            double width = bayWidth(inf);
+            int n = Framing.beamCount(inf, width);
+            if (n > MAX_INFILL_BEAMS) {
+                left.add(Problem.error("too-many-beams", "floor " + f.id(), inf.id(), "infill " + inf.id()
+                        + " would generate " + n + " beams; an infill has at most " + MAX_INFILL_BEAMS
+                        + " beams (give a smaller count or a larger maxSpacing); it was left out"));
+                continue;
+            }
+            out.addAll(Framing.infillBeams(plan, inf));
+        }
+        return new Expansion(List.copyOf(out), List.copyOf(left));
+    }
+
+    /** The width of an infill's bay across its beams, m (0 when a grid line is unknown). */
+    private double bayWidth(org.baywright.plan.Infill inf) {
+        boolean alongX = inf.direction() == org.baywright.plan.GridLine.Axis.X;
+        Optional<org.baywright.plan.GridLine> a = plan.gridLine(alongX ? inf.y0() : inf.x0());
+        Optional<org.baywright.plan.GridLine> b = plan.gridLine(alongX ? inf.y1() : inf.x1());
+        return a.isPresent() && b.isPresent() ? Math.abs(b.get().offset() - a.get().offset()) : 0;
+    }
+
+    /**
+     * Designs one floor layout with the columns present, or takes the design from the cache. The key
+     * holds every input the design reads: the layout with its members expanded (the infills as the
+     * beams they generate), the infills left out, the columns present with their positions, the design
+     * settings that concern floors (the column series and splices do not) and, through the cache, the
+     * catalog.
+     */
+    private FloorDesign designFloor(Floor floor, Set<String> columnsPresent) {
+        Expansion ex = expand(floor);
+        if (reuse == null) {
+            return new FloorRun(floor, ex, columnsPresent).outcome();
+        }
+        List<Column> columns = new ArrayList<>();
+        for (Column c : plan.columns()) {
+            if (columnsPresent.contains(c.id())) {
+                columns.add(c);
+            }
+        }
+        DesignSettings s = settings;
+        DesignSettings forFloors = new DesignSettings(s.method(), s.fy(), s.liveDeflection(), s.totalDeflection(),
+                s.beamSeries(), s.girderSeries(), List.of(), s.maxBeamDepth(), 0, s.liveLoadReduction(), s.partitionAsDead(),
+                s.girderAreaDelivered(), "");
+        FloorKey key = new FloorKey(floor.id(), floor.name(), floor.roof(), floor.slabEdge(), floor.decks(), ex.members(),
+                ex.problems(), floor.openings(), floor.areaLoads(), floor.lineLoads(), floor.pointLoads(), columns, forFloors);
+        return reuse.get(key, () -> new FloorRun(floor, ex, columnsPresent).outcome());
+    }
+
+    /** Everything a floor design depends on besides the catalog (see {@link #designFloor}). */
+    private record FloorKey(String id, String name, boolean roof, org.baywright.plan.Polygon slabEdge,
+            List<org.baywright.plan.Deck> decks, List<Member> members, List<Problem> leftOut,
+            List<org.baywright.plan.Opening> openings, List<AreaLoad> areaLoads, List<LineLoad> lineLoads,
+            List<PointLoadItem> pointLoads, List<Column> columns, DesignSettings settings) {
     }
 
     /** The per-floor state: members, geometry and results. */
@@ -132,9 +215,10 @@ public final class Takedown {
         final Map<String, double[]> columnL0 = new LinkedHashMap<>();
         double loadedArea;
 
-        FloorRun(Floor floor, Set<String> columnsPresent) {
+        FloorRun(Floor floor, Expansion expansion, Set<String> columnsPresent) {
             this.floor = floor;
-            this.members = members(floor);
+            this.members = expansion.members();
+            problems.addAll(expansion.problems());
             for (Member m : members) {
                 byId.put(m.id(), m);
             }
@@ -147,33 +231,11 @@ public final class Takedown {
             design(columnsPresent);
         }
 
-        /**
-         * The members drawn and those the infills generate; an infill that would generate more than
-         * {@link #MAX_INFILL_BEAMS} beams (a plan built in code; files are checked on reading) is
-         * reported and left out instead of exhausting memory.
-         */
-        private List<Member> members(Floor f) {
-            List<Member> out = new ArrayList<>(f.members());
-            for (org.baywright.plan.Infill inf : f.infills()) {
-                double width = bayWidth(inf);
-                int n = Framing.beamCount(inf, width);
-                if (n > MAX_INFILL_BEAMS) {
-                    problems.add(Problem.error("too-many-beams", "floor " + f.id(), inf.id(), "infill " + inf.id()
-                            + " would generate " + n + " beams; an infill has at most " + MAX_INFILL_BEAMS
-                            + " beams (give a smaller count or a larger maxSpacing); it was left out"));
-                    continue;
-                }
-                out.addAll(Framing.infillBeams(plan, inf));
-            }
-            return out;
-        }
-
-        /** The width of an infill's bay across its beams, m (0 when a grid line is unknown). */
-        private double bayWidth(org.baywright.plan.Infill inf) {
-            boolean alongX = inf.direction() == org.baywright.plan.GridLine.Axis.X;
-            Optional<org.baywright.plan.GridLine> a = plan.gridLine(alongX ? inf.y0() : inf.x0());
-            Optional<org.baywright.plan.GridLine> b = plan.gridLine(alongX ? inf.y1() : inf.x1());
-            return a.isPresent() && b.isPresent() ? Math.abs(b.get().offset() - a.get().offset()) : 0;
+        /** What this floor's design produced, for every level (and run) that uses it. */
+        FloorDesign outcome() {
+            return new FloorDesign(List.copyOf(results.values()), java.util.Collections.unmodifiableMap(columnLoads),
+                    java.util.Collections.unmodifiableMap(columnArea), java.util.Collections.unmodifiableMap(columnL0),
+                    loadedArea, trib.areaLoadAreas(), List.copyOf(problems));
         }
 
         private void design(Set<String> columnsPresent) {
@@ -488,7 +550,6 @@ public final class Takedown {
                     list.add(f == 1.0 ? l : l.scaled(f));
                 }
             }
-            BeamLoads bl = BeamLoads.of(span, caseLoads);
             Bracing bracing = m.kind() == MemberKind.BEAM || bracePoints.isEmpty() && own > 0 ? Bracing.continuous()
                     : Bracing.atFractions(bracePoints.stream().distinct().mapToDouble(Double::doubleValue).toArray());
             if (m.kind() == MemberKind.GIRDER && bracePoints.isEmpty() && own == 0) {
@@ -496,21 +557,22 @@ public final class Takedown {
             }
             BeamCriteria criteria = new BeamCriteria(method, steel, bracing,
                     new DeflectionLimits(settings.liveDeflection(), settings.totalDeflection()), true);
-            BeamDesigner designer = new BeamDesigner(bl, criteria);
+            BeamLoads bl;
             BeamDesign d;
             Optional<String> fixed = m.fixedSection();
-            if (fixed.isPresent()) {
-                Optional<Section> s = catalog.find(fixed.get());
-                if (s.isEmpty()) {
+            Optional<Section> fixedSection = fixed.flatMap(catalog::find);
+            if (fixedSection.isPresent()) {
+                bl = BeamLoads.of(span, caseLoads);
+                d = new BeamDesigner(bl, criteria).checkFixed(fixedSection.get());
+            } else {
+                if (fixed.isPresent()) {
                     problems.add(new Problem(Problem.Severity.ERROR, "unknown-section", "floor " + floor.id(), m.id(),
                             "member " + m.id() + ": section " + fixed.get() + " is not in the catalog " + catalog.name()
                                     + "; the member was sized instead", List.of(m.start(), m.end())));
-                    d = designer.search(catalog, filter(m.kind()));
-                } else {
-                    d = designer.checkFixed(s.get());
                 }
-            } else {
-                d = designer.search(catalog, filter(m.kind()));
+                Sized sized = sized(span, caseLoads, criteria, filter(m.kind()));
+                bl = sized.loads();
+                d = sized.design();
             }
             if (d.status() == MemberStatus.OVERSTRESSED) {
                 problems.add(new Problem(Problem.Severity.ERROR, "overstressed", "floor " + floor.id(), m.id(),
@@ -563,6 +625,38 @@ public final class Takedown {
         }
     }
 
+
+    /**
+     * The inputs that fix the outcome of a lightest-section search: span, service loads by load case,
+     * criteria and filter (the catalog is the run's). Equal keys give equal designs, so a search is run
+     * once per key: on a regular floor most beams carry exactly the same loads.
+     */
+    private record SearchKey(double span, List<List<SpanLoad>> loads, BeamCriteria criteria, SearchFilter filter) {
+    }
+
+    /** A member's service loads and the search's outcome for them. */
+    private record Sized(BeamLoads loads, BeamDesign design) {
+    }
+
+    /** Searches done in this run, by their inputs (floors run in parallel). */
+    private final Map<SearchKey, Sized> searches = new java.util.concurrent.ConcurrentHashMap<>();
+
+    /** The lightest section for these loads: searched once per distinct set of inputs in a run. */
+    private Sized sized(double span, Map<LoadCase, List<SpanLoad>> caseLoads, BeamCriteria criteria, SearchFilter filter) {
+        List<List<SpanLoad>> byCase = new ArrayList<>();
+        for (LoadCase c : LoadCase.values()) {
+            byCase.add(List.copyOf(caseLoads.getOrDefault(c, List.of())));
+        }
+        SearchKey key = new SearchKey(span, byCase, criteria, filter);
+        Sized done = searches.get(key);
+        if (done == null) {
+            BeamLoads bl = BeamLoads.of(span, caseLoads);
+            done = new Sized(bl, new BeamDesigner(bl, criteria).search(catalog, filter));
+            Sized raced = searches.putIfAbsent(key, done);
+            done = raced != null ? raced : done;
+        }
+        return done;
+    }
 
     /** Splits load values into components; records the largest live intensity per component in l0. */
     private double[] components(LoadValues v, LiveLoadUse use, double[] l0) {
@@ -688,11 +782,11 @@ public final class Takedown {
             distinctColumns.putIfAbsent(key, present.get(i));
             levelKeys.add(key);
         }
-        Map<String, FloorRun> runs = new java.util.concurrent.ConcurrentHashMap<>();
+        Map<String, FloorDesign> runs = new java.util.concurrent.ConcurrentHashMap<>();
         distinct.entrySet().parallelStream().forEach(e -> runs.put(e.getKey(),
-                new FloorRun(e.getValue(), distinctColumns.get(e.getKey()))));
+                designFloor(e.getValue(), distinctColumns.get(e.getKey()))));
         for (String key : distinct.keySet()) {
-            problems.addAll(runs.get(key).problems); // in the plan's order, whatever order the floors finished in
+            problems.addAll(runs.get(key).problems()); // in the plan's order, whatever order the floors finished in
         }
         // result keys: the layout id, or id@level when one layout runs with different columns
         Map<String, String> resultKeys = new LinkedHashMap<>();
@@ -700,7 +794,7 @@ public final class Takedown {
         for (String key : distinct.keySet()) {
             perLayout.merge(distinct.get(key).id(), 1, Integer::sum);
         }
-        List<FloorRun> levelRuns = new ArrayList<>();
+        List<AtLevel> levelRuns = new ArrayList<>();
         Map<String, String> levelFloors = new LinkedHashMap<>();
         Map<String, List<MemberResult>> members = new LinkedHashMap<>();
         for (int i = 0; i < levels.size(); i++) {
@@ -709,41 +803,45 @@ public final class Takedown {
                 levelRuns.add(null);
                 continue;
             }
-            FloorRun fr = runs.get(key);
-            levelRuns.add(fr);
+            FloorDesign fr = runs.get(key);
+            levelRuns.add(new AtLevel(distinct.get(key), fr));
             String id = distinct.get(key).id();
             String resultKey = resultKeys.computeIfAbsent(key, k -> perLayout.get(id) == 1 ? id : id + "@" + levels.get(
                     levelKeys.indexOf(k)).name());
-            members.putIfAbsent(resultKey, List.copyOf(fr.results.values()));
+            members.putIfAbsent(resultKey, fr.members());
             levelFloors.put(levels.get(i).name(), resultKey);
         }
         double floorArea = 0;
-        for (FloorRun fr : levelRuns) {
+        for (AtLevel fr : levelRuns) {
             if (fr != null) {
-                floorArea += fr.loadedArea;
+                floorArea += fr.design().loadedArea();
             }
         }
         List<ColumnResult> columns = new ColumnDesigner(plan, catalog, steel, method, levelRuns.stream()
-                .map(fr -> fr == null ? null : new ColumnDesigner.LevelLoads(fr.columnLoads, fr.columnArea, fr.columnL0,
-                        fr.floor))
+                .map(fr -> fr == null ? null : new ColumnDesigner.LevelLoads(fr.design().columnLoads(),
+                        fr.design().columnArea(), fr.design().columnL0(), fr.floor()))
                 .toList(), problems).design();
         List<Equilibrium> eq = equilibrium(levelRuns, columns);
         return new TakedownResult(members, levelFloors, columns, eq, List.copyOf(problems), floorArea);
     }
 
     /** Applied loads per load case against the foundation reactions. */
-    private List<Equilibrium> equilibrium(List<FloorRun> levelRuns, List<ColumnResult> columns) {
+    /** A level's floor layout and its design. */
+    private record AtLevel(Floor floor, FloorDesign design) {
+    }
+
+    private List<Equilibrium> equilibrium(List<AtLevel> levelRuns, List<ColumnResult> columns) {
         double[] applied = new double[LoadCase.values().length];
         double[] slack = new double[LoadCase.values().length];
-        for (FloorRun fr : levelRuns) {
+        for (AtLevel fr : levelRuns) {
             if (fr == null) {
                 continue;
             }
-            for (AreaLoad al : fr.floor.areaLoads()) {
-                double area = fr.trib.areaLoadAreas().getOrDefault(al.id(), 0.0);
+            for (AreaLoad al : fr.floor().areaLoads()) {
+                double area = fr.design().areaLoadAreas().getOrDefault(al.id(), 0.0);
                 add(applied, components(al.values(), al.use(), null), area);
             }
-            for (LineLoad ll : fr.floor.lineLoads()) {
+            for (LineLoad ll : fr.floor().lineLoads()) {
                 double len = 0;
                 for (int k = 0; k + 1 < ll.path().size(); k++) {
                     len += ll.path().get(k).distance(ll.path().get(k + 1));
@@ -754,10 +852,10 @@ public final class Takedown {
                 // half a step in x and in y, and pieces shorter than a step are not placed
                 add(slack, q, 2 * GRID * ll.path().size());
             }
-            for (PointLoadItem p : fr.floor.pointLoads()) {
+            for (PointLoadItem p : fr.floor().pointLoads()) {
                 add(applied, components(p.values(), LiveLoadUse.ORDINARY, null), 1);
             }
-            for (MemberResult m : fr.results.values()) {
+            for (MemberResult m : fr.design().members()) {
                 applied[LoadCase.D.ordinal()] += m.steelWeight();
             }
         }

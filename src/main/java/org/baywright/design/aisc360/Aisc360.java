@@ -18,13 +18,18 @@ public final class Aisc360 {
 
     /** Reference text for an equation, e.g. {@code ref("F2-1")} → "AISC 360-16 Eq. F2-1". */
     public static String eq(String number) {
-        return REFS.computeIfAbsent("Eq. " + number, k -> EDITION + " " + k);
+        // called with calc == null on the search's hot path too: a plain look-up by the number, no
+        // string building and no bin lock once the text is known
+        String r = EQUATIONS.get(number);
+        return r != null ? r : EQUATIONS.computeIfAbsent(number, k -> EDITION + " Eq. " + k);
     }
 
-    private static final java.util.Map<String, String> REFS = new java.util.concurrent.ConcurrentHashMap<>();
+    private static final java.util.Map<String, String> EQUATIONS = new java.util.concurrent.ConcurrentHashMap<>();
+    private static final java.util.Map<String, String> CLAUSES = new java.util.concurrent.ConcurrentHashMap<>();
 
     /** Reference text for a clause or table, e.g. {@code clause("Table B4.1b")}. */
     public static String clause(String clause) {
-        return REFS.computeIfAbsent(clause, k -> EDITION + " " + k);
+        String r = CLAUSES.get(clause);
+        return r != null ? r : CLAUSES.computeIfAbsent(clause, k -> EDITION + " " + k);
     }
 }

@@ -17,6 +17,11 @@ import org.baywright.catalog.SectionProperties;
  * Lcz ≤ Lcy and is not checked.
  */
 public final class IShapeCompression {
+    // the references recorded on calculation sheets, built once (the search evaluates these functions without a sheet)
+    private static final String CLAUSE_E2 = Aisc360.clause("E2");
+    private static final String CLAUSE_E3 = Aisc360.clause("E3");
+    private static final String CLAUSE_TABLE_B4_1A = Aisc360.clause("Table B4.1a");
+
     private IShapeCompression() {
     }
 
@@ -38,7 +43,7 @@ public final class IShapeCompression {
             Calc.branch(calc, "bf/2tf = " + CalcFormat.sig(s.bfOver2tf()) + (sf ? " > " : " ≤ ") + "λr = " + CalcFormat.sig(lrf)
                 + "; h/tw = " + CalcFormat.sig(s.hOverTw()) + (sw ? " > " : " ≤ ") + "λr = " + CalcFormat.sig(lrw)
                 + (sf || sw ? " → slender element: E7 applies (not implemented)" : " → no slender elements: E3 applies"),
-                    Aisc360.clause("Table B4.1a"));
+                    CLAUSE_TABLE_B4_1A);
         }
         return sf || sw;
     }
@@ -52,16 +57,16 @@ public final class IShapeCompression {
         double sx = lcx / p.rx();
         double sy = lcy / p.ry();
         if (calc != null) {
-            calc.eq("Lcx/rx", "Lcx/rx", Aisc360.clause("E2"), sx, Quantity.NUMBER,
+            calc.eq("Lcx/rx", "Lcx/rx", CLAUSE_E2, sx, Quantity.NUMBER,
                     Arg.of("Lcx", lcx, Quantity.SPAN_LENGTH), Arg.of("rx", p.rx(), Quantity.SECTION_LENGTH));
-            calc.eq("Lcy/ry", "Lcy/ry", Aisc360.clause("E2"), sy, Quantity.NUMBER,
+            calc.eq("Lcy/ry", "Lcy/ry", CLAUSE_E2, sy, Quantity.NUMBER,
                     Arg.of("Lcy", lcy, Quantity.SPAN_LENGTH), Arg.of("ry", p.ry(), Quantity.SECTION_LENGTH));
         }
         boolean yGoverns = sy >= sx;
         double lc = yGoverns ? lcy : lcx;
         double r = yGoverns ? p.ry() : p.rx();
         Calc.branch(calc, (yGoverns ? "Lcy/ry ≥ Lcx/rx → buckling about the y-axis governs"
-                : "Lcx/rx > Lcy/ry → buckling about the x-axis governs"), Aisc360.clause("E3"));
+                : "Lcx/rx > Lcy/ry → buckling about the x-axis governs"), CLAUSE_E3);
         double fe = CompressionE3.fe(e, lc, r, calc);
         double fcr = CompressionE3.fcr(fy, fe, e, lc / r, calc);
         double pn = CompressionE3.pn(fcr, p.a(), calc);

@@ -16,6 +16,17 @@ import org.baywright.catalog.SectionProperties;
  * web would need F4 and is reported as not applicable). Load is taken at the shear centre.
  */
 public final class IShapeFlexure {
+    // the references recorded on calculation sheets, built once (the search evaluates these functions without a sheet)
+    private static final String CLAUSE_F2 = Aisc360.clause("F2");
+    private static final String CLAUSE_F2_2 = Aisc360.clause("F2.2");
+    private static final String CLAUSE_F2_2_A = Aisc360.clause("F2.2(a)");
+    private static final String CLAUSE_F2_2_B = Aisc360.clause("F2.2(b)");
+    private static final String CLAUSE_F2_2_C = Aisc360.clause("F2.2(c)");
+    private static final String CLAUSE_F3 = Aisc360.clause("F3");
+    private static final String CLAUSE_TABLE_B4_1B_CASE_10 = Aisc360.clause("Table B4.1b Case 10");
+    private static final String CLAUSE_TABLE_B4_1B_CASE_15 = Aisc360.clause("Table B4.1b Case 15");
+    private static final String EQ_F2_7 = Aisc360.eq("F2-7");
+
     private IShapeFlexure() {
     }
 
@@ -46,19 +57,19 @@ public final class IShapeFlexure {
         boolean webCompact = lambdaW <= lpw;
         Calc.branch(calc, "λw = h/tw = " + CalcFormat.sig(lambdaW) + (webCompact ? " ≤ " : " > ") + "λpw = "
                 + CalcFormat.sig(lpw) + (webCompact ? " → compact web" : " → noncompact web: F4 applies (not implemented)"),
-                Aisc360.clause("Table B4.1b Case 15"));
+                CLAUSE_TABLE_B4_1B_CASE_15);
         FlangeClass fc = lambdaF <= lpf ? FlangeClass.COMPACT : lambdaF <= lrf ? FlangeClass.NONCOMPACT : FlangeClass.SLENDER;
         Calc.branch(calc, "λf = bf/2tf = " + CalcFormat.sig(lambdaF) + switch (fc) {
             case COMPACT -> " ≤ λpf = " + CalcFormat.sig(lpf) + " → compact flange: F2 applies";
             case NONCOMPACT -> " > λpf = " + CalcFormat.sig(lpf) + ", ≤ λrf = " + CalcFormat.sig(lrf)
                     + " → noncompact flange: F3 applies";
             case SLENDER -> " > λrf = " + CalcFormat.sig(lrf) + " → slender flange: F3 applies";
-        }, Aisc360.clause("Table B4.1b Case 10"));
+        }, CLAUSE_TABLE_B4_1B_CASE_10);
         double sx = p.sx();
         double mp = FlexureF2.mp(fy, p.zx(), calc);
         double mr = FlexureF2.mr(fy, sx, calc);
         double ry = p.ry();
-        double rts = Calc.eq(calc, "rts", "√(√(Iy·Cw)/Sx)", Aisc360.eq("F2-7"), p.rts(), Quantity.SECTION_LENGTH,
+        double rts = Calc.eq(calc, "rts", "√(√(Iy·Cw)/Sx)", EQ_F2_7, p.rts(), Quantity.SECTION_LENGTH,
                 Arg.of("Iy", p.iy(), Quantity.INERTIA), Arg.of("Cw", p.cw(), Quantity.WARPING),
                 Arg.of("Sx", sx, Quantity.SECTION_MODULUS));
         double ho = s.ho();
@@ -85,27 +96,27 @@ public final class IShapeFlexure {
         double ltb;
         if (lb <= k.lp()) {
             Calc.branch(calc, (lb == 0 ? "Lb = 0 (continuously braced)" : "Lb ≤ Lp") + " → no lateral-torsional buckling",
-                    Aisc360.clause("F2.2(a)"));
+                    CLAUSE_F2_2_A);
             ltb = k.mp();
         } else if (lb <= k.lr()) {
-            Calc.branch(calc, "Lp < Lb ≤ Lr → inelastic lateral-torsional buckling", Aisc360.clause("F2.2(b)"));
+            Calc.branch(calc, "Lp < Lb ≤ Lr → inelastic lateral-torsional buckling", CLAUSE_F2_2_B);
             ltb = FlexureF2.inelasticLtb(cb, k.mp(), k.fy(), k.sx(), lb, k.lp(), k.lr(), calc);
         } else {
-            Calc.branch(calc, "Lb > Lr → elastic lateral-torsional buckling", Aisc360.clause("F2.2(c)"));
+            Calc.branch(calc, "Lb > Lr → elastic lateral-torsional buckling", CLAUSE_F2_2_C);
             double fcr = FlexureF2.fcr(cb, k.e(), lb, k.rts(), k.j(), k.sx(), k.ho(), calc);
             ltb = FlexureF2.elasticLtb(fcr, k.sx(), calc);
         }
         if (ltb > k.mp()) {
-            Calc.branch(calc, "Mn,LTB > Mp → Mn,LTB = Mp", Aisc360.clause("F2.2"));
+            Calc.branch(calc, "Mn,LTB > Mp → Mn,LTB = Mp", CLAUSE_F2_2);
             ltb = k.mp();
         }
         double mn = Math.min(ltb, k.mnFlb());
         if (calc != null) {
             if (k.flange() == FlangeClass.COMPACT) {
-                calc.eq("Mn", "min(Mp, Mn_LTB)", Aisc360.clause("F2"), mn, Quantity.MOMENT,
+                calc.eq("Mn", "min(Mp, Mn_LTB)", CLAUSE_F2, mn, Quantity.MOMENT,
                         Arg.of("Mp", k.mp(), Quantity.MOMENT), Arg.of("Mn_LTB", ltb, Quantity.MOMENT));
             } else {
-                calc.eq("Mn", "min(Mn_LTB, Mn_FLB)", Aisc360.clause("F3"), mn, Quantity.MOMENT,
+                calc.eq("Mn", "min(Mn_LTB, Mn_FLB)", CLAUSE_F3, mn, Quantity.MOMENT,
                         Arg.of("Mn_LTB", ltb, Quantity.MOMENT), Arg.of("Mn_FLB", k.mnFlb(), Quantity.MOMENT));
             }
         }

@@ -6,6 +6,10 @@ import org.baywright.catalog.Section;
 
 /** Major-axis shear strength of a rolled I-shape with an unstiffened web, AISC 360-16 G2.1. */
 public final class IShapeShear {
+    // the references recorded on calculation sheets, built once (the search evaluates these functions without a sheet)
+    private static final String CLAUSE_G2_1_A = Aisc360.clause("G2.1(a)");
+    private static final String CLAUSE_G2_1_B = Aisc360.clause("G2.1(b)");
+
     private IShapeShear() {
     }
 
@@ -25,11 +29,11 @@ public final class IShapeShear {
         double cv1;
         if (a) {
             Calc.branch(calc, "h/tw = " + CalcFormat.sig(hw) + " ≤ 2.24√(E/Fy) = " + CalcFormat.sig(limA)
-                    + " → Cv1 = 1.0, φv = 1.00, Ωv = 1.50", Aisc360.clause("G2.1(a)"));
+                    + " → Cv1 = 1.0, φv = 1.00, Ωv = 1.50", CLAUSE_G2_1_A);
             cv1 = 1.0;
         } else {
             Calc.branch(calc, "h/tw = " + CalcFormat.sig(hw) + " > 2.24√(E/Fy) = " + CalcFormat.sig(limA)
-                    + " → φv = 0.90, Ωv = 1.67", Aisc360.clause("G2.1(b)"));
+                    + " → φv = 0.90, Ωv = 1.67", CLAUSE_G2_1_B);
             cv1 = ShearG2.cv1(hw, ShearG2.KV_UNSTIFFENED, e, fy, calc);
         }
         double vn = ShearG2.vn(fy, s.depth(), s.dims().tw(), cv1, calc);

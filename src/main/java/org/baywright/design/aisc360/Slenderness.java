@@ -6,11 +6,15 @@ import org.baywright.calc.Quantity;
 
 /** Width-to-thickness limits of AISC 360-16 Tables B4.1a and B4.1b for rolled I-shapes. */
 public final class Slenderness {
+    // the references recorded on calculation sheets, built once (the search evaluates these functions without a sheet)
+    private static final String CLAUSE_TABLE_B4_1A = Aisc360.clause("Table B4.1a");
+    private static final String CLAUSE_TABLE_B4_1B = Aisc360.clause("Table B4.1b");
+
     private Slenderness() {
     }
 
-    private static final String B41B = Aisc360.clause("Table B4.1b");
-    private static final String B41A = Aisc360.clause("Table B4.1a");
+    private static final String B41B = CLAUSE_TABLE_B4_1B;
+    private static final String B41A = CLAUSE_TABLE_B4_1A;
 
     /** λpf = 0.38√(E/Fy): compact limit, flange of a rolled I in flexure (Table B4.1b, Case 10). */
     public static double lambdaPf(double e, double fy, Calc calc) {

@@ -47,7 +47,7 @@ final class RunChecks {
                 assertTrue(e.holds(), () -> "equilibrium fails with no problem to explain it: " + e + "; problems "
                         + r.problems());
             } else {
-                assertTrue(e.reactions() <= e.applied() * (1 + Equilibrium.TOLERANCE) + e.slack() + 1e-6,
+                assertTrue(e.reactions() <= e.applied() * (1 + Equilibrium.TOLERANCE) + e.slack() + Equilibrium.FLOOR,
                         () -> "reactions exceed the load: " + e);
             }
         }

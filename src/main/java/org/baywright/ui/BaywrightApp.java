@@ -156,6 +156,11 @@ public final class BaywrightApp extends Application {
         return model;
     }
 
+    /** The main window (tests). */
+    MainWindow window() {
+        return window;
+    }
+
     /** The autosave of the open document; null when autosave is off (tests). */
     EditorRecovery recovery() {
         return recovery;

@@ -84,6 +84,8 @@ public final class MainWindow {
     private final Label takeoffTotals = new Label();
     private final TextArea calculation = new TextArea();
     private final TabPane sideTabs = new TabPane();
+    private final StudyPanel study;
+    private final TabPane centreTabs = new TabPane();
     private boolean syncingTable;
     /** Opens a plan in a new window (set by the application; by default the plan replaces this one). */
     private java.util.function.Consumer<org.baywright.plan.Plan> newWindow;
@@ -113,7 +115,14 @@ public final class MainWindow {
         SplitPane down = new SplitPane(across, problemsPanel());
         down.setOrientation(Orientation.VERTICAL);
         down.setDividerPositions(0.84);
-        root.setCenter(down);
+        // the plan and the Study panel share the middle of the window: its charts want the whole width
+        study = new StudyPanel(model::plan, this::openAsNewDocument);
+        Tab planTab = tab("Plan", down);
+        Tab studyTab = tab("Study", study);
+        centreTabs.setId("centre-tabs");
+        centreTabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
+        centreTabs.getTabs().addAll(planTab, studyTab);
+        root.setCenter(centreTabs);
         root.setBottom(statusBar());
         model.runProperty().addListener((o, a, b) -> refreshStatus());
         model.selectedProperty().addListener((o, a, b) -> refreshProperties());
@@ -170,6 +179,21 @@ public final class MainWindow {
         }
     }
 
+    /**
+     * Shows a tab by its name: the middle's Plan or Study, or the side panel's Properties, Members,
+     * Takeoff or Calculation.
+     */
+    public void showTab(String name) {
+        for (TabPane pane : List.of(centreTabs, sideTabs)) {
+            pane.getTabs().stream().filter(t -> t.getText().equals(name)).findFirst().ifPresent(t -> {
+                pane.getSelectionModel().select(t);
+                if (pane == sideTabs) {
+                    centreTabs.getSelectionModel().select(0);
+                }
+            });
+        }
+    }
+
     /** Adds a tab to the side panel (the Study panel lives there). */
     public void addSideTab(String name, Node content) {
         sideTabs.getTabs().add(tab(name, content));
@@ -178,6 +202,11 @@ public final class MainWindow {
     /** The root node of the window. */
     public Parent root() {
         return root;
+    }
+
+    /** The Study panel (sweeps of the open plan). */
+    public StudyPanel study() {
+        return study;
     }
 
     /** The plan view. */
@@ -245,7 +274,10 @@ public final class MainWindow {
         tributary.setAccelerator(KeyCombination.keyCombination("Shortcut+T"));
         tributary.selectedProperty().bindBidirectional(model.showTributaryProperty());
         MenuItem rerun = item("Run again", "F5", model::rerun);
-        Menu view = new Menu("View", null, fit, new SeparatorMenuItem(), reactions, tributary, new SeparatorMenuItem(), rerun);
+        MenuItem showPlan = item("Plan", "Shortcut+1", () -> showTab("Plan"));
+        MenuItem showStudy = item("Study", "Shortcut+2", () -> showTab("Study"));
+        Menu view = new Menu("View", null, showPlan, showStudy, new SeparatorMenuItem(), fit, new SeparatorMenuItem(), reactions,
+                tributary, new SeparatorMenuItem(), rerun);
         Menu design = new Menu("Design", null, unitsMenu(), methodMenu());
         design.setId("menu-design");
         Menu help = new Menu("Help", null, item("Tools and keys", "F1", this::keysHelp), item("About Baywright", null, this::about));

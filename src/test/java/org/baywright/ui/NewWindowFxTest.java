@@ -58,4 +58,26 @@ class NewWindowFxTest {
         });
         assertNull(app.recovery() == null ? "autosave is off" : null);
     }
+
+    @Test
+    void theStudyTabRunsASweepOfTheOpenPlanAndAPointOpensInANewWindow(FxRobot robot) throws Exception {
+        robot.interact(() -> app.window().showTab("Study"));
+        StudyPanel panel = app.window().study();
+        javafx.scene.control.TextField spacing = robot.lookup("#study-field-beam-spacing")
+                .queryAs(javafx.scene.control.TextField.class);
+        robot.interact(() -> spacing.setText("8ft,10ft"));
+        robot.clickOn("#study-run");
+        org.testfx.util.WaitForAsyncUtils.waitFor(180, java.util.concurrent.TimeUnit.SECONDS,
+                () -> !panel.runningProperty().get() && panel.result() != null);
+        org.testfx.util.WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(2, panel.result().variants().size());
+        @SuppressWarnings("unchecked")
+        javafx.scene.chart.ScatterChart<Number, Number> depth = robot.lookup("#study-chart-depth")
+                .queryAs(javafx.scene.chart.ScatterChart.class);
+        javafx.scene.Node point = depth.getData().stream().flatMap(x -> x.getData().stream()).findFirst().orElseThrow().getNode();
+        robot.clickOn(point);
+        org.testfx.util.WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(1, app.others.size(), "the variant opened in a window of its own");
+        assertTrue(app.others.get(0).getTitle().contains("(not saved)"), app.others.get(0).getTitle());
+    }
 }

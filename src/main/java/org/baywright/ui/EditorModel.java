@@ -63,7 +63,8 @@ public final class EditorModel {
     private final BooleanProperty canRedo = new SimpleBooleanProperty(this, "canRedo");
     /** The plan as last saved or opened, to tell whether there are unsaved changes. */
     private Plan savedPlan;
-    private long generation;
+    /** Read by the run thread to skip a stale run: volatile. */
+    private volatile long generation;
 
     public EditorModel(TaskRunner runner) {
         this.runner = Objects.requireNonNull(runner, "runner");
@@ -365,16 +366,17 @@ public final class EditorModel {
             if (gen == generation && r != null) {
                 running.set(false);
                 run.set(r);
+                List<Problem> all = new ArrayList<>(fileProblems);
+                all.addAll(r.problems());
+                problems.setAll(all);
+                message.set(r.takedown() == null ? "The plan could not be run; see Problems." : "Run complete.");
+                // after every listener has redrawn (canvas, panels, status bar)
                 synchronized (latencies) {
                     latencies.addLast((System.nanoTime() - started) / 1e6);
                     if (latencies.size() > LATENCY_KEPT) {
                         latencies.removeFirst();
                     }
                 }
-                List<Problem> all = new ArrayList<>(fileProblems);
-                all.addAll(r.problems());
-                problems.setAll(all);
-                message.set(r.takedown() == null ? "The plan could not be run; see Problems." : "Run complete.");
             }
         }, e -> {
             if (gen == generation) {

@@ -126,6 +126,7 @@ public final class EditorModel {
         boolean has = p.levels().stream().anyMatch(l -> l.name().equals(keep));
         level.set(has ? keep : p.levels().isEmpty() ? null : p.levels().get(0).name());
         plan.set(p);
+        toolSettings.defaultsFor(units());
         opened.set(opened.get() + 1);
         history.reset(p);
         savedPlan = p;

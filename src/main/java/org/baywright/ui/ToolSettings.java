@@ -39,4 +39,24 @@ public final class ToolSettings {
     public final StringProperty pointDead = new SimpleStringProperty(this, "pointDead", "5kip");
     /** Point load: live load. */
     public final StringProperty pointLive = new SimpleStringProperty(this, "pointLive", "");
+
+    /**
+     * Puts the untouched defaults in the plan's units: a value the user typed stays as typed (both unit
+     * systems are read either way).
+     */
+    public void defaultsFor(org.baywright.units.UnitSystem us) {
+        boolean si = us == org.baywright.units.UnitSystem.SI;
+        swap(infill, "10ft", "3m", si);
+        swap(areaLive, "100psf", "5kPa", si);
+        swap(lineDead, "0.5klf", "7kN/m", si);
+        swap(pointDead, "5kip", "20kN", si);
+    }
+
+    private static void swap(StringProperty p, String us, String si, boolean toSi) {
+        if (toSi && us.equals(p.get())) {
+            p.set(si);
+        } else if (!toSi && si.equals(p.get())) {
+            p.set(us);
+        }
+    }
 }

@@ -42,6 +42,17 @@ class ToolValuesTest {
     }
 
     @Test
+    void untouchedDefaultsFollowThePlansUnitsAndTypedValuesStay() {
+        ToolSettings s = new ToolSettings();
+        s.areaLive.set("80psf");
+        s.defaultsFor(UnitSystem.SI);
+        assertEquals("3m", s.infill.get());
+        assertEquals("80psf", s.areaLive.get(), "typed by the user: kept");
+        s.defaultsFor(UnitSystem.US);
+        assertEquals("10ft", s.infill.get());
+    }
+
+    @Test
     void loadsMayBeBlankButNotNegative() {
         ToolSettings s = new ToolSettings();
         s.areaSd.set("");

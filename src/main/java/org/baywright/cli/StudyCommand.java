@@ -120,20 +120,14 @@ public final class StudyCommand implements Callable<Integer> {
             }
             sweeps.add(s);
         }
-        Plan base = limit > 0 ? Variations.maxDepth(plan, limit) : plan;
-        StudySpec study = new StudySpec(base, sweeps);
-        long count;
-        try {
-            count = study.count();
-        } catch (ArithmeticException e) {
-            count = Long.MAX_VALUE;
-        }
+        StudySpec study = StudySpec.withDepthLimit(plan, sweeps, limit);
+        long count = study.countOrMax();
         if (count > MAX_VARIANTS) {
             throw new BadInputException("--vary: " + count + " variants is too many; at most " + MAX_VARIANTS);
         }
         Catalog catalog;
         try {
-            catalog = Study.catalogOf(base);
+            catalog = Study.catalogOf(study.base());
         } catch (CatalogException e) {
             throw new BadInputException(file + ": /settings/catalog: " + e.getMessage(), e);
         }

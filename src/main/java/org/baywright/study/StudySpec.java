@@ -21,6 +21,23 @@ public record StudySpec(Plan base, List<Sweep> sweeps) {
         }
     }
 
+    /**
+     * A study of a plan whose members are sized within a structural depth limit (m; 0 for none): the
+     * limit is applied to the base before the sweeps.
+     */
+    public static StudySpec withDepthLimit(Plan plan, List<Sweep> sweeps, double depthLimit) {
+        return new StudySpec(depthLimit > 0 ? Variations.maxDepth(plan, depthLimit) : plan, sweeps);
+    }
+
+    /** The number of variants, or {@link Long#MAX_VALUE} when it is too large to count. */
+    public long countOrMax() {
+        try {
+            return count();
+        } catch (ArithmeticException e) {
+            return Long.MAX_VALUE;
+        }
+    }
+
     /** Number of variants (the product of the value counts; 1 with no sweeps). */
     public long count() {
         long n = 1;

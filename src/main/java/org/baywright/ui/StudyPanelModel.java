@@ -191,14 +191,8 @@ public final class StudyPanelModel {
             errors.put("", "Give values to at least one parameter, e.g. Beam spacing " + field("beam-spacing").example(us) + ".");
             return new Checked(null, errors);
         }
-        Plan base = limit > 0 ? Variations.maxDepth(plan, limit) : plan;
-        StudySpec spec = new StudySpec(base, sweeps);
-        long count;
-        try {
-            count = spec.count();
-        } catch (ArithmeticException e) {
-            count = Long.MAX_VALUE;
-        }
+        StudySpec spec = StudySpec.withDepthLimit(plan, sweeps, limit);
+        long count = spec.countOrMax();
         if (count > MAX_VARIANTS) {
             errors.put("", String.format(Locale.ROOT, "These values make %,d variants; the Study panel runs at most %,d."
                     + " Use fewer values, or the command line (baywright study) for a larger study.", count, MAX_VARIANTS));

@@ -153,9 +153,13 @@ class RecoveryFxTest {
         // the window's close box: the unsaved-changes question, answered "Discard changes"
         javafx.application.Platform.runLater(() -> stage.fireEvent(
                 new javafx.stage.WindowEvent(stage, javafx.stage.WindowEvent.WINDOW_CLOSE_REQUEST)));
+        // wait for the question's button to be on screen (a lookup may find it before its window shows)
         WaitForAsyncUtils.waitFor(PATIENCE_SECONDS, TimeUnit.SECONDS,
-                () -> robot.lookup("Discard changes").tryQuery().isPresent());
-        robot.clickOn("Discard changes");
+                () -> robot.lookup("Discard changes").match(org.testfx.util.NodeQueryUtils.isVisible()).tryQuery().isPresent()
+                        && robot.lookup("Discard changes").match(org.testfx.util.NodeQueryUtils.isVisible()).query()
+                                .getScene().getWindow().isShowing());
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.clickOn((javafx.scene.Node) robot.lookup("Discard changes").match(org.testfx.util.NodeQueryUtils.isVisible()).query());
         WaitForAsyncUtils.waitForFxEvents();
         robot.interact(() -> app.stop()); // what the toolkit calls once the last window has closed
         assertAll(

@@ -131,18 +131,7 @@ public final class DesignCommand implements Callable<Integer> {
                 err.println("wrote " + report + ": " + summary.pages() + " pages");
             }
         }
-        if (json != null) {
-            String text = JsonText.write(RunSummary.json(r, us));
-            if (json.equals("-")) {
-                out.print(text);
-            } else {
-                Files.writeString(Path.of(json), text, StandardCharsets.UTF_8);
-            }
-        }
-        if (json == null || !json.equals("-")) {
-            out.print(RunSummary.text(r, us));
-        }
-        out.flush();
+        PlanInput.writeResult(out, json, () -> JsonText.write(RunSummary.json(r, us)), () -> RunSummary.text(r, us));
         for (org.baywright.plan.Problem p : r.problems()) {
             err.println(ProblemLines.line(file, p)); // also in the summary; standard error has them one per line
         }

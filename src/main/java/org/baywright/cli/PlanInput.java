@@ -9,7 +9,7 @@ import org.baywright.io.PlanReadResult;
 import org.baywright.plan.Plan;
 import org.baywright.plan.Problem;
 
-/** Reads a plan file for a command, printing its problems one per line. */
+/** Reads a plan file for a command, printing its problems one per line; writes its main result. */
 final class PlanInput {
     private PlanInput() {
     }
@@ -48,5 +48,25 @@ final class PlanInput {
             throw new BadInputException(option + ": " + output + " is named like a plan file (" + PlanFiles.EXTENSION
                     + "); results are not plans. Give another file name, e.g. ending in .json or .csv");
         }
+    }
+
+    /**
+     * The result of a command: as JSON to the file named by {@code --json} (or to standard output for
+     * "-"), and as text to standard output unless the JSON went there.
+     */
+    static void writeResult(PrintWriter out, String json, java.util.function.Supplier<String> jsonText,
+            java.util.function.Supplier<String> text) throws IOException {
+        if (json != null) {
+            String t = jsonText.get();
+            if (json.equals("-")) {
+                out.print(t);
+            } else {
+                Files.writeString(Path.of(json), t, java.nio.charset.StandardCharsets.UTF_8);
+            }
+        }
+        if (json == null || !json.equals("-")) {
+            out.print(text.get());
+        }
+        out.flush();
     }
 }

@@ -146,18 +146,8 @@ public final class StudyCommand implements Callable<Integer> {
         if (csv != null) {
             Files.writeString(csv, csv(r, sweeps, us, obj), StandardCharsets.UTF_8);
         }
-        if (json != null) {
-            String text = JsonText.write(json(r, sweeps, plan, us, obj, limit, best));
-            if (json.equals("-")) {
-                out.print(text);
-            } else {
-                Files.writeString(Path.of(json), text, StandardCharsets.UTF_8);
-            }
-        }
-        if (json == null || !json.equals("-")) {
-            out.print(text(r, sweeps, plan, us, obj, limit, best));
-        }
-        out.flush();
+        PlanInput.writeResult(out, json, () -> JsonText.write(json(r, sweeps, plan, us, obj, limit, best)),
+                () -> text(r, sweeps, plan, us, obj, limit, best));
         return best.isEmpty() ? BaywrightCommand.EXIT_OVERSTRESSED : BaywrightCommand.EXIT_OK;
     }
 

@@ -325,7 +325,9 @@ final class PlanAssembler {
             return; // some floor ids are unknown (reported): references cannot be checked
         }
         Set<String> idSet = new java.util.LinkedHashSet<>();
-        floors.forEach(f -> idSet.add(f.id()));
+        if (floors != null) { // absent or null: the plan has no floors, and every reference is unknown
+            floors.forEach(f -> idSet.add(f.id()));
+        }
         List<String> ids = List.copyOf(idSet);
         for (int i = 0; i < levels.size(); i++) {
             LevelDoc l = levels.get(i);
@@ -346,7 +348,9 @@ final class PlanAssembler {
             return; // some level names are unknown (reported)
         }
         List<String> names = new ArrayList<>();
-        levels.forEach(l -> names.add(l.name()));
+        if (levels != null) { // absent or null: the plan has no levels, and every named top level is unknown
+            levels.forEach(l -> names.add(l.name()));
+        }
         Set<String> nameSet = new HashSet<>(names);
         for (int i = 0; i < columns.size(); i++) {
             ColumnDoc c = columns.get(i);

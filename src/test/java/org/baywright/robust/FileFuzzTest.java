@@ -28,6 +28,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 import java.util.stream.Stream;
 import net.jqwik.api.Arbitraries;
 import net.jqwik.api.Arbitrary;
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
@@ -118,6 +119,30 @@ class FileFuzzTest {
         JsonNode root = tree(base);
         replace(root, pick(root, which), replacement.deepCopy());
         check("wrong type", text(root));
+    }
+
+    /**
+     * A {@code null} in every position of every base file, on every run: deterministic, so a position
+     * that once crashed the reader ({@code "levels": null}) cannot hide behind the random draw above.
+     * The schema-wide rule (null reads as absent) is {@code io.NullFieldsTest}; this one also runs what
+     * still reads.
+     */
+    @Example
+    void nullInEveryPosition() {
+        for (int base = 0; base < BASES.size(); base++) {
+            JsonNode root = tree(base);
+            List<String> pointers = new ArrayList<>();
+            walk(root, "", (p, n) -> {
+                if (!p.isEmpty()) {
+                    pointers.add(p);
+                }
+            });
+            for (String pointer : pointers) {
+                JsonNode mutant = tree(base);
+                replace(mutant, pointer, NODES.nullNode());
+                check("null everywhere", text(mutant));
+            }
+        }
     }
 
     @Property(tries = 150)

@@ -46,10 +46,10 @@ import picocli.CommandLine.Spec;
 /** {@code baywright beam}: size (or check) one simple-span member. */
 @Command(name = "beam", mixinStandardHelpOptions = true, sortOptions = false,
         description = {
-            "Size one simple-span floor member: the lightest catalog section that passes flexure (AISC 360-16 F2/F3,",
-            "with lateral-torsional buckling), shear (G2.1) and the deflection limits, its own weight included.",
-            "Loads are service loads; the ASCE 7-16 combinations are applied. Every length, load and stress needs",
-            "its unit: 35ft, 30'-6\", 10.5m; 0.45klf, 450plf, 6.5kN/m; 12kip, 50kN; 50ksi, 345MPa.",
+            "Size one simple-span floor member: the lightest catalog section that passes flexure (AISC 360-16 F2/F3, "
+            + "with lateral-torsional buckling), shear (G2.1) and the deflection limits, its own weight included.",
+            "Loads are service loads; the ASCE 7-16 combinations are applied. Every length, load and stress needs "
+            + "its unit: 35ft, 30'-6\", 10.5m; 0.45klf, 450plf, 6.5kN/m; 12kip, 50kN; 50ksi, 345MPa.",
             "Exit code: 0 sized or fixed size passes; 1 overstressed; 2 bad input."},
         footer = {"", Caution.TEXT})
 public final class BeamCommand implements Callable<Integer> {

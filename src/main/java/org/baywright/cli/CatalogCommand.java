@@ -181,8 +181,8 @@ public final class CatalogCommand implements Runnable {
 
     /** {@code catalog import}. */
     @Command(name = "import", mixinStandardHelpOptions = true,
-            description = {"Read the published shapes database exported to CSV (its own column names: AISC_Manual_Label, Type,",
-                "W, d, bf, tw, tf, kdes, A, Ix, Zx, Sx, Iy, Zy, Sy, J, Cw) and write a Baywright catalog file."})
+            description = {"Read the published shapes database exported to CSV (its own column names: AISC_Manual_Label, "
+                + "Type, W, d, bf, tw, tf, kdes, A, Ix, Zx, Sx, Iy, Zy, Sy, J, Cw) and write a Baywright catalog file."})
     static final class Import implements Callable<Integer> {
         @Spec
         picocli.CommandLine.Model.CommandSpec spec;

@@ -13,8 +13,9 @@ import picocli.CommandLine.Spec;
 
 /** {@code baywright check}: validate a plan file. */
 @Command(name = "check", mixinStandardHelpOptions = true,
-        description = {"Validate a plan file: the file itself (format, fields, units, ranges, references), then the",
-            "framing (supports, support cycles, tributary coverage, equilibrium). One line per problem.",
+        description = {"Validate a plan file: the file itself (format, fields, units, ranges, references), then the "
+            + "framing (supports, support cycles, tributary coverage, equilibrium).",
+            "Prints one line per problem.",
             "Exit code: 0 no errors; 1 the framing has errors; 2 the file cannot be read."})
 public final class CheckCommand implements Callable<Integer> {
     @Spec

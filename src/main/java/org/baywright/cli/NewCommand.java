@@ -20,9 +20,10 @@ import picocli.CommandLine.Spec;
 
 /** {@code baywright new}: write a regular plan, the starting point of a study. */
 @Command(name = "new", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Write a regular plan: a grid of bays, columns at every intersection, girders, column-line beams,",
-            "infill beams at a maximum spacing, one deck, area loads, an edge load, and levels of a typical floor",
-            "under a roof. Lists of lengths: 3@30ft, or 25ft,30ft,30ft (items without spaces)."},
+        description = {"Write a regular plan: a grid of bays with columns at every intersection, girders, column-line beams, "
+            + "infill beams at a maximum spacing, one deck, area loads, an edge load, and levels of a typical floor "
+            + "under a roof.",
+            "Lists of lengths: 3@30ft, or 25ft,30ft,30ft (items without spaces)."},
         footer = {"", Caution.TEXT})
 public final class NewCommand implements Callable<Integer> {
     @Spec

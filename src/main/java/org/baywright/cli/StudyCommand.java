@@ -41,8 +41,8 @@ import picocli.CommandLine.Spec;
 /** {@code baywright study}: sweep bay sizes and beam layouts of a plan and compare steel weight and depth. */
 @Command(name = "study", mixinStandardHelpOptions = true,
         description = {"Sweep bay sizes, beam spacing and direction (and design settings) of a plan: every variant is a full run.",
-            "Prints the variants sorted by steel weight per floor area, marks the Pareto fronts of weight against",
-            "structural depth (D) and against piece count (P), and the best three for the objective (see docs/study.md).",
+            "Prints the variants sorted by steel weight per floor area, marks the Pareto fronts of weight against "
+            + "structural depth (D) and against piece count (P), and the best three for the objective (see docs/study.md).",
             "Exit code: 0 some variant sized without problems; 1 none did; 2 bad input."},
         footer = {"", "Parameters: bay-x, bay-y, beam-spacing, beam-count, beam-direction, method, max-depth, column-series.",
             "Values: a range A..B:STEP (6ft..15ft:1ft) or a list a,b,c (x,y); a bay value may give one width per bay: 30ft;35ft;30ft.",

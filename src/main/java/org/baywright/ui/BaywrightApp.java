@@ -222,6 +222,7 @@ public final class BaywrightApp extends Application {
     }
 
     public static void main(String[] args) {
+        StartupLog.quietClasspathNotice();
         launch(args);
     }
 }

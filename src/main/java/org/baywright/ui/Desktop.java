@@ -16,6 +16,7 @@ public final class Desktop {
      */
     public static int open(String[] args) {
         try {
+            StartupLog.quietClasspathNotice();
             Application.launch(BaywrightApp.class, args);
             return 0;
         } catch (RuntimeException | UnsatisfiedLinkError e) {

@@ -20,7 +20,6 @@ import org.baywright.report.pdf.CalculationPackage;
 import org.baywright.report.pdf.PackageOptions;
 import org.baywright.report.pdf.ProjectInfo;
 import org.baywright.report.RunSummary;
-import org.baywright.report.Takeoff;
 import org.baywright.run.PlanRun;
 import org.baywright.run.RunResult;
 import org.baywright.units.UnitSystem;
@@ -63,7 +62,7 @@ public final class DesignCommand implements Callable<Integer> {
     @Option(names = "--reactions", paramLabel = "factored|service", defaultValue = "factored", description = "End reactions on the drawing (default ${DEFAULT-VALUE}).")
     String reactions;
 
-    @Option(names = "--takeoff", paramLabel = "FILE.csv", description = "Write the steel takeoff (by size, kind and level; totals) as CSV.")
+    @Option(names = "--takeoff", paramLabel = "FILE.xlsx|FILE.csv", description = "Write the steel takeoff: a workbook (.xlsx) with one sheet per table (size × level × kind, by size, by level, by kind, totals), or a CSV of size × level × kind rows with the totals in FILE-totals.csv.")
     Path takeoff;
 
     @Option(names = "--schedule", paramLabel = "FILE.csv", description = "Write the column schedule (tiers, axial loads per level and case, foundation reactions) as CSV.")
@@ -100,7 +99,7 @@ public final class DesignCommand implements Callable<Integer> {
         RunResult r = PlanRun.run(plan);
         if (r.takedown() != null) {
             if (takeoff != null) {
-                Files.writeString(takeoff, Takeoff.of(r, allowance).csv(us), StandardCharsets.UTF_8);
+                TakeoffOutput.write(r, allowance, us, takeoff, err);
             }
             if (schedule != null) {
                 Files.writeString(schedule, ColumnSchedule.csv(r, us), StandardCharsets.UTF_8);
@@ -131,7 +130,7 @@ public final class DesignCommand implements Callable<Integer> {
                 err.println("wrote " + report + ": " + summary.pages() + " pages");
             }
         }
-        PlanInput.writeResult(out, json, () -> JsonText.write(RunSummary.json(r, us)), () -> RunSummary.text(r, us));
+        PlanInput.writeResult(out, json, () -> JsonText.write(RunSummary.json(r, us)), () -> TakeoffOutput.withSummaryLine(RunSummary.text(r, us), r, allowance, us));
         for (org.baywright.plan.Problem p : r.problems()) {
             err.println(ProblemLines.line(file, p)); // also in the summary; standard error has them one per line
         }

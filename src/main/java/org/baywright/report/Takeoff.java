@@ -17,11 +17,28 @@ import org.baywright.units.UnitSystem;
 import org.baywright.units.Units;
 
 /**
- * The steel takeoff of a run: count, length and weight by section size, by member kind and by level,
- * totals, weight per floor area, and an optional allowance for connections and miscellaneous steel
- * (a percentage, shown separately from the member weight). Weights are nominal weight × length.
+ * The steel takeoff of a run: pieces, length and weight by section size × level × kind (the tidy table
+ * an estimator sorts and pivots), and from it by section size, by member kind and by level; totals,
+ * weight per floor area, and an optional allowance for connections and miscellaneous steel (a
+ * percentage, shown separately from the member weight). Weights are nominal weight × length.
+ *
+ * <p>Pieces: a beam or girder is one piece on its level. A column tier (the shaft between two
+ * splices) is one piece, counted on the lowest level it spans, where it is erected; its length and
+ * weight are split over the storeys it spans, each on the level at the top of the storey. So every
+ * table counts the same pieces and the same weight, and each sums to the totals.
  */
 public final class Takeoff {
+    /**
+     * One line of the tidy table: one section size on one level as one kind of member.
+     *
+     * @param kind "beam", "girder" or "column"
+     * @param pieces pieces erected on this level
+     * @param length total length on this level, m
+     * @param weight total weight on this level, N
+     */
+    public record Line(String section, String level, String kind, int pieces, double length, double weight) {
+    }
+
     /**
      * One row: a section size, a kind or a level.
      *
@@ -31,6 +48,7 @@ public final class Takeoff {
     public record Row(String item, int count, double length, double weight) {
     }
 
+    private final List<Line> lines;
     private final Map<String, Row> bySection;
     private final Map<String, Row> byKind;
     private final Map<String, Row> byLevel;
@@ -38,8 +56,9 @@ public final class Takeoff {
     private final double allowancePercent;
     private final double floorArea;
 
-    private Takeoff(Map<String, Row> bySection, Map<String, Row> byKind, Map<String, Row> byLevel, double total,
-            double allowancePercent, double floorArea) {
+    private Takeoff(List<Line> lines, Map<String, Row> bySection, Map<String, Row> byKind, Map<String, Row> byLevel,
+            double total, double allowancePercent, double floorArea) {
+        this.lines = List.copyOf(lines);
         this.bySection = bySection;
         this.byKind = byKind;
         this.byLevel = byLevel;
@@ -54,46 +73,71 @@ public final class Takeoff {
             throw new IllegalArgumentException("the connection allowance must be a percentage from 0 to 100, got " + allowancePercent);
         }
         TakedownResult t = run.takedown();
+        List<String> levelOrder = run.plan().levels().stream().map(Level::name).toList();
+        // size × level × kind, in the order of the levels, then kinds, then sizes
+        Map<List<String>, Line> cells = new TreeMap<>((a, b) -> {
+            int c = Integer.compare(levelOrder.indexOf(a.get(1)), levelOrder.indexOf(b.get(1)));
+            if (c == 0) {
+                c = Integer.compare(KINDS.indexOf(a.get(2)), KINDS.indexOf(b.get(2)));
+            }
+            if (c == 0) {
+                c = compareSections(a.get(0), b.get(0));
+            }
+            return c;
+        });
+        double floorArea = 0;
+        if (t != null) {
+            floorArea = t.floorArea();
+            for (Level lv : run.plan().levels()) {
+                for (MemberResult m : t.members().getOrDefault(t.levelFloors().get(lv.name()), List.of())) {
+                    if (!m.section().isEmpty()) {
+                        cell(cells, m.section(), lv.name(), m.kind().name().toLowerCase(Locale.ROOT), 1, m.length(),
+                                m.steelWeight());
+                    }
+                }
+            }
+            for (ColumnResult c : t.columns()) {
+                for (ColumnTier tier : c.tiers()) {
+                    if (tier.section().isEmpty()) {
+                        continue;
+                    }
+                    boolean first = true;
+                    for (StoreyLoad st : tier.storeys()) { // bottom first: the piece counts on the lowest
+                        cell(cells, tier.section(), st.level(), "column", first ? 1 : 0, st.storeyHeight(),
+                                tier.weight() * st.storeyHeight());
+                        first = false;
+                    }
+                }
+            }
+        }
+        List<Line> lines = new ArrayList<>(cells.values());
         Map<String, Row> section = new TreeMap<>(Takeoff::compareSections);
         Map<String, Row> kind = new LinkedHashMap<>();
         Map<String, Row> level = new LinkedHashMap<>();
-        double total = 0;
-        for (Level lv : run.plan().levels()) {
-            level.put(lv.name(), new Row(lv.name(), 0, 0, 0));
+        for (String lv : levelOrder) {
+            level.put(lv, new Row(lv, 0, 0, 0));
         }
-        for (String k : List.of("beam", "girder", "column")) {
+        for (String k : KINDS) {
             kind.put(k, new Row(k + "s", 0, 0, 0));
         }
-        if (t == null) {
-            return new Takeoff(section, kind, level, 0, allowancePercent, 0);
+        double total = 0;
+        for (Line l : lines) {
+            add(section, l.section(), l.pieces(), l.length(), l.weight());
+            add(kind, l.kind(), l.pieces(), l.length(), l.weight());
+            add(level, l.level(), l.pieces(), l.length(), l.weight());
+            total += l.weight();
         }
-        for (Level lv : run.plan().levels()) {
-            for (MemberResult m : t.members().getOrDefault(t.levelFloors().get(lv.name()), List.of())) {
-                if (m.section().isEmpty()) {
-                    continue;
-                }
-                double w = m.steelWeight();
-                add(section, m.section(), 1, m.length(), w);
-                add(kind, m.kind().name().toLowerCase(Locale.ROOT), 1, m.length(), w);
-                add(level, lv.name(), 1, m.length(), w);
-                total += w;
-            }
-        }
-        for (ColumnResult c : t.columns()) {
-            for (ColumnTier tier : c.tiers()) {
-                if (tier.section().isEmpty()) {
-                    continue;
-                }
-                double w = tier.weight() * tier.length();
-                add(section, tier.section(), 1, tier.length(), w);
-                add(kind, "column", 1, tier.length(), w);
-                total += w;
-                for (StoreyLoad s : tier.storeys()) {
-                    add(level, s.level(), 0, s.storeyHeight(), tier.weight() * s.storeyHeight());
-                }
-            }
-        }
-        return new Takeoff(section, kind, level, total, allowancePercent, t.floorArea());
+        return new Takeoff(lines, section, kind, level, total, allowancePercent, floorArea);
+    }
+
+    /** The kinds of piece, in the order the tables list them. */
+    static final List<String> KINDS = List.of("beam", "girder", "column");
+
+    private static void cell(Map<List<String>, Line> cells, String section, String level, String kind, int pieces,
+            double length, double weight) {
+        cells.merge(List.of(section, level, kind), new Line(section, level, kind, pieces, length, weight),
+                (a, b) -> new Line(section, level, kind, a.pieces() + b.pieces(), a.length() + b.length(),
+                        a.weight() + b.weight()));
     }
 
     private static void add(Map<String, Row> m, String key, int count, double length, double weight) {
@@ -126,6 +170,16 @@ public final class Takeoff {
         } catch (RuntimeException e) {
             return new double[] {0, 0};
         }
+    }
+
+    /** The tidy table: one line per section size × level × kind. */
+    public List<Line> lines() {
+        return lines;
+    }
+
+    /** Pieces in all: beams and girders, and column tiers. */
+    public int pieces() {
+        return lines.stream().mapToInt(Line::pieces).sum();
     }
 
     public List<Row> bySection() {
@@ -164,6 +218,16 @@ public final class Takeoff {
         return floorArea;
     }
 
+    /** A weight in N as pounds (US) or kilograms (SI). */
+    public static double weightIn(double newtons, UnitSystem us) {
+        return RunSummary.weight(newtons, us);
+    }
+
+    /** "lb" or "kg". */
+    public static String weightUnit(UnitSystem us) {
+        return RunSummary.weightUnit(us);
+    }
+
     /** Short tons (2,000 lb) of a weight in N. */
     public static double shortTons(double newtons) {
         return newtons / Units.NEWTONS_PER_POUND / 2000;
@@ -175,48 +239,97 @@ public final class Takeoff {
     }
 
     /**
-     * The takeoff as CSV: one header row with the units in the column names, then rows grouped by
-     * section, kind and level, and the totals.
+     * The tidy table as CSV, for a spreadsheet: a header with the units in the column names, then one
+     * row per section size × level × kind with its pieces, length and weight. Weights are whole pounds
+     * (kilograms in SI), lengths to 0.01 ft (0.001 m). The totals are {@link #totalsCsv(UnitSystem)}.
      */
     public String csv(UnitSystem us) {
-        String lu = us.length().symbol();
-        String wu = RunSummary.weightUnit(us);
         StringBuilder b = new StringBuilder();
-        b.append("group,item,count,length[").append(lu).append("],weight[").append(wu).append("],short tons,tonnes,value\n");
-        for (Row r : bySection()) {
-            row(b, "section", r, us);
+        b.append("section,level,kind,pieces,length[").append(ascii(us.length().symbol())).append("],weight[")
+                .append(RunSummary.weightUnit(us)).append("]\n");
+        for (Line l : lines) {
+            b.append(csvText(l.section())).append(',').append(csvText(l.level())).append(',').append(l.kind()).append(',')
+                    .append(l.pieces()).append(',').append(length(l.length(), us)).append(',').append(wholeWeight(l.weight(), us))
+                    .append('\n');
         }
-        for (Row r : byKind()) {
-            row(b, "kind", r, us);
-        }
-        for (Row r : byLevel()) {
-            row(b, "level", r, us);
-        }
-        row(b, "total", new Row("members and columns", -1, Double.NaN, total), us);
-        row(b, "total", new Row(String.format(Locale.ROOT, "connections and miscellaneous allowance %.1f %%", allowancePercent),
-                -1, Double.NaN, allowance()), us);
-        row(b, "total", new Row("total with allowance", -1, Double.NaN, grandTotal()), us);
-        double area = us.floorArea().fromSi(floorArea);
-        b.append("total,floor area [").append(us.floorArea().symbol().replace("²", "2")).append("],,,,,,")
-                .append(fmt(area)).append('\n');
-        b.append("total,weight per floor area with allowance [").append(us == UnitSystem.US ? "lb/ft2" : "kg/m2")
-                .append("],,,,,,").append(fmt(area > 0 ? RunSummary.weight(grandTotal(), us) / area : 0)).append('\n');
         return b.toString();
     }
 
-    private static void row(StringBuilder b, String group, Row r, UnitSystem us) {
-        b.append(group).append(',').append(csvText(r.item())).append(',').append(r.count() < 0 ? "" : Integer.toString(r.count()))
-                .append(',').append(Double.isNaN(r.length()) ? "" : fmt(us.length().fromSi(r.length()))).append(',')
-                .append(fmt(RunSummary.weight(r.weight(), us))).append(',').append(fmt(shortTons(r.weight()))).append(',')
-                .append(fmt(tonnes(r.weight()))).append(",\n");
+    /** The totals as CSV: one quantity a row, with its value and unit. */
+    public String totalsCsv(UnitSystem us) {
+        StringBuilder b = new StringBuilder("quantity,value,unit\n");
+        for (Total t : totals(us)) {
+            b.append(csvText(t.quantity())).append(',').append(t.value()).append(',').append(csvText(t.unit())).append('\n');
+        }
+        return b.toString();
+    }
+
+    /**
+     * One line of the totals: what, the value as text (already rounded for reading), its unit.
+     *
+     * @param number the value as a number, for a workbook cell
+     */
+    public record Total(String quantity, String value, double number, String unit) {
+    }
+
+    /** The totals in the order they are read: weights, the allowance, pieces, the floor area and weight per area. */
+    public List<Total> totals(UnitSystem us) {
+        String wu = RunSummary.weightUnit(us);
+        boolean usc = us == UnitSystem.US;
+        String tu = usc ? "short tons" : "tonnes";
+        double area = us.floorArea().fromSi(floorArea);
+        double bare = RunSummary.weight(total, us);
+        double with = RunSummary.weight(grandTotal(), us);
+        List<Total> out = new ArrayList<>();
+        out.add(whole("members and columns", bare, wu));
+        out.add(new Total("members and columns", tons(total, us), tonsValue(total, us), tu));
+        out.add(new Total("connections and miscellaneous allowance", fmt(allowancePercent, 1), allowancePercent, "%"));
+        out.add(whole("connections and miscellaneous allowance", RunSummary.weight(allowance(), us), wu));
+        out.add(whole("total with allowance", with, wu));
+        out.add(new Total("total with allowance", tons(grandTotal(), us), tonsValue(grandTotal(), us), tu));
+        out.add(new Total("pieces", Integer.toString(pieces()), pieces(), "beams, girders and column tiers"));
+        out.add(new Total("floor area", fmt(area, 0), Math.rint(area), ascii(us.floorArea().symbol())));
+        String per = usc ? "lb/ft2" : "kg/m2";
+        out.add(new Total("weight per floor area", fmt(area > 0 ? bare / area : 0, 2), area > 0 ? bare / area : 0, per));
+        out.add(new Total("weight per floor area with allowance", fmt(area > 0 ? with / area : 0, 2), area > 0 ? with / area : 0,
+                per));
+        return out;
+    }
+
+    private static Total whole(String quantity, double value, String unit) {
+        return new Total(quantity, fmt(value, 0), Math.rint(value), unit);
+    }
+
+    private static String tons(double newtons, UnitSystem us) {
+        return fmt(tonsValue(newtons, us), 2);
+    }
+
+    private static double tonsValue(double newtons, UnitSystem us) {
+        return us == UnitSystem.US ? shortTons(newtons) : tonnes(newtons);
+    }
+
+    /** Length in the system's unit, to 0.01 ft or 0.001 m. */
+    static String length(double metres, UnitSystem us) {
+        return fmt(us.length().fromSi(metres), us == UnitSystem.US ? 2 : 3);
+    }
+
+    /** Weight in whole pounds or kilograms. */
+    static String wholeWeight(double newtons, UnitSystem us) {
+        return fmt(RunSummary.weight(newtons, us), 0);
+    }
+
+    /** A unit symbol a spreadsheet reads anywhere: ft² as ft2. */
+    static String ascii(String unit) {
+        return unit.replace("²", "2").replace("³", "3");
+    }
+
+    private static String fmt(double v, int decimals) {
+        return String.format(Locale.ROOT, "%." + decimals + "f", v + 0.0);
     }
 
     static String csvText(String s) {
         return s.contains(",") || s.contains("\"") ? "\"" + s.replace("\"", "\"\"") + "\"" : s;
     }
 
-    static String fmt(double v) {
-        return String.format(Locale.ROOT, "%.3f", v);
-    }
 
 }

@@ -94,7 +94,18 @@ class PlanCommandsTest {
         assertEquals(0, d.code(), d.err());
         assertTrue(Files.size(pdf) > 10_000);
         assertTrue(Files.readString(svg).contains("<svg"), "svg");
-        assertTrue(Files.readString(csv).startsWith("group,item,count,length[ft],weight[lb]"));
+        assertTrue(Files.readString(csv).startsWith("section,level,kind,pieces,length[ft],weight[lb]\n"));
+        assertTrue(Files.readString(dir.resolve("takeoff-totals.csv")).contains("\nconnections and miscellaneous allowance,10.0,%\n"));
+        assertTrue(d.err().contains("wrote " + dir.resolve("takeoff-totals.csv")), d.err());
+        assertTrue(d.out().matches("(?s).*\nTakeoff: [\\d,]+ lb members and columns \\+ 10 % allowance [\\d,]+ lb = [\\d,]+ lb .*"),
+                "the summary prints the allowance and the total with it: " + d.out());
+        Path xlsx = dir.resolve("takeoff.xlsx");
+        assertEquals(0, BeamCommandTest.run("design", plan.toString(), "--takeoff", xlsx.toString()).code());
+        try (var wb = new org.apache.poi.xssf.usermodel.XSSFWorkbook(Files.newInputStream(xlsx))) {
+            assertEquals(5, wb.getNumberOfSheets());
+        }
+        assertTrue(!BeamCommandTest.run("design", plan.toString()).out().contains("Takeoff:"),
+                "no takeoff line without an allowance");
         assertTrue(Files.readString(cols).startsWith("column,grid,position,level,section"));
         try (var doc = org.apache.pdfbox.Loader.loadPDF(pdf.toFile())) {
             String text = new org.apache.pdfbox.text.PDFTextStripper().getText(doc);

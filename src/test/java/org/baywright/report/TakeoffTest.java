@@ -53,17 +53,67 @@ class TakeoffTest {
     }
 
     @Test
-    void csvHasOneHeaderWithUnits() {
-        String csv = Takeoff.of(run, 5).csv(UnitSystem.US);
-        List<String> lines = csv.lines().toList();
-        assertEquals("group,item,count,length[ft],weight[lb],short tons,tonnes,value", lines.get(0));
-        assertTrue(lines.stream().anyMatch(l -> l.startsWith("kind,columns,")), csv);
-        assertTrue(lines.stream().anyMatch(l -> l.startsWith("level,Level 3,")), csv);
-        assertTrue(lines.stream().anyMatch(l -> l.contains("allowance 5.0 %")), csv);
-        for (String l : lines) {
-            assertEquals(8, l.split(",", -1).length, l);
+    void everyTableCountsTheSamePiecesAndWeight() {
+        Takeoff t = Takeoff.of(run, 0);
+        int tiers = run.takedown().columns().stream().mapToInt(c -> c.tiers().size()).sum();
+        int pieces = 0; // members are listed per floor layout; a layout used on several levels counts on each
+        for (var lv : run.plan().levels()) {
+            pieces += run.takedown().members().get(run.takedown().levelFloors().get(lv.name())).size();
         }
-        assertTrue(Takeoff.of(run, 0).csv(UnitSystem.SI).startsWith("group,item,count,length[m],weight[kg]"));
+        pieces += tiers;
+        int expected = pieces;
+        double total = t.total();
+        assertAll(
+                () -> assertEquals(expected, t.pieces(), "a beam or girder per level, a column tier once"),
+                () -> assertEquals(expected, t.bySection().stream().mapToInt(Takeoff.Row::count).sum()),
+                () -> assertEquals(expected, t.byKind().stream().mapToInt(Takeoff.Row::count).sum()),
+                () -> assertEquals(expected, t.byLevel().stream().mapToInt(Takeoff.Row::count).sum(),
+                        "level rows count the column pieces too, on the lowest level of their tier"),
+                () -> assertEquals(tiers, t.byKind().stream().filter(r -> r.item().equals("columns")).findFirst()
+                        .orElseThrow().count()),
+                () -> assertEquals(total, t.lines().stream().mapToDouble(Takeoff.Line::weight).sum(), 1e-9 * total));
+    }
+
+    @Test
+    void tidyCsvHasOneRowPerSizeLevelAndKindInWholePounds() {
+        Takeoff t = Takeoff.of(run, 5);
+        String csv = t.csv(UnitSystem.US);
+        List<String> lines = csv.lines().toList();
+        assertEquals("section,level,kind,pieces,length[ft],weight[lb]", lines.get(0));
+        assertEquals(t.lines().size() + 1, lines.size());
+        java.util.Set<String> keys = new java.util.HashSet<>();
+        long pounds = 0;
+        for (String l : lines.subList(1, lines.size())) {
+            String[] f = l.split(",", -1);
+            assertEquals(6, f.length, l);
+            assertTrue(keys.add(f[0] + "|" + f[1] + "|" + f[2]), "one row per size × level × kind: " + l);
+            assertTrue(f[2].matches("beam|girder|column"), l);
+            assertTrue(f[4].matches("\\d+\\.\\d{2}"), "length to 0.01 ft: " + l);
+            assertTrue(f[5].matches("\\d+"), "whole pounds: " + l);
+            pounds += Long.parseLong(f[5]);
+        }
+        double lb = t.total() / Units.NEWTONS_PER_POUND;
+        assertEquals(lb, pounds, lines.size(), "the rows add up to the total, within a pound a row of rounding");
+        assertTrue(t.csv(UnitSystem.SI).startsWith("section,level,kind,pieces,length[m],weight[kg]\n"));
+    }
+
+    @Test
+    void totalsCsvHasTheAllowanceApart() {
+        Takeoff t = Takeoff.of(run, 5);
+        List<String> lines = t.totalsCsv(UnitSystem.US).lines().toList();
+        assertEquals("quantity,value,unit", lines.get(0));
+        long bare = Math.round(t.total() / Units.NEWTONS_PER_POUND);
+        long allowance = Math.round(0.05 * t.total() / Units.NEWTONS_PER_POUND);
+        assertAll(
+                () -> assertTrue(lines.contains("members and columns," + bare + ",lb"), lines::toString),
+                () -> assertTrue(lines.contains("connections and miscellaneous allowance,5.0,%"), lines::toString),
+                () -> assertTrue(lines.contains("connections and miscellaneous allowance," + allowance + ",lb"), lines::toString),
+                () -> assertTrue(lines.stream().anyMatch(l -> l.startsWith("total with allowance,") && l.endsWith(",short tons")),
+                        lines::toString),
+                () -> assertTrue(lines.contains("pieces," + t.pieces() + ",\"beams, girders and column tiers\""), lines::toString));
+        for (String l : lines) {
+            assertTrue(l.split(",(?=(?:[^\"]*\"[^\"]*\")*[^\"]*$)", -1).length == 3, l);
+        }
     }
 
     @Test

@@ -162,7 +162,8 @@ public final class CalculationPackage {
                 float top = h - PageFlow.MARGIN_TOP + 6;
                 if (i > 0) {
                     d.text(head, l, top, cx.projectName());
-                    String t = titles.getOrDefault(p.getCOSObject(), "");
+                    float room = r - l - d.width(head, cx.projectName()) - 24;
+                    String t = d.fit(headGrey, titles.getOrDefault(p.getCOSObject(), ""), room);
                     d.text(headGrey, r - d.width(headGrey, t), top, t);
                     d.line(l, top - 4, r, top - 4, 0.5f, Rgb.RULE);
                 }
@@ -193,6 +194,19 @@ public final class CalculationPackage {
 
         float width(Style s, String t) {
             return fonts.width(s.font(), s.size(), fonts.safe(t));
+        }
+
+        /** {@code t} as it fits in {@code room} points on one line: whole words, then "…" where cut. */
+        String fit(Style s, String t, float room) {
+            if (width(s, t) <= room) {
+                return t;
+            }
+            String cut = t;
+            while (!cut.isEmpty() && width(s, cut + " …") > room) {
+                int sp = cut.lastIndexOf(' ');
+                cut = sp > 0 ? cut.substring(0, sp) : cut.substring(0, cut.length() - 1);
+            }
+            return cut.replaceAll("[\\s,(]+$", "") + " …";
         }
 
         void text(Style s, float x, float y, String t) throws IOException {

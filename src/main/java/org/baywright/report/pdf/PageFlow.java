@@ -398,8 +398,11 @@ final class PageFlow {
     void heading1(String text) {
         runningTitle(text);
         newPage();
-        text(h1, left(), y - h1.size(), text);
-        y -= h1.leading() + 2;
+        for (String l : wrap(h1, text, width())) { // a long part title (a layout on many levels) wraps
+            text(h1, left(), y - h1.size(), l);
+            y -= h1.leading();
+        }
+        y -= 2;
         line(left(), y + 3, right(), y + 3, 0.8f, Rgb.ACCENT);
         y -= 8;
     }

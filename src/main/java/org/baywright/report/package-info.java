@@ -6,6 +6,7 @@
  *
  * <p>Entry points: {@link org.baywright.report.RunSummary}, {@link org.baywright.report.Takeoff},
  * {@link org.baywright.report.ColumnSchedule}. Depends on {@code run} and the engine below it; never on
- * JavaFX, {@code io}, {@code study} or a front end (the caller turns the JSON tree into text with {@code io}).
+ * JavaFX, {@code io}, {@code study} or a front end (the caller turns the JSON tree into text with
+ * {@code io}).
  */
 package org.baywright.report;

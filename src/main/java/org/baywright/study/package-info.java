@@ -6,7 +6,7 @@
  *
  * <p>Entry points: {@code Study.run(spec, ...)} giving a {@code StudyResult}, {@code StudySpec},
  * {@code SweepText} (sweeps as users type them), {@code Variations}, {@code Pareto}, {@code Optimiser}.
- * Depends on {@code run} and the engine below it, and on {@code report} for a run's counts and highest ratio; never
- * on {@code io} or a front end.
+ * Depends on {@code run} and the engine below it, and on {@code report} for a run's counts and highest
+ * ratio; never on {@code io} or a front end.
  */
 package org.baywright.study;

@@ -10,7 +10,8 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
 /**
- * The dependency rules of the house plan (docs/architecture.md, DEVELOPERS.md), executed.
+ * The dependency rules of the house plan, executed: docs/architecture.md, "Layer rules", lists each
+ * rule with the name of the method here that checks it (the top level is checked by {@link TopLevelTest}).
  */
 class ArchitectureTest {
     private static JavaClasses classes;

@@ -18,10 +18,11 @@ import org.baywright.units.Units;
  * model itself. Runs synchronously (no toolkit), so it is the work a live edit costs, without the
  * hand-over to the JavaFX thread (well under a millisecond). A benchmark: it reports, it asserts nothing.
  *
- * <p>{@code bench/run-edit-latency [PLAN] [EDITS] [--window]} (default: the demo plan, 200 edits after 20
- * warm-up edits). With {@code --window} the whole editor runs (headless, Monocle): each edit is made on
- * the JavaFX thread, runs on the editor's background thread, and its time ends when the result has
- * been shown — the canvas redrawn, the panels and the status bar refreshed.
+ * <p>{@code mvn -B -q -Pbench -Dbench=edit-latency -Dbench.args="[--window] [PLAN [EDITS]]"} (default:
+ * the demo plan, 200 edits after 20 warm-up edits). With {@code --window} the whole editor runs
+ * (headless, Monocle): each edit is made on the JavaFX thread, runs on the editor's background thread,
+ * and its time ends when the result has been shown — the canvas redrawn, the panels and the status bar
+ * refreshed.
  */
 public final class EditLatencyBenchmark {
     private EditLatencyBenchmark() {

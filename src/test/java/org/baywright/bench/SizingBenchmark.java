@@ -36,7 +36,8 @@ import org.openjdk.jmh.runner.options.OptionsBuilder;
 /**
  * Members sized per second: random simple-span floor members (10–45 ft, uniform dead and live
  * loads, a third of them with point loads) against the full built-in W catalog, one thread. A
- * benchmark, not a test: run it with {@code bench/run-sizing} and read the figure; nothing asserts it.
+ * benchmark, not a test: run it with {@code mvn -B -q -Pbench -Dbench=sizing} (JMH options in {@code -Dbench.args})
+ * and read the figure; nothing asserts it.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.Throughput)

@@ -25,7 +25,8 @@ import org.baywright.units.UnitSystem;
  * direction, every variant a full run. Measured on the full four-level demo and on a one-level version
  * of it (its first level only), as a study (variants share the floor designs whose inputs are equal)
  * and, for comparison, as separate runs of every variant's plan on the same number of threads.
- * A benchmark main, not a test: {@code bench/run-study [VARIANTS [THREADS [REPEATS]]]}. Prints each
+ * A benchmark main, not a test:
+ * {@code mvn -B -q -Pbench -Dbench=study -Dbench.args="[VARIANTS [THREADS [REPEATS]]]"}. Prints each
  * repeat and the median; asserts nothing. Besides the wall time it prints the CPU time the process used
  * (all its threads, JIT and GC included): on a machine shared with other jobs the wall time swings with
  * their load, the CPU time much less, and CPU time / threads is what the wall time would be on idle cores.

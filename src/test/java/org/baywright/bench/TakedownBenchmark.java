@@ -15,8 +15,9 @@ import org.baywright.units.Units;
 
 /**
  * A full run of a 20-storey, 8 × 6-bay building (30 × 40 ft bays, beams at 10 ft): wall time per run
- * and members designed per second. A benchmark main, not a test: {@code bench/run-takedown}. The
- * building is invented for benchmarking.
+ * and members designed per second. A benchmark main, not a test:
+ * {@code mvn -B -q -Pbench -Dbench=takedown [-Dbench.args=RUNS]} (default 15 runs). The building is
+ * invented for benchmarking.
  */
 public final class TakedownBenchmark {
     private TakedownBenchmark() {

@@ -411,7 +411,7 @@ class FileFuzzTest {
                 walk(n.get(i), pointer + "/" + i, v);
             }
         } else if (n.isObject()) {
-            n.fields().forEachRemaining(e -> walk(e.getValue(), pointer + "/" + e.getKey().replace("~", "~0")
+            n.properties().forEach(e -> walk(e.getValue(), pointer + "/" + e.getKey().replace("~", "~0")
                     .replace("/", "~1"), v));
         }
     }

@@ -94,9 +94,9 @@ class TakedownValidationTest {
         // B-B-12 and B-B-23 (one end each): 900 ft² of deck (common practice: interior column, 30 × 30 ft)
         ColumnResult c = run.takedown().columns().stream().filter(x -> x.id().equals("C-B2")).findFirst().orElseThrow();
         double[] perLevelD = new double[2];
-        Map<String, MemberResult>[] floors = new Map[] {typical, roof};
+        List<Map<String, MemberResult>> floors = List.of(typical, roof);
         for (int k = 0; k < 2; k++) {
-            Map<String, MemberResult> f = floors[k];
+            Map<String, MemberResult> f = floors.get(k);
             double q = k == 0 ? 66 : 71;
             double deck = q * 900 * PSF * FT * FT;
             // self-weight delivered: half of each girder G-2-*, half of each column-line beam B-B-*, and the

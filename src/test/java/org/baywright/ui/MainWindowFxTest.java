@@ -140,7 +140,7 @@ class MainWindowFxTest {
         WaitForAsyncUtils.waitForFxEvents();
         assertTrue(robot.lookup("Save the changes to " + original.name() + "?").tryQuery().isPresent(),
                 "the prompt names the plan");
-        robot.clickOn((Node) robot.lookup("Cancel").match(org.testfx.util.NodeQueryUtils.isVisible()).query());
+        robot.clickOn(robot.lookup("Cancel").match(org.testfx.util.NodeQueryUtils.isVisible()).<Node>query());
         WaitForAsyncUtils.waitForFxEvents();
         assertTrue(model.dirtyProperty().get(), "nothing was lost");
         assertNotEquals(original, model.plan(), "the edited plan is still open");

@@ -159,7 +159,7 @@ class RecoveryFxTest {
                         && robot.lookup("Discard changes").match(org.testfx.util.NodeQueryUtils.isVisible()).query()
                                 .getScene().getWindow().isShowing());
         WaitForAsyncUtils.waitForFxEvents();
-        robot.clickOn((javafx.scene.Node) robot.lookup("Discard changes").match(org.testfx.util.NodeQueryUtils.isVisible()).query());
+        robot.clickOn(robot.lookup("Discard changes").match(org.testfx.util.NodeQueryUtils.isVisible()).<javafx.scene.Node>query());
         WaitForAsyncUtils.waitForFxEvents();
         robot.interact(() -> app.stop()); // what the toolkit calls once the last window has closed
         assertAll(

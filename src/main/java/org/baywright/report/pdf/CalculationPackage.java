@@ -74,11 +74,13 @@ public final class CalculationPackage {
         FrontMatter.cover(cx);
         int coverPages = doc.getNumberOfPages();
         FrontMatter.basis(cx);
+        CheckerPages.statements(cx);
         int[] sheets = {0, 0};
         if (run.takedown() != null) {
             Summaries.loads(cx);
             Summaries.takedown(cx);
             sheets = MemberSheets.write(cx);
+            CheckerPages.endReactions(cx);
             ColumnPages.write(cx);
             TakeoffPages.write(cx);
         }

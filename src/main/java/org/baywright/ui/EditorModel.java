@@ -317,6 +317,18 @@ public final class EditorModel {
         return shownProblem;
     }
 
+    /**
+     * Shows a problem picked in the Problems panel: it is drawn highlighted, and the member (at this
+     * level) or column it names is selected. Null shows none.
+     */
+    public void showProblem(Problem p) {
+        shownProblem.set(p);
+        if (p != null && !p.objectId().isEmpty() && (currentMembers().stream().anyMatch(m -> m.id().equals(p.objectId()))
+                || plan() != null && plan().columns().stream().anyMatch(c -> c.id().equals(p.objectId())))) {
+            select(p.objectId());
+        }
+    }
+
     /** The floor designs kept for this document's next run (null before its first run; tests). */
     org.baywright.takedown.FloorCache floorCache() {
         return runs.cache();

@@ -23,7 +23,6 @@ import org.baywright.plan.Floor;
 import org.baywright.plan.Level;
 import org.baywright.plan.Plan;
 import org.baywright.plan.Problem;
-import org.baywright.run.PlanRun;
 import org.baywright.run.RunResult;
 import org.baywright.takedown.MemberResult;
 import org.baywright.units.UnitSystem;
@@ -65,6 +64,8 @@ public final class EditorModel {
     private Plan savedPlan;
     /** Read by the run thread to skip a stale run: volatile. */
     private volatile long generation;
+    /** The runs of the document shown, with its floor designs kept for the next edit; a new one per document. */
+    private DocumentRuns runs = new DocumentRuns();
 
     public EditorModel(TaskRunner runner) {
         this.runner = Objects.requireNonNull(runner, "runner");
@@ -129,6 +130,7 @@ public final class EditorModel {
         toolSettings.defaultsFor(units());
         opened.set(opened.get() + 1);
         history.reset(p);
+        runs = new DocumentRuns();
         savedPlan = p;
         updateEditState();
         problems.setAll(fileProblems);
@@ -315,6 +317,23 @@ public final class EditorModel {
         return shownProblem;
     }
 
+    /**
+     * Shows a problem picked in the Problems panel: it is drawn highlighted, and the member (at this
+     * level) or column it names is selected. Null shows none.
+     */
+    public void showProblem(Problem p) {
+        shownProblem.set(p);
+        if (p != null && !p.objectId().isEmpty() && (currentMembers().stream().anyMatch(m -> m.id().equals(p.objectId()))
+                || plan() != null && plan().columns().stream().anyMatch(c -> c.id().equals(p.objectId())))) {
+            select(p.objectId());
+        }
+    }
+
+    /** The floor designs kept for this document's next run (null before its first run; tests). */
+    org.baywright.takedown.FloorCache floorCache() {
+        return runs.cache();
+    }
+
     /** Edit-to-screen times of the latest runs, ms, oldest first. */
     public List<Double> latencies() {
         synchronized (latencies) {
@@ -363,7 +382,8 @@ public final class EditorModel {
         long started = System.nanoTime();
         running.set(true);
         message.set("Running…");
-        runner.submit(() -> generation == gen ? PlanRun.run(p) : null, r -> {
+        DocumentRuns runs = this.runs;
+        runner.submit(() -> generation == gen ? runs.run(p) : null, r -> {
             if (gen == generation && r != null) {
                 running.set(false);
                 run.set(r);

@@ -13,7 +13,7 @@ import org.baywright.takedown.TakedownResult;
 import org.baywright.units.UnitSystem;
 import org.baywright.units.Units;
 
-/** The texts the window shows: status bar totals and the Properties rows of a member. */
+/** The texts the window shows: status bar totals, the Properties rows of a member, the takeoff and calculation tabs. */
 public final class Readouts {
     private Readouts() {
     }
@@ -95,7 +95,14 @@ public final class Readouts {
 
     /** Unreduced reactions by load case, non-zero cases only: "D 12.3 kip, L 10.1 kip". */
     static String reactions(double[] components, UnitSystem us) {
-        double[] byCase = Component.byCase(components);
+        return byCase(Component.byCase(components), us);
+    }
+
+    /**
+     * Forces already summed by load case (indexed by {@link LoadCase#ordinal()}, as a column's
+     * foundation reaction), non-zero cases only: "D 120.4 kip, L 88.0 kip".
+     */
+    static String byCase(double[] byCase, UnitSystem us) {
         List<String> parts = new ArrayList<>();
         for (LoadCase lc : LoadCase.values()) {
             if (byCase[lc.ordinal()] != 0) {
@@ -144,5 +151,39 @@ public final class Readouts {
             }
         }
         return String.join(" ", parts);
+    }
+    /** The takeoff's totals under its table: tons and tonnes, the weight per floor area and a note. */
+    public static String takeoffTotals(org.baywright.report.Takeoff t, RunResult run, UnitSystem us) {
+        return "Total " + String.format(Locale.ROOT, "%.2f short tons (%.2f t)", org.baywright.report.Takeoff.shortTons(t.total()),
+                org.baywright.report.Takeoff.tonnes(t.total())) + "\n" + weightPerArea(run, us)
+                + "\nSections first, then by kind (beams, girders, columns). File › Export › Takeoff writes the CSV with"
+                + " levels and an allowance.";
+    }
+
+    /** A takeoff row's weight: short tons in a US plan, tonnes in an SI plan. */
+    public static String takeoffWeight(double newtons, UnitSystem us) {
+        return us == UnitSystem.US ? String.format(Locale.ROOT, "%.2f tons", org.baywright.report.Takeoff.shortTons(newtons))
+                : String.format(Locale.ROOT, "%.2f t", org.baywright.report.Takeoff.tonnes(newtons));
+    }
+
+    /**
+     * The Calculation tab's text: the selected member's calculation sheet (the equations the run used,
+     * with their numbers and clauses) and the caution; a prompt when nothing is selected.
+     */
+    public static String calculationSheet(java.util.Optional<MemberResult> selected, UnitSystem us) {
+        if (selected.isEmpty()) {
+            return "Select a member to see its calculation sheet: the equations the run used, with"
+                    + " their numbers and clauses.\n\n" + org.baywright.calc.Caution.TEXT;
+        }
+        MemberResult m = selected.get();
+        var calc = m.calculation();
+        if (calc == null) {
+            return m.id() + " was not designed (" + m.status().label() + ").";
+        }
+        StringBuilder b = new StringBuilder(m.id() + "  " + m.section() + "\n\n");
+        for (var line : calc.lines()) {
+            b.append(org.baywright.calc.CalcFormat.render(line, us)).append('\n');
+        }
+        return b.append('\n').append(org.baywright.calc.Caution.TEXT).toString();
     }
 }

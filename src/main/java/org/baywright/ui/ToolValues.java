@@ -8,6 +8,7 @@ import org.baywright.units.Dimension;
 import org.baywright.units.Quantities;
 import org.baywright.units.Unit;
 import org.baywright.units.UnitSystem;
+import org.baywright.units.Units;
 
 /**
  * Reads the tool options the user typed: quantities with or without a unit (a bare number is in the
@@ -87,5 +88,30 @@ public final class ToolValues {
     public static LoadValues pointLoad(ToolSettings s, UnitSystem us) {
         return new LoadValues(load("point dead", s.pointDead.get(), us.force()), 0,
                 load("point live", s.pointLive.get(), us.force()), 0, 0, 0);
+    }
+    /**
+     * The spacings between neighbouring grid lines as the Grid tool's field shows them, in the plan's
+     * units: {@code 30' 25'-6"} (whole inches; decimal feet otherwise) or {@code 9.000m 7.500m}. Read
+     * back with {@link #spacings}.
+     */
+    public static String spacingText(List<org.baywright.plan.GridLine> lines, UnitSystem us) {
+        List<String> parts = new ArrayList<>();
+        for (int i = 1; i < lines.size(); i++) {
+            double d = lines.get(i).offset() - lines.get(i - 1).offset();
+            parts.add(us == UnitSystem.SI ? String.format(java.util.Locale.ROOT, "%.3fm", Units.M.fromSi(d)) : feetText(d));
+        }
+        return String.join(" ", parts);
+    }
+
+    /** A spacing as typed text: 30' or 25'-6" when whole inches, else decimal feet. */
+    static String feetText(double metres) {
+        double inches = Units.IN.fromSi(metres);
+        long whole = Math.round(inches);
+        if (Math.abs(inches - whole) < 1e-6) {
+            long ft = whole / 12;
+            long in = whole % 12;
+            return in == 0 ? ft + "'" : ft + "'-" + in + "\"";
+        }
+        return String.format(java.util.Locale.ROOT, "%.4fft", Units.FT_.fromSi(metres));
     }
 }

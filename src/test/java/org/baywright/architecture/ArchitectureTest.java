@@ -31,6 +31,19 @@ class ArchitectureTest {
     }
 
     @Test
+    void viewModelsNeedNoToolkit() {
+        // view-models hold state and texts and are tested with plain JUnit: observable values and
+        // collections (javafx.beans, javafx.collections) are fine; nodes and controls (javafx.scene),
+        // windows and the application belong to the views. The same holds for the plain helpers the
+        // views take their texts from, nested classes included.
+        noClasses().that().haveNameMatching("org\\.baywright\\..*ViewModel(\\$.*)?")
+                .or().haveNameMatching("org\\.baywright\\.ui\\.(EditorModel|StudyPanelModel|NewPlanForm|Readouts|ToolValues"
+                        + "|DocumentRuns)(\\$.*)?")
+                .should().dependOnClassesThat().resideInAnyPackage("javafx.scene..", "javafx.stage..", "javafx.application..")
+                .check(classes);
+    }
+
+    @Test
     void onlyIoImportsJackson() {
         noClasses().that().resideOutsideOfPackage("org.baywright.io..")
                 .should().dependOnClassesThat().resideInAnyPackage("com.fasterxml.jackson..")

@@ -82,4 +82,21 @@ class ToolValuesTest {
         }
         assertEquals(RecentFiles.KEPT, r.list().size());
     }
+    @Test
+    void theGridFieldShowsSpacingsThatReadBackAsTheGrid() {
+        java.util.List<org.baywright.plan.GridLine> lines = new java.util.ArrayList<>();
+        double[] offsets = {0, 30 * FT, 55.5 * FT, 55.5 * FT + Units.IN.toSi(3), 85.5 * FT + 0.01};
+        for (int i = 0; i < offsets.length; i++) {
+            lines.add(new org.baywright.plan.GridLine(String.valueOf((char) ('A' + i)), org.baywright.plan.GridLine.Axis.X, offsets[i]));
+        }
+        String us = ToolValues.spacingText(lines, UnitSystem.US);
+        assertEquals("30' 25'-6\" 0'-3\" 29.7828ft", us);
+        List<Double> back = ToolValues.spacings("x", us, UnitSystem.US);
+        for (int i = 1; i < offsets.length; i++) {
+            assertEquals(offsets[i] - offsets[i - 1], back.get(i - 1), 1e-4, "spacing " + i);
+        }
+        String si = ToolValues.spacingText(lines.subList(0, 2), UnitSystem.SI);
+        assertEquals("9.144m", si);
+        assertEquals("", ToolValues.spacingText(lines.subList(0, 1), UnitSystem.US));
+    }
 }

@@ -1,0 +1,232 @@
+package org.baywright.ui;
+
+import java.io.File;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.function.Supplier;
+import java.util.stream.Collectors;
+import javafx.scene.control.Alert;
+import javafx.scene.control.ButtonBar;
+import javafx.scene.control.ButtonType;
+import javafx.scene.control.Label;
+import javafx.scene.control.Menu;
+import javafx.scene.control.MenuItem;
+import javafx.scene.control.TextArea;
+import javafx.scene.layout.VBox;
+import javafx.stage.FileChooser;
+import javafx.stage.Window;
+import org.baywright.io.PlanFiles;
+import org.baywright.plan.Problem;
+
+/**
+ * The File menu's actions and their dialogs: New, Open (and Open Recent), Save, Save As, the exports,
+ * Exit, and the question before unsaved changes would be lost. Errors become dialogs, never stack
+ * traces.
+ */
+final class FileActions {
+    /** An export that writes one file. */
+    @FunctionalInterface
+    interface Exporter {
+        void write(Path out) throws IOException;
+    }
+
+    private final EditorModel model;
+    private final RecentFiles recent;
+    private final Supplier<Window> owner;
+    private final Runnable exit;
+
+    /**
+     * @param owner the window dialogs belong to (null while the window is not shown)
+     * @param exit what Exit does once unsaved changes are answered for
+     */
+    FileActions(EditorModel model, RecentFiles recent, Supplier<Window> owner, Runnable exit) {
+        this.model = model;
+        this.recent = recent;
+        this.owner = owner;
+        this.exit = exit;
+        model.fileProperty().addListener((o, a, b) -> {
+            if (b != null) {
+                recent.add(b);
+            }
+        });
+    }
+
+    /** File › New: asks for a name, the units and the number of levels, then starts an empty plan. */
+    void newPlan() {
+        if (confirmDiscard()) {
+            NewPlanDialog.show(owner.get(), model.units(), this::start);
+        }
+    }
+
+    /** Starts a new plan from the New dialog's texts; an error names the field. */
+    void newPlan(String name, String units, String levelCount, String storey) {
+        start(NewPlanForm.read(name, units, levelCount, storey));
+    }
+
+    private void start(NewPlanForm.NewPlan p) {
+        model.newPlan(p.name(), p.units(), p.levels(), p.storeyHeight());
+        model.toolProperty().set(Tool.GRID);
+    }
+
+    /** File › Open: asks first about unsaved changes, then for a file. */
+    void chooseAndOpen() {
+        if (!confirmDiscard()) {
+            return;
+        }
+        FileChooser chooser = new FileChooser();
+        chooser.setTitle("Open plan");
+        chooser.getExtensionFilters().addAll(new FileChooser.ExtensionFilter("Baywright plans", "*" + PlanFiles.EXTENSION),
+                new FileChooser.ExtensionFilter("All files", "*.*"));
+        Path f = model.fileProperty().get();
+        if (f != null && f.toAbsolutePath().getParent() != null) {
+            chooser.setInitialDirectory(f.toAbsolutePath().getParent().toFile());
+        }
+        File chosen = chooser.showOpenDialog(owner.get());
+        if (chosen != null) {
+            open(chosen.toPath());
+        }
+    }
+
+    /**
+     * Opens a plan file; a file with errors is not opened, the current plan stays and a dialog lists
+     * the located problems. Returns whether the file was opened.
+     */
+    boolean open(Path file) {
+        EditorModel.OpenResult r = model.open(file);
+        if (!r.opened()) {
+            showProblems(file, r.problems());
+        } else {
+            recent.add(file);
+        }
+        return r.opened();
+    }
+
+    private void showProblems(Path file, List<Problem> problems) {
+        Alert a = alert(Alert.AlertType.ERROR, "Baywright", file.getFileName() + " was not opened"
+                + (model.plan() == null ? "." : "; the current plan stays open."));
+        TextArea text = new TextArea(problems.stream().map(Problem::toString).collect(Collectors.joining("\n")));
+        text.setEditable(false);
+        text.setWrapText(true);
+        text.setPrefRowCount(Math.min(14, Math.max(4, problems.size() + 1)));
+        text.setPrefColumnCount(70);
+        text.setId("open-problems");
+        a.getDialogPane().setContent(new VBox(6, new Label(problems.size() == 1 ? "1 problem:" : problems.size() + " problems:"),
+                text));
+        a.show();
+    }
+
+    /** File › Open Recent: fills the submenu with the recent plans as it opens. */
+    void fillRecent(Menu menu) {
+        menu.getItems().clear();
+        List<Path> files = recent.list();
+        if (files.isEmpty()) {
+            MenuItem none = new MenuItem("(none)");
+            none.setDisable(true);
+            menu.getItems().add(none);
+            return;
+        }
+        for (Path f : files) {
+            MenuItem m = new MenuItem(f.getFileName() + "   " + (f.getParent() == null ? "" : f.getParent()));
+            m.setOnAction(e -> {
+                if (confirmDiscard()) {
+                    open(f);
+                }
+            });
+            menu.getItems().add(m);
+        }
+    }
+
+    /**
+     * Asks before unsaved changes would be lost: Save (then go on if it was saved), Discard, or Cancel.
+     * True when it is fine to go on.
+     */
+    boolean confirmDiscard() {
+        if (!model.dirtyProperty().get()) {
+            return true;
+        }
+        ButtonType saveIt = new ButtonType("Save", ButtonBar.ButtonData.YES);
+        ButtonType discard = new ButtonType("Discard changes", ButtonBar.ButtonData.NO);
+        Alert a = new Alert(Alert.AlertType.CONFIRMATION, "The plan has changes that are not saved.", saveIt, discard,
+                ButtonType.CANCEL);
+        a.initOwner(owner.get());
+        a.setTitle("Baywright");
+        a.setHeaderText("Save the changes to " + model.plan().name() + "?");
+        ButtonType answer = a.showAndWait().orElse(ButtonType.CANCEL);
+        if (answer == saveIt) {
+            save();
+            return !model.dirtyProperty().get();
+        }
+        return answer == discard;
+    }
+
+    /** File › Exit: asks about unsaved changes first. */
+    void exit() {
+        if (confirmDiscard()) {
+            exit.run();
+        }
+    }
+
+    /** File › Save: to the plan's file, or Save As when it has none. */
+    void save() {
+        if (model.fileProperty().get() == null) {
+            saveAs();
+            return;
+        }
+        try {
+            model.save();
+        } catch (IOException | RuntimeException e) {
+            error("The plan was not saved", e);
+        }
+    }
+
+    /** File › Save As. */
+    void saveAs() {
+        FileChooser chooser = new FileChooser();
+        chooser.setTitle("Save plan as");
+        chooser.getExtensionFilters().add(new FileChooser.ExtensionFilter("Baywright plans", "*" + PlanFiles.EXTENSION));
+        Path f = model.fileProperty().get();
+        chooser.setInitialFileName(f == null ? "plan" + PlanFiles.EXTENSION : f.getFileName().toString());
+        File chosen = chooser.showSaveDialog(owner.get());
+        if (chosen == null) {
+            return;
+        }
+        try {
+            model.saveAs(chosen.toPath());
+        } catch (IOException | RuntimeException e) {
+            error("The plan was not saved", e);
+        }
+    }
+
+    /** File › Export › …: asks for the file (with its usual name and types), then writes it. */
+    void export(String title, String name, String[] patterns, Exporter exporter) {
+        FileChooser chooser = new FileChooser();
+        chooser.setTitle(title);
+        chooser.setInitialFileName(name);
+        chooser.getExtensionFilters().add(new FileChooser.ExtensionFilter(String.join(", ", patterns), patterns));
+        File chosen = chooser.showSaveDialog(owner.get());
+        if (chosen == null) {
+            return;
+        }
+        try {
+            exporter.write(chosen.toPath());
+            model.messageProperty().set("Wrote " + chosen.getName());
+        } catch (IOException | RuntimeException e) {
+            error("Nothing was exported", e);
+        }
+    }
+
+    private void error(String header, Exception e) {
+        Alert a = alert(Alert.AlertType.ERROR, "Baywright", header);
+        a.setContentText(String.valueOf(e.getMessage()));
+        a.show();
+    }
+
+    private Alert alert(Alert.AlertType type, String title, String header) {
+        Alert a = new Alert(type);
+        a.initOwner(owner.get());
+        a.setTitle(title);
+        a.setHeaderText(header);
+        return a;
+    }
+}

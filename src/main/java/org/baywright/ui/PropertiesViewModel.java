@@ -1,0 +1,201 @@
+package org.baywright.ui;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.stream.Collectors;
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyObjectWrapper;
+import javafx.collections.SetChangeListener;
+import org.baywright.plan.Column;
+import org.baywright.plan.Floor;
+import org.baywright.plan.PlanEdits;
+import org.baywright.takedown.ColumnResult;
+import org.baywright.takedown.ColumnTier;
+import org.baywright.takedown.MemberResult;
+import org.baywright.units.UnitSystem;
+
+/**
+ * What the Properties panel shows for the selection, as plain texts: a member's identity, size, loads,
+ * checks, reactions, supports and the lighter sections it rejected; a column's tiers and foundation
+ * reactions; a load's values; an opening's area; the fixed-size field of a member or column. The panel
+ * ({@link PropertiesPanel}) only lays the items out, in order: a {@link Row} is a label and a value, a
+ * {@link Note} spans the panel, a {@link FixedSize} is the field that fixes a size.
+ *
+ * <p>No toolkit needed: the items follow the {@link EditorModel} (plan, run, level, selection) and are
+ * tested with plain JUnit.
+ */
+public final class PropertiesViewModel {
+    /** How many of the heaviest rejected sections are listed (the informative ones). */
+    static final int REJECTED_SHOWN = 4;
+
+    /** One item of the panel. */
+    public sealed interface Item permits Row, Note, FixedSize {
+    }
+
+    /** A labelled value. */
+    public record Row(String label, String value) implements Item {
+        /** The value's node id: {@code prop-} and the label in lower case with dashes ("prop-start-reaction"). */
+        public String id() {
+            return "prop-" + label.trim().toLowerCase(Locale.ROOT).replace(' ', '-');
+        }
+    }
+
+    /** A text across the panel; {@code id} is its node id, or null. */
+    public record Note(String id, String text) implements Item {
+    }
+
+    /**
+     * The fixed-size field of a member or column: its current designation ("" for the lightest
+     * adequate size) and where an edit goes.
+     */
+    public record FixedSize(String floorId, String objectId, String current) implements Item {
+    }
+
+    private final EditorModel model;
+    private final ReadOnlyObjectWrapper<List<Item>> items = new ReadOnlyObjectWrapper<>(this, "items", List.of());
+
+    /** Follows {@code model}: the items change with its plan, run, level and selection. */
+    public PropertiesViewModel(EditorModel model) {
+        this.model = model;
+        model.selectedProperty().addListener((o, a, b) -> refresh());
+        model.runProperty().addListener((o, a, b) -> refresh());
+        model.levelProperty().addListener((o, a, b) -> refresh());
+        model.planProperty().addListener((o, a, b) -> refresh());
+        model.selection().addListener((SetChangeListener<String>) c -> refresh());
+        refresh();
+    }
+
+    /** The items to show, in order (a new list on every change). */
+    public ReadOnlyObjectProperty<List<Item>> itemsProperty() {
+        return items.getReadOnlyProperty();
+    }
+
+    public List<Item> items() {
+        return items.get();
+    }
+
+    /** The value of the row labelled {@code label}, if there is one. */
+    public Optional<String> value(String label) {
+        return items.get().stream().filter(i -> i instanceof Row r && r.label().equals(label)).map(i -> ((Row) i).value())
+                .findFirst();
+    }
+
+    /**
+     * Fixes the size of the field's member or column to the typed designation (one undoable edit); a
+     * blank text goes back to the lightest adequate size. Returns whether the plan changed.
+     */
+    public boolean setFixedSize(FixedSize field, String typed) {
+        String text = typed == null ? "" : typed.trim();
+        String id = field.objectId();
+        return model.edit(p -> PlanEdits.setFixedSection(p, field.floorId(), id, Optional.of(text)),
+                text.isEmpty() ? id + ": lightest adequate size" : id + ": fixed size " + text.toUpperCase(Locale.ROOT));
+    }
+
+    /** Builds the items again from the model. */
+    void refresh() {
+        items.set(Collections.unmodifiableList(build()));
+    }
+
+    private List<Item> build() {
+        List<Item> out = new ArrayList<>();
+        UnitSystem us = model.units();
+        if (model.selection().size() > 1) {
+            out.add(new Note("prop-many", model.selection().size() + " objects selected: " + String.join(", ", model.selection())));
+        }
+        Optional<MemberResult> member = model.selectedResult();
+        String id = model.selectedProperty().get();
+        if (member.isPresent()) {
+            member(member.get(), us, out);
+        } else if (id != null && model.plan() != null) {
+            Optional<Column> col = model.plan().columns().stream().filter(c -> c.id().equals(id)).findFirst();
+            if (col.isPresent()) {
+                column(col.get(), us, out);
+            } else {
+                model.currentFloor().ifPresent(f -> floorObject(f, id, us, out));
+            }
+        }
+        if (out.isEmpty()) {
+            out.add(new Note("prop-hint", model.plan() == null ? "No plan open." : model.run() == null ? "Running…"
+                    : "Click a member, column, load or opening on the plan to see it here."));
+        }
+        return out;
+    }
+
+    private void member(MemberResult m, UnitSystem us, List<Item> out) {
+        for (Readouts.Row r : Readouts.member(m, us)) {
+            out.add(new Row(r.label(), r.value()));
+        }
+        if (m.design() != null && !m.design().rejected().isEmpty()) {
+            // the heaviest rejected sections are the informative ones: the last before the one chosen
+            var rejected = m.design().rejected();
+            var near = new ArrayList<>(rejected.subList(Math.max(0, rejected.size() - REJECTED_SHOWN), rejected.size()));
+            Collections.reverse(near);
+            out.add(new Row("Lighter, rejected", near.stream()
+                    .map(x -> x.section().designation() + ": " + x.governing().name() + " " + Readouts.ratio(x.governing().ratio()))
+                    .collect(Collectors.joining("\n"))
+                    + (rejected.size() > REJECTED_SHOWN ? "\n(" + (rejected.size() - REJECTED_SHOWN) + " lighter)" : "")));
+        }
+        if (m.id().contains("/")) {
+            out.add(new Note(null, "An infill beam: its spacing and direction belong to its bay (Infill tool). Delete"
+                    + " removes the whole infill."));
+        } else {
+            String fixed = model.currentFloor().flatMap(f -> f.member(m.id())).flatMap(x -> x.fixedSection()).orElse("");
+            out.add(new FixedSize(model.currentFloorId(), m.id(), fixed));
+        }
+    }
+
+    private void column(Column c, UnitSystem us, List<Item> out) {
+        out.add(new Row("Column", c.id()));
+        out.add(new Row("Grid", c.grid().isEmpty() ? "off grid" : c.grid()));
+        out.add(new Row("Top level", c.topLevel().isEmpty() ? "roof (top of building)" : c.topLevel()));
+        var run = model.run();
+        Optional<ColumnResult> result = run == null || run.takedown() == null ? Optional.empty()
+                : run.takedown().columns().stream().filter(r -> r.id().equals(c.id())).findFirst();
+        if (result.isPresent()) {
+            for (ColumnTier t : result.get().tiers()) {
+                List<String> levels = t.levels();
+                out.add(new Row("Tier " + levels.get(0) + (levels.size() > 1 ? "–" + levels.get(levels.size() - 1) : ""),
+                        t.section() + "  " + Readouts.ratio(t.maxRatio())));
+            }
+            out.add(new Row("Foundation", Readouts.byCase(result.get().foundation(), us)));
+        }
+        out.add(new FixedSize(model.currentFloorId(), c.id(), c.fixedSection().orElse("")));
+    }
+
+    /** A load area, opening, line load or point load of the floor shown. */
+    private static void floorObject(Floor f, String id, UnitSystem us, List<Item> out) {
+        for (var a : f.areaLoads()) {
+            if (a.id().equals(id)) {
+                out.add(new Row("Load area", a.id()));
+                out.add(new Row("Loads", Readouts.areaLoad(a.values(), us)));
+                out.add(new Row("Use", a.use().name().toLowerCase(Locale.ROOT).replace('_', ' ')));
+                out.add(new Row("Area", UnitSystem.format(Math.abs(a.outline().signedArea()), us.floorArea(), 0)));
+                return;
+            }
+        }
+        for (var o : f.openings()) {
+            if (o.id().equals(id)) {
+                out.add(new Row("Opening", o.id()));
+                out.add(new Row("Area", UnitSystem.format(Math.abs(o.outline().signedArea()), us.floorArea(), 0)));
+                return;
+            }
+        }
+        for (var l : f.lineLoads()) {
+            if (l.id().equals(id)) {
+                out.add(new Row("Line load", l.id()));
+                out.add(new Row("Loads", Readouts.lineLoad(l.values(), us)));
+                return;
+            }
+        }
+        for (var q : f.pointLoads()) {
+            if (q.id().equals(id)) {
+                out.add(new Row("Point load", q.id()));
+                out.add(new Row("Loads", Readouts.force(q.values(), us)));
+                return;
+            }
+        }
+    }
+}

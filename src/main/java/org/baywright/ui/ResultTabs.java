@@ -1,0 +1,163 @@
+package org.baywright.ui;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.function.Function;
+import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.collections.FXCollections;
+import javafx.geometry.Insets;
+import javafx.scene.Node;
+import javafx.scene.control.Label;
+import javafx.scene.control.TableColumn;
+import javafx.scene.control.TableView;
+import javafx.scene.control.TextArea;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+import org.baywright.report.Takeoff;
+import org.baywright.run.RunResult;
+import org.baywright.takedown.MemberResult;
+import org.baywright.units.UnitSystem;
+
+/**
+ * The result tabs beside the plan: Members (the level's members; picking a row selects the member and
+ * the other way round), Takeoff (by section and by kind, with totals) and Calculation (the selected
+ * member's sheet). The texts come from {@link Readouts}.
+ */
+final class ResultTabs {
+    private final EditorModel model;
+    private final TableView<MemberResult> membersTable = new TableView<>();
+    private final TableView<Takeoff.Row> takeoffTable = new TableView<>();
+    private final Label takeoffTotals = new Label();
+    private final TextArea calculation = new TextArea();
+    private final Node members;
+    private final Node takeoff;
+    private final Node sheet;
+    /** True while the table follows the model, so that its selection events are not taken for the user's. */
+    private boolean syncing;
+
+    ResultTabs(EditorModel model) {
+        this.model = model;
+        members = membersPanel();
+        takeoff = takeoffPanel();
+        sheet = calculationPanel();
+        model.runProperty().addListener((o, a, b) -> refreshTables());
+        model.levelProperty().addListener((o, a, b) -> refreshTables());
+        model.selectedProperty().addListener((o, a, b) -> {
+            refreshCalculation();
+            syncTableSelection();
+        });
+        model.runProperty().addListener((o, a, b) -> refreshCalculation());
+        refreshTables();
+    }
+
+    /** The Members tab's content. */
+    Node members() {
+        return members;
+    }
+
+    /** The Takeoff tab's content. */
+    Node takeoff() {
+        return takeoff;
+    }
+
+    /** The Calculation tab's content. */
+    Node calculation() {
+        return sheet;
+    }
+
+    private Node membersPanel() {
+        membersTable.setId("members-table");
+        membersTable.setPlaceholder(new Label("No members at this level."));
+        membersTable.getColumns().setAll(List.of(
+                column("Member", 110, MemberResult::id),
+                column("Kind", 60, m -> m.kind().name().toLowerCase(Locale.ROOT)),
+                column("Section", 80, m -> m.section().isEmpty() ? "—" : m.section()),
+                column("Length", 80, m -> UnitSystem.format(m.length(), model.units().length(), 2)),
+                column("Ratio", 50, m -> Readouts.ratio(m.maxRatio())),
+                column("Status", 90, m -> m.status().label())));
+        membersTable.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
+            if (b != null && !syncing) {
+                model.select(b.id());
+            }
+        });
+        VBox box = new VBox(membersTable);
+        VBox.setVgrow(membersTable, Priority.ALWAYS);
+        return box;
+    }
+
+    private static <S> TableColumn<S, String> column(String name, double width, Function<S, String> value) {
+        TableColumn<S, String> c = new TableColumn<>(name);
+        c.setPrefWidth(width);
+        c.setCellValueFactory(d -> new ReadOnlyStringWrapper(value.apply(d.getValue())));
+        return c;
+    }
+
+    private Node takeoffPanel() {
+        takeoffTable.setId("takeoff-table");
+        takeoffTable.setPlaceholder(new Label("No run yet."));
+        takeoffTable.getColumns().setAll(List.of(
+                column("Size / kind", 120, Takeoff.Row::item),
+                column("Pieces", 55, r -> Integer.toString(r.count())),
+                column("Length", 80, r -> UnitSystem.format(r.length(), model.units().length(), 0)),
+                column("Weight", 90, r -> Readouts.takeoffWeight(r.weight(), model.units()))));
+        takeoffTotals.setId("takeoff-totals");
+        takeoffTotals.setWrapText(true);
+        takeoffTotals.setPadding(new Insets(6));
+        VBox box = new VBox(4, takeoffTable, takeoffTotals);
+        VBox.setVgrow(takeoffTable, Priority.ALWAYS);
+        return box;
+    }
+
+    private Node calculationPanel() {
+        calculation.setId("calculation");
+        calculation.setEditable(false);
+        calculation.setWrapText(false);
+        Styles.with(calculation, Styles.CALCULATION);
+        VBox box = new VBox(calculation);
+        VBox.setVgrow(calculation, Priority.ALWAYS);
+        return box;
+    }
+
+    private void refreshTables() {
+        syncing = true;
+        try {
+            membersTable.setItems(FXCollections.observableArrayList(model.currentMembers()));
+        } finally {
+            syncing = false;
+        }
+        syncTableSelection();
+        RunResult r = model.run();
+        if (r == null || r.takedown() == null) {
+            takeoffTable.setItems(FXCollections.observableArrayList());
+            takeoffTotals.setText("");
+            return;
+        }
+        Takeoff t = Takeoff.of(r, 0);
+        List<Takeoff.Row> rows = new ArrayList<>(t.bySection());
+        rows.addAll(t.byKind());
+        takeoffTable.setItems(FXCollections.observableArrayList(rows));
+        takeoffTotals.setText(Readouts.takeoffTotals(t, r, model.units()));
+    }
+
+    private void syncTableSelection() {
+        String id = model.selectedProperty().get();
+        syncing = true;
+        try {
+            if (id == null) {
+                membersTable.getSelectionModel().clearSelection();
+            } else {
+                membersTable.getItems().stream().filter(m -> m.id().equals(id)).findFirst().ifPresent(m -> {
+                    membersTable.getSelectionModel().select(m);
+                    membersTable.scrollTo(m);
+                });
+            }
+        } finally {
+            syncing = false;
+        }
+    }
+
+    private void refreshCalculation() {
+        calculation.setText(Readouts.calculationSheet(model.selectedResult(), model.units()));
+    }
+}

@@ -1,0 +1,193 @@
+package org.baywright.ui;
+
+import static org.junit.jupiter.api.Assertions.assertAll;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertInstanceOf;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.baywright.design.Check;
+import org.baywright.load.LoadCase;
+import org.baywright.plan.MemberKind;
+import org.baywright.takedown.ColumnResult;
+import org.baywright.takedown.ColumnTier;
+import org.baywright.takedown.Component;
+import org.baywright.takedown.MemberResult;
+import org.baywright.units.Units;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The Properties panel's rows for the selection, on the demo plan (US units), read back against the
+ * run's own numbers: no toolkit.
+ */
+class PropertiesViewModelTest {
+    private static final Pattern CASE_VALUE = Pattern.compile("(\\w+) (-?[0-9.]+) kip");
+
+    private final EditorModel model = new EditorModel(TaskRunner.direct());
+    private final PropertiesViewModel vm = new PropertiesViewModel(model);
+
+    PropertiesViewModelTest() {
+        assertTrue(model.open(Path.of(BaywrightApp.DEMO)).opened());
+    }
+
+    private String row(String label) {
+        return vm.value(label).orElseThrow(() -> new AssertionError("no row " + label + " in " + vm.items()));
+    }
+
+    /** "D 12.3 kip, L 10.1 kip" as kip by load case symbol. */
+    private static Map<String, Double> kips(String text) {
+        Map<String, Double> out = new java.util.LinkedHashMap<>();
+        Matcher m = CASE_VALUE.matcher(text);
+        while (m.find()) {
+            out.put(m.group(1), Double.parseDouble(m.group(2)));
+        }
+        return out;
+    }
+
+    /** The run's reactions of a member by case in kip, non-zero cases only. */
+    private static Map<String, Double> kips(double[] components) {
+        return kipsByCase(Component.byCase(components));
+    }
+
+    /** Forces by load case ordinal in kip, non-zero cases only. */
+    private static Map<String, Double> kipsByCase(double[] byCase) {
+        Map<String, Double> out = new java.util.LinkedHashMap<>();
+        for (LoadCase lc : LoadCase.values()) {
+            if (byCase[lc.ordinal()] != 0) {
+                out.put(lc.symbol(), Units.KIPS.fromSi(byCase[lc.ordinal()]));
+            }
+        }
+        return out;
+    }
+
+    private static void assertSameKips(Map<String, Double> expected, Map<String, Double> shown, String what) {
+        assertEquals(expected.keySet(), shown.keySet(), what + ": the load cases");
+        expected.forEach((c, v) -> assertEquals(v, shown.get(c), 0.05 + 1e-9, what + " " + c));
+    }
+
+    @Test
+    void nothingSelectedShowsAHint() {
+        List<PropertiesViewModel.Item> items = vm.items();
+        assertEquals(1, items.size());
+        PropertiesViewModel.Note hint = assertInstanceOf(PropertiesViewModel.Note.class, items.get(0));
+        assertEquals("prop-hint", hint.id());
+        assertTrue(hint.text().startsWith("Click a member"), hint.text());
+    }
+
+    @Test
+    void aGirdersRowsAreTheRunsNumbers() {
+        MemberResult g = model.currentMembers().stream().filter(m -> m.kind() == MemberKind.GIRDER && m.design() != null
+                && !m.design().rejected().isEmpty() && !m.id().contains("/")).findFirst().orElseThrow();
+        model.select(g.id());
+        List<Check> checks = g.design().checks();
+        assertAll(
+                () -> assertEquals(g.id(), row("Member")),
+                () -> assertEquals("girder", row("Kind")),
+                () -> assertEquals(g.section(), row("Section")),
+                () -> assertEquals(g.status().label(), row("Status")),
+                () -> assertEquals(Units.FT_.fromSi(g.length()), Double.parseDouble(row("Length").replace(" ft", "")), 0.005),
+                () -> assertEquals(Units.FT_.fromSi(Units.FT_.fromSi(g.tributaryArea())),
+                        Double.parseDouble(row("Tributary area").replace(" ft²", "")), 0.5),
+                () -> assertEquals(g.maxRatio(), Double.parseDouble(row("Highest ratio")), 0.005),
+                () -> assertSameKips(kips(g.startReaction()), kips(row("Start reaction")), "start reaction"),
+                () -> assertSameKips(kips(g.endReaction()), kips(row("End reaction")), "end reaction"),
+                () -> assertEquals(g.startSupport().isEmpty() ? "none" : g.startSupport(), row("Start support")),
+                () -> assertEquals(g.endSupport().isEmpty() ? "none" : g.endSupport(), row("End support")));
+        assertFalse(checks.isEmpty());
+        for (Check c : checks) {
+            String shown = row("  " + c.name());
+            assertEquals(c.ratio(), Double.parseDouble(shown.split(" ")[0]), 0.005, c.name());
+            assertEquals(c.combination().isEmpty(), !shown.contains("("), c.name() + ": the combination is named");
+        }
+        // the member's loads by case, as the design took them
+        String loads = row("Loads on span");
+        for (LoadCase lc : g.loads().present()) {
+            Matcher m = Pattern.compile("(^|, )" + Pattern.quote(lc.symbol()) + " ([0-9.]+) kip").matcher(loads);
+            assertTrue(m.find(), lc + " in " + loads);
+            assertEquals(Units.KIPS.fromSi(g.loads().of(lc).totalLoad()), Double.parseDouble(m.group(2)), 0.05, lc.symbol());
+        }
+        // the heaviest rejected sections first, each with its governing check
+        var rejected = g.design().rejected();
+        String[] lines = row("Lighter, rejected").split("\n");
+        assertTrue(lines[0].startsWith(rejected.get(rejected.size() - 1).section().designation() + ": "), lines[0]);
+        assertEquals(Math.min(PropertiesViewModel.REJECTED_SHOWN, rejected.size()) + (rejected.size() > 4 ? 1 : 0), lines.length);
+        PropertiesViewModel.FixedSize fixed = vm.items().stream().filter(i -> i instanceof PropertiesViewModel.FixedSize)
+                .map(i -> (PropertiesViewModel.FixedSize) i).findFirst().orElseThrow();
+        assertEquals(new PropertiesViewModel.FixedSize(model.currentFloorId(), g.id(), ""), fixed);
+    }
+
+    @Test
+    void aColumnsRowsAreItsTiersAndFoundation() {
+        ColumnResult c = model.run().takedown().columns().stream().filter(r -> r.tiers().size() > 1).findFirst()
+                .orElseGet(() -> model.run().takedown().columns().get(0));
+        model.select(c.id());
+        var column = model.plan().columns().stream().filter(x -> x.id().equals(c.id())).findFirst().orElseThrow();
+        assertEquals(c.id(), row("Column"));
+        assertEquals(column.grid().isEmpty() ? "off grid" : column.grid(), row("Grid"));
+        for (ColumnTier t : c.tiers()) {
+            List<String> lv = t.levels();
+            String label = "Tier " + lv.get(0) + (lv.size() > 1 ? "–" + lv.get(lv.size() - 1) : "");
+            String[] shown = row(label).split("\\s+");
+            assertEquals(t.section(), shown[0], label);
+            assertEquals(t.maxRatio(), Double.parseDouble(shown[1]), 0.005, label);
+        }
+        long tierRows = vm.items().stream().filter(i -> i instanceof PropertiesViewModel.Row r && r.label().startsWith("Tier "))
+                .count();
+        assertEquals(c.tiers().size(), tierRows, "one row per tier");
+        assertSameKips(kipsByCase(c.foundation()), kips(row("Foundation")), "foundation");
+        assertTrue(vm.items().get(vm.items().size() - 1) instanceof PropertiesViewModel.FixedSize f && f.objectId().equals(c.id()));
+    }
+
+    @Test
+    void aLoadAreaShowsItsValuesInThePlansUnits() {
+        var area = model.currentFloor().orElseThrow().areaLoads().get(0);
+        model.select(area.id());
+        Map<String, Double> psf = new java.util.HashMap<>();
+        Matcher m = Pattern.compile("(\\w+) ([0-9.]+) psf").matcher(row("Loads"));
+        while (m.find()) {
+            psf.put(m.group(1), Double.parseDouble(m.group(2)));
+        }
+        if (area.values().live() != 0) {
+            assertEquals(Units.PSF.fromSi(area.values().live()), psf.get("L"), 0.5);
+        }
+        if (area.values().superimposed() != 0) {
+            assertEquals(Units.PSF.fromSi(area.values().superimposed()), psf.get("SD"), 0.5);
+        }
+        assertFalse(psf.isEmpty(), row("Loads"));
+        assertEquals(area.id(), row("Load area"));
+    }
+
+    @Test
+    void severalSelectedAreNamedAboveThePrimary() {
+        List<MemberResult> ms = model.currentMembers();
+        model.selectAll(List.of(ms.get(0).id(), ms.get(1).id()), false);
+        PropertiesViewModel.Note many = assertInstanceOf(PropertiesViewModel.Note.class, vm.items().get(0));
+        assertEquals("prop-many", many.id());
+        assertEquals("2 objects selected: " + ms.get(0).id() + ", " + ms.get(1).id(), many.text());
+        assertEquals(Optional.of(ms.get(0).id()), vm.value("Member"));
+    }
+
+    @Test
+    void settingAFixedSizeIsAnUndoableEditTheRunFollows() {
+        MemberResult g = model.currentMembers().stream().filter(m -> m.kind() == MemberKind.GIRDER && !m.id().contains("/")
+                && m.design() != null && !m.design().rejected().isEmpty()).findFirst().orElseThrow();
+        model.select(g.id());
+        PropertiesViewModel.FixedSize field = vm.items().stream().filter(i -> i instanceof PropertiesViewModel.FixedSize)
+                .map(i -> (PropertiesViewModel.FixedSize) i).findFirst().orElseThrow();
+        String heavier = "W27X94";
+        assertTrue(vm.setFixedSize(field, " w27x94 "));
+        assertEquals(heavier, row("Section"), "the run checks the fixed size");
+        assertEquals(g.id() + ": fixed size " + heavier, model.undoLabel());
+        PropertiesViewModel.FixedSize now = vm.items().stream().filter(i -> i instanceof PropertiesViewModel.FixedSize)
+                .map(i -> (PropertiesViewModel.FixedSize) i).findFirst().orElseThrow();
+        assertEquals(heavier, now.current().toUpperCase(java.util.Locale.ROOT));
+        assertTrue(vm.setFixedSize(now, ""));
+        assertEquals(g.section(), row("Section"), "blank goes back to the lightest adequate size");
+    }
+}

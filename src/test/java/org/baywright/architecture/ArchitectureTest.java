@@ -51,6 +51,13 @@ class ArchitectureTest {
     }
 
     @Test
+    void onlyTheWorkbookPackageImportsPoi() {
+        noClasses().that().resideOutsideOfPackage("org.baywright.report.workbook..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.apache.poi..")
+                .check(classes);
+    }
+
+    @Test
     void onlyGeometryImportsJts() {
         noClasses().that().resideOutsideOfPackage("org.baywright.geometry..")
                 .should().dependOnClassesThat().resideInAnyPackage("org.locationtech.jts..")

@@ -39,6 +39,12 @@ import java.util.Objects;
  * </ul>
  */
 public final class SimpleSpan {
+    /**
+     * The search for the point of largest deflection stops when a step moves less than this fraction
+     * of the span: a few units in the last place of a double, where no further step can help.
+     */
+    private static final double CONVERGED = 1e-15;
+
 
     /** Relative overshoot of a query position beyond the span that is clamped rather than refused. */
     private static final double POSITION_SLACK = 1e-9;
@@ -542,7 +548,7 @@ public final class SimpleSpan {
             if (!(next > lo && next < hi)) {
                 next = 0.5 * (lo + hi);
             }
-            if (Math.abs(next - x) <= 1e-15 * length || hi - lo <= 1e-15 * length) {
+            if (Math.abs(next - x) <= CONVERGED * length || hi - lo <= CONVERGED * length) {
                 x = next;
                 break;
             }

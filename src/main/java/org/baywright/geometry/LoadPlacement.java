@@ -392,9 +392,15 @@ final class LoadPlacement {
         return out;
     }
 
+    /**
+     * Two shares whose ends differ by less than this fraction of their size continue one another: a few
+     * units in the last place of a double, the rounding left by splitting one line at a point.
+     */
+    private static final double CONTINUES = 1e-12;
+
     private static boolean continues(LineShare p, LineShare s) {
         double scale = Math.max(Math.max(Math.abs(p.f0()), Math.abs(p.f1())), Math.max(Math.abs(s.f0()), Math.abs(s.f1())));
-        double eps = 1e-12 * Math.max(scale, Double.MIN_NORMAL);
+        double eps = CONTINUES * Math.max(scale, Double.MIN_NORMAL);
         if (Math.abs(p.f1() - s.f0()) > eps) {
             return false;
         }

@@ -30,12 +30,14 @@ final class Shapes {
     final GeometryFactory planFactory;
     /** Builds frame geometries (rotated coordinates are not on any grid). */
     final GeometryFactory frameFactory = new GeometryFactory();
+    /** A grid scale 1/tol within this relative distance of a whole number is that number (1/1e-6 is not exactly 1e6). */
+    private static final double WHOLE_SCALE = 1e-9;
 
     Shapes(double tol) {
         this.tol = tol;
         double scale = 1.0 / tol;
         double whole = Math.rint(scale);
-        if (Math.abs(scale - whole) <= 1e-9 * scale) {
+        if (Math.abs(scale - whole) <= WHOLE_SCALE * scale) {
             scale = whole;
         }
         this.grid = new PrecisionModel(scale);

@@ -54,6 +54,13 @@ import org.locationtech.jts.geom.util.PolygonExtracter;
  * </ul>
  */
 public final class TributaryAnalysis {
+    /**
+     * Sine of the angle below which three outline vertices count as on one line (the middle one is
+     * dropped): far below any angle a plan is drawn with, just above the rounding of coordinates
+     * snapped to the 1e-6 m grid.
+     */
+    private static final double COLLINEAR = 1e-12;
+
 
     /** A member within this angle of a deck's span direction does not support that deck. */
     public static final double PARALLEL_ANGLE_DEGREES = 1.0;
@@ -539,7 +546,7 @@ public final class TributaryAnalysis {
                     double dot = ax * bx + ay * by;
                     double la = Math.hypot(ax, ay);
                     double lb = Math.hypot(bx, by);
-                    if (la == 0 || lb == 0 || Math.abs(cross) <= 1e-12 * la * lb && dot > 0) {
+                    if (la == 0 || lb == 0 || Math.abs(cross) <= COLLINEAR * la * lb && dot > 0) {
                         cur.remove(i);
                         changed = true;
                         i--;

@@ -23,6 +23,14 @@ import java.util.function.UnaryOperator;
  * rectangle, every other point is stretched with the grid lines on either side of it.
  */
 public final class PlanEdits {
+    /**
+     * Two grid lines, or a member's two ends, closer than this (m) are in the same place: 10 mm, below
+     * any spacing the trade draws and above the pointer's snapping rounding (1 in or 10 mm steps).
+     */
+    static final double SAME_PLACE = 0.01;
+    /** An outline enclosing less than this (m², 10 × 10 mm) encloses nothing: a slip of the pointer. */
+    static final double MIN_OUTLINE_AREA = 1e-4;
+
     /** Two coordinates closer than this are the same position, m (a micrometre). */
     public static final double SAME = 1e-6;
     /**
@@ -210,7 +218,7 @@ public final class PlanEdits {
      */
     public static Plan addGridLine(Plan p, GridLine.Axis axis, double offset, boolean columns) {
         List<GridLine> same = lines(p, axis);
-        if (same.stream().anyMatch(g -> Math.abs(g.offset() - offset) < 0.01)) {
+        if (same.stream().anyMatch(g -> Math.abs(g.offset() - offset) < SAME_PLACE)) {
             throw new IllegalArgumentException("there is a grid line there already");
         }
         if (same.isEmpty() || offset > same.get(same.size() - 1).offset()) {
@@ -408,7 +416,7 @@ public final class PlanEdits {
      * at intersections ({@code G-1-AB}), else the next free number ({@code G-4}).
      */
     public static Plan addMember(Plan p, String floorId, MemberKind kind, Point a, Point b) {
-        if (a.distance(b) < 0.01) {
+        if (a.distance(b) < SAME_PLACE) {
             throw new IllegalArgumentException("a member needs two different ends (at least 10 mm apart)");
         }
         return editFloor(p, floorId, f -> {
@@ -570,7 +578,7 @@ public final class PlanEdits {
     }
 
     private static void requireArea(Polygon outline, String what) {
-        if (outline.vertices().size() < 3 || area(outline) < 1e-4) {
+        if (outline.vertices().size() < 3 || area(outline) < MIN_OUTLINE_AREA) {
             throw new IllegalArgumentException(what + " needs three or more points enclosing an area");
         }
     }

@@ -81,7 +81,7 @@ public final class FloorCache {
     }
 
     /** The design of {@code key}: kept, being computed by another thread, or computed here by {@code design}. */
-    FloorDesign get(Object key, Supplier<FloorDesign> design) {
+    public FloorDesign get(Object key, Supplier<FloorDesign> design) {
         FutureTask<FloorDesign> task;
         boolean mine = false;
         synchronized (this) {

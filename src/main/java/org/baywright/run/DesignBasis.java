@@ -64,13 +64,22 @@ public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, Str
     /** The basis of a plan with a catalog given (null: none could be read). */
     public static DesignBasis of(Plan plan, Catalog catalog) {
         DesignSettings s = plan.settings();
-        DesignMethod m = DesignMethod.parse(s.method());
-        UnitSystem us = UnitSystem.parse(plan.units());
-        return new DesignBasis(m == null ? DesignMethod.LRFD : m, steel(s.fy()), catalog, s.catalog(),
-                us == null ? UnitSystem.US : us, new DeflectionLimits(s.liveDeflection(), s.totalDeflection()),
-                new LiveLoadRules(s.liveLoadReduction(), s.partitionAsDead(), s.girderAreaDelivered()),
+        return new DesignBasis(methodOf(plan), steel(s.fy()), catalog, s.catalog(), unitsOf(plan),
+                new DeflectionLimits(s.liveDeflection(), s.totalDeflection()), new LiveLoadRules(s.liveLoadReduction(), s.partitionAsDead(), s.girderAreaDelivered()),
                 filter(s.beamSeries(), s.maxBeamDepth()), filter(s.girderSeries(), s.maxBeamDepth()), s.columnSeries(),
                 s.spliceEvery());
+    }
+
+    /** The design method a plan's settings name: LRFD when they name none. */
+    public static DesignMethod methodOf(Plan plan) {
+        DesignMethod m = DesignMethod.parse(plan.settings().method());
+        return m == null ? DesignMethod.LRFD : m;
+    }
+
+    /** The unit system a plan is written in: US when it names none. */
+    public static UnitSystem unitsOf(Plan plan) {
+        UnitSystem us = UnitSystem.parse(plan.units());
+        return us == null ? UnitSystem.US : us;
     }
 
     /**

@@ -55,8 +55,13 @@ public final class PlanRun {
     /**
      * Runs a plan on a design basis with a catalog, sharing floor designs through {@code reuse} when it
      * serves the basis's catalog (null: none).
+     *
+     * @throws IllegalArgumentException when the basis has no catalog
      */
     public static RunResult run(Plan plan, DesignBasis basis, FloorCache reuse) {
+        if (basis.catalog() == null) {
+            throw new IllegalArgumentException("a run needs the catalog of its design basis; this basis has none");
+        }
         long t0 = System.nanoTime();
         FloorRules rules = basis.floorRules();
         Searches searches = new Searches(basis.catalog());

@@ -15,8 +15,9 @@ import org.baywright.catalog.Catalog;
  * that layout once.
  *
  * <p>A design is reused only when every input it reads is equal — the layout with its infills expanded
- * into the beams they generate, the columns present and their positions, the design settings that
- * concern floors, and this cache's catalog (a run with another catalog does not use the cache) — so a
+ * into the beams they generate, the columns present and their positions, the rules that concern
+ * floors ({@link FloorRules}: method, steel, deflection limits, section filters, live-load rules), and
+ * this cache's catalog (a run with another catalog does not use the cache) — so a
  * run gives the same result with or without it. The design of a floor is a pure function of those
  * inputs; equal inputs give equal designs.
  *

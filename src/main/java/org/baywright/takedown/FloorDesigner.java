@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import org.baywright.analysis.SpanLoad;
 import org.baywright.catalog.Section;
 import org.baywright.design.BeamCriteria;
 import org.baywright.design.BeamDesign;
@@ -15,6 +16,7 @@ import org.baywright.design.MemberStatus;
 import org.baywright.geometry.FloorTributary;
 import org.baywright.geometry.MemberTributary;
 import org.baywright.geometry.TributaryAnalysis;
+import org.baywright.load.LoadCase;
 import org.baywright.plan.Deck;
 import org.baywright.plan.Floor;
 import org.baywright.plan.Member;
@@ -118,7 +120,7 @@ public final class FloorDesigner {
         double span = m.length();
         Optional<String> fixed = m.fixedSection();
         Optional<Section> fixedSection = fixed.flatMap(searches.catalog()::find);
-        Map<org.baywright.load.LoadCase, List<org.baywright.analysis.SpanLoad>> caseLoads = reduction.apply(loads);
+        Map<LoadCase, List<SpanLoad>> caseLoads = reduction.apply(loads);
         Searches.Sized sized;
         if (fixedSection.isPresent()) {
             sized = searches.check(fixedSection.get(), span, caseLoads, criteria);

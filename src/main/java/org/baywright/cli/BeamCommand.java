@@ -38,6 +38,7 @@ import org.baywright.load.LoadCase;
 import org.baywright.units.Dimension;
 import org.baywright.units.Quantities;
 import org.baywright.units.UnitParseException;
+import org.baywright.run.DesignBasis;
 import org.baywright.units.UnitSystem;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -151,7 +152,7 @@ public final class BeamCommand implements Callable<Integer> {
         Bracing b = bracing();
         DeflectionLimits dl = new DeflectionLimits(limit("--live-limit", liveLimit), limit("--total-limit", totalLimit));
         double fyv = CliValues.quantity("--fy", fy, Dimension.STRESS, true);
-        Steel steel = fyv == Steel.A992.fy() ? Steel.A992 : Steel.A992.withFy(fyv);
+        Steel steel = DesignBasis.steel(fyv);
         if (fyv >= steel.e() / 10) {
             throw new BadInputException("--fy: \"" + fy + "\" is not a plausible structural steel yield stress");
         }

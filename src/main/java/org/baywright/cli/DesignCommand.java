@@ -89,14 +89,15 @@ public final class DesignCommand implements Callable<Integer> {
             }
             plan = org.baywright.study.Variations.method(plan, m.name().toLowerCase(Locale.ROOT));
         }
-        UnitSystem us = UnitSystem.parse(units != null ? units : plan.units());
-        if (us == null) {
+        UnitSystem asked = units == null ? null : UnitSystem.parse(units);
+        if (units != null && asked == null) {
             throw new BadInputException("--units: \"" + units + "\" is not a unit system; use us or si");
         }
         if (!(allowance >= 0 && allowance <= 100)) {
             throw new BadInputException("--allowance: " + allowance + " is not allowed; use a percentage from 0 to 100");
         }
         RunResult r = PlanRun.run(plan);
+        UnitSystem us = asked != null ? asked : r.basis().units();
         if (r.takedown() != null) {
             if (takeoff != null) {
                 TakeoffOutput.write(r, allowance, us, takeoff, err);

@@ -35,4 +35,64 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
         return new DesignSettings("lrfd", org.baywright.units.Units.KSI.toSi(50), 360, 240, List.of(), List.of(), List.of("W14"), 0, 2, true,
                 false, true, "");
     }
+
+    /** The same settings with another design method ("lrfd" or "asd"). */
+    public DesignSettings withMethod(String newMethod) {
+        return new DesignSettings(newMethod, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog);
+    }
+
+    /** The same settings with another yield stress, Pa. */
+    public DesignSettings withFy(double newFy) {
+        return new DesignSettings(method, newFy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog);
+    }
+
+    /** The same settings with other deflection limits (span ratios, 0 = off). */
+    public DesignSettings withDeflection(double live, double total) {
+        return new DesignSettings(method, fy, live, total, beamSeries, girderSeries, columnSeries, maxBeamDepth, spliceEvery,
+                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog);
+    }
+
+    /** The same settings with other series allowed for beams and for girders (empty = all). */
+    public DesignSettings withBeamSeries(List<String> beams, List<String> girders) {
+        return new DesignSettings(method, fy, liveDeflection, totalDeflection, beams, girders, columnSeries, maxBeamDepth,
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog);
+    }
+
+    /** The same settings with other series allowed for columns. */
+    public DesignSettings withColumnSeries(List<String> series) {
+        return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, series, maxBeamDepth,
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog);
+    }
+
+    /** The same settings with another depth limit for beams and girders, m (0 = none). */
+    public DesignSettings withMaxBeamDepth(double depth) {
+        return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries, depth,
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog);
+    }
+
+    /** The same settings with column splices every {@code levels} levels. */
+    public DesignSettings withSpliceEvery(int levels) {
+        return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
+                maxBeamDepth, levels, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog);
+    }
+
+    /**
+     * The same settings with other live-load options.
+     *
+     * @param reduce apply ASCE 7-16 §4.7 / §4.8
+     * @param partitionsAsDead carry the partition allowance as dead load
+     * @param girderDelivered a girder's A_T is the area whose load it receives (else half the bay each side)
+     */
+    public DesignSettings withLiveLoad(boolean reduce, boolean partitionsAsDead, boolean girderDelivered) {
+        return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
+                maxBeamDepth, spliceEvery, reduce, partitionsAsDead, girderDelivered, catalog);
+    }
+
+    /** The same settings with another catalog file (empty: the built-in W shapes). */
+    public DesignSettings withCatalog(String file) {
+        return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, file);
+    }
 }

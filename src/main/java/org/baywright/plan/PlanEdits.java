@@ -663,10 +663,7 @@ public final class PlanEdits {
 
     /** The plan designed by another method ("lrfd" or "asd"). */
     public static Plan withMethod(Plan p, String method) {
-        DesignSettings s = p.settings();
-        return new Plan(p.name(), p.units(), new DesignSettings(method, s.fy(), s.liveDeflection(), s.totalDeflection(),
-                s.beamSeries(), s.girderSeries(), s.columnSeries(), s.maxBeamDepth(), s.spliceEvery(),
-                s.liveLoadReduction(), s.partitionAsDead(), s.girderAreaDelivered(), s.catalog()), p.grid(), p.levels(),
+        return new Plan(p.name(), p.units(), p.settings().withMethod(method), p.grid(), p.levels(),
                 p.floors(), p.columns());
     }
 

@@ -97,7 +97,7 @@ public final class RunSummary {
         o.put("plan", run.plan().name());
         o.put("program", "Baywright " + run.version());
         o.put("catalog", run.catalogName());
-        o.put("method", run.plan().settings().method());
+        o.put("method", run.basis().method().name().toLowerCase(Locale.ROOT));
         o.put("units", Map.of("system", us.name().toLowerCase(Locale.ROOT), "length", us.length().symbol(),
                 "force", us.force().symbol(), "area", us.floorArea().symbol(), "weightPerLength", us.weightPerLength().symbol(),
                 "weight", weightUnit(us), "weightPerArea", weightPerAreaUnit(us), "moment", us.moment().symbol(),
@@ -234,7 +234,7 @@ public final class RunSummary {
         StringBuilder b = new StringBuilder();
         TakedownResult t = run.takedown();
         b.append("Baywright design: ").append(run.plan().name()).append(" (").append(run.plan().levels().size())
-                .append(" levels, ").append(run.plan().settings().method().toUpperCase(Locale.ROOT)).append(", ")
+                .append(" levels, ").append(run.basis().method().name()).append(", ")
                 .append(run.catalogName()).append(")\n");
         if (t != null) {
             Map<MemberStatus, Integer> counts = statusCounts(t);

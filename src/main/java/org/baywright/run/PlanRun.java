@@ -1,37 +1,41 @@
 package org.baywright.run;
 
-import java.util.ArrayList;
 import java.util.List;
 import org.baywright.catalog.Catalog;
-import org.baywright.catalog.CatalogException;
-import org.baywright.catalog.CatalogFile;
 import org.baywright.plan.Plan;
-import org.baywright.plan.Problem;
+import org.baywright.takedown.ColumnLines;
+import org.baywright.takedown.EquilibriumCheck;
+import org.baywright.takedown.ExpandedPlan;
+import org.baywright.takedown.FloorAreas;
 import org.baywright.takedown.FloorCache;
+import org.baywright.takedown.FloorDesign;
+import org.baywright.takedown.FloorDesigner;
+import org.baywright.takedown.FloorInput;
+import org.baywright.takedown.FloorRules;
+import org.baywright.takedown.Foundations;
+import org.baywright.takedown.LevelDesign;
+import org.baywright.takedown.Searches;
+import org.baywright.takedown.SupportGraph;
 import org.baywright.takedown.Takedown;
 import org.baywright.takedown.TakedownResult;
 
-/** The pipeline: plan → catalog → tributary areas, ordered design and takedown → an immutable run result. */
+/**
+ * The pipeline: the design basis, then the stages of the takedown in order, each returning an
+ * immutable result — the plan expanded, per floor layout its tributary areas, support graph and
+ * members designed in order, the column lines, the foundations, the equilibrium check — and the run
+ * result with its provenance. See {@link Takedown} for what each stage does.
+ */
 public final class PlanRun {
     private PlanRun() {
     }
 
     /** Runs a plan with the catalog its settings name (the built-in one when empty). */
     public static RunResult run(Plan plan) {
-        List<Problem> problems = new ArrayList<>();
-        Catalog catalog;
-        try {
-            String c = plan.settings().catalog();
-            catalog = c == null || c.isBlank() ? CatalogFile.loadDefault() : CatalogFile.read(java.nio.file.Path.of(c));
-        } catch (CatalogException e) {
-            problems.add(Problem.error("catalog", "/settings/catalog", "", e.getMessage()));
-            return new RunResult(plan, null, problems, "", version(), 0);
-        } catch (java.nio.file.InvalidPathException e) {
-            problems.add(Problem.error("catalog", "/settings/catalog", "", "catalog: \"" + e.getInput().replaceAll("\\p{Cntrl}", "?")
-                    + "\" is not a usable file name (" + e.getReason() + ")"));
-            return new RunResult(plan, null, problems, "", version(), 0);
+        DesignBasis.Loaded basis = DesignBasis.load(plan);
+        if (!basis.ok()) {
+            return new RunResult(plan, null, basis.problems(), "", version(), 0, basis.basis());
         }
-        return run(plan, catalog);
+        return run(plan, basis.basis(), null);
     }
 
     /** Runs a plan with a given catalog. */
@@ -45,10 +49,42 @@ public final class PlanRun {
      * all its variants.
      */
     public static RunResult run(Plan plan, Catalog catalog, FloorCache reuse) {
+        return run(plan, DesignBasis.of(plan, catalog), reuse);
+    }
+
+    /**
+     * Runs a plan on a design basis with a catalog, sharing floor designs through {@code reuse} when it
+     * serves the basis's catalog (null: none).
+     *
+     * @throws IllegalArgumentException when the basis has no catalog
+     */
+    public static RunResult run(Plan plan, DesignBasis basis, FloorCache reuse) {
+        if (basis.catalog() == null) {
+            throw new IllegalArgumentException("a run needs the catalog of its design basis; this basis has none");
+        }
         long t0 = System.nanoTime();
-        TakedownResult t = Takedown.run(plan, catalog, reuse);
+        FloorRules rules = basis.floorRules();
+        Searches searches = new Searches(basis.catalog());
+        FloorCache cache = reuse != null && reuse.catalog() == basis.catalog() ? reuse : null;
+        ExpandedPlan expanded = ExpandedPlan.of(plan);
+        List<FloorDesign> floors = expanded.floors().parallelStream()
+                .map(f -> cache == null ? designFloor(f, rules, searches)
+                        : cache.get(f.key(rules), () -> designFloor(f, rules, searches)))
+                .toList();
+        List<LevelDesign> levels = expanded.withDesigns(floors);
+        ColumnLines columns = ColumnLines.design(plan, levels, basis.columnDesigner(), basis.columnRules());
+        Foundations foundations = Foundations.of(columns);
+        EquilibriumCheck equilibrium = EquilibriumCheck.of(levels, foundations, basis.liveLoad().partitionAsDead());
+        TakedownResult t = Takedown.result(expanded, floors, columns, foundations, equilibrium);
         double ms = (System.nanoTime() - t0) / 1e6;
-        return new RunResult(plan, t, List.of(), catalog.name(), version(), ms);
+        return new RunResult(plan, t, List.of(), basis.catalog().name(), version(), ms, basis);
+    }
+
+    /** Stages 2 to 4 for one floor layout: tributary areas, support graph, members designed in order. */
+    private static FloorDesign designFloor(FloorInput floor, FloorRules rules, Searches searches) {
+        FloorAreas areas = FloorAreas.of(floor);
+        SupportGraph graph = SupportGraph.of(floor);
+        return FloorDesigner.design(floor, areas, graph, rules, searches);
     }
 
     /** Baywright's version from the jar manifest, or "development build". */

@@ -10,12 +10,21 @@ import org.baywright.takedown.TakedownResult;
  * The result of one run of a plan, with its provenance.
  *
  * @param takedown null when the plan had errors that prevent a run
- * @param catalogName the catalog used
+ * @param catalogName the catalog used (empty when none could be read)
  * @param version Baywright's version
  * @param milliseconds wall time of the run (for information only)
+ * @param basis the design basis the run used: method, steel, catalog, criteria
  */
 public record RunResult(Plan plan, TakedownResult takedown, List<Problem> validation, String catalogName, String version,
-        double milliseconds) {
+        double milliseconds, DesignBasis basis) {
+
+    /**
+     * A result assembled without a run (tests, examples): the basis is the plan's, without a catalog.
+     */
+    public RunResult(Plan plan, TakedownResult takedown, List<Problem> validation, String catalogName, String version,
+            double milliseconds) {
+        this(plan, takedown, validation, catalogName, version, milliseconds, DesignBasis.of(plan, null));
+    }
 
     /** Every problem: validation first, then those of the takedown. */
     public List<Problem> problems() {

@@ -2,8 +2,8 @@ package org.baywright.study;
 
 import java.util.List;
 import org.baywright.catalog.Catalog;
-import org.baywright.catalog.CatalogFile;
 import org.baywright.plan.Plan;
+import org.baywright.run.DesignBasis;
 import org.baywright.run.PlanRun;
 import org.baywright.takedown.FloorCache;
 
@@ -28,10 +28,14 @@ public final class Study {
                 new CancelToken());
     }
 
-    /** The catalog a plan's settings name (the built-in one when empty). */
+    /**
+     * The catalog a plan's settings name (the built-in one when empty), as its run reads it ({@link
+     * DesignBasis#catalogOf}).
+     *
+     * @throws org.baywright.catalog.CatalogException when it cannot be read
+     */
     public static Catalog catalogOf(Plan plan) {
-        String c = plan.settings().catalog();
-        return c == null || c.isBlank() ? CatalogFile.loadDefault() : CatalogFile.read(java.nio.file.Path.of(c));
+        return DesignBasis.catalogOf(plan);
     }
 
     /**

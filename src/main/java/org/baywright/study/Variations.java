@@ -230,26 +230,17 @@ public final class Variations {
 
     /** The design method, "lrfd" or "asd". */
     public static Plan method(Plan plan, String method) {
-        DesignSettings s = plan.settings();
-        return withSettings(plan, new DesignSettings(method, s.fy(), s.liveDeflection(), s.totalDeflection(), s.beamSeries(),
-                s.girderSeries(), s.columnSeries(), s.maxBeamDepth(), s.spliceEvery(), s.liveLoadReduction(),
-                s.partitionAsDead(), s.girderAreaDelivered(), s.catalog()));
+        return withSettings(plan, plan.settings().withMethod(method));
     }
 
     /** The actual-depth limit of beams and girders, m (0 = none). */
     public static Plan maxDepth(Plan plan, double depth) {
-        DesignSettings s = plan.settings();
-        return withSettings(plan, new DesignSettings(s.method(), s.fy(), s.liveDeflection(), s.totalDeflection(), s.beamSeries(),
-                s.girderSeries(), s.columnSeries(), depth, s.spliceEvery(), s.liveLoadReduction(), s.partitionAsDead(),
-                s.girderAreaDelivered(), s.catalog()));
+        return withSettings(plan, plan.settings().withMaxBeamDepth(depth));
     }
 
     /** The column series allowed. */
     public static Plan columnSeries(Plan plan, List<String> series) {
-        DesignSettings s = plan.settings();
-        return withSettings(plan, new DesignSettings(s.method(), s.fy(), s.liveDeflection(), s.totalDeflection(), s.beamSeries(),
-                s.girderSeries(), series, s.maxBeamDepth(), s.spliceEvery(), s.liveLoadReduction(), s.partitionAsDead(),
-                s.girderAreaDelivered(), s.catalog()));
+        return withSettings(plan, plan.settings().withColumnSeries(series));
     }
 
     private static Plan withSettings(Plan plan, DesignSettings s) {

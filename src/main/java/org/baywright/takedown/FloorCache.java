@@ -15,8 +15,9 @@ import org.baywright.catalog.Catalog;
  * that layout once.
  *
  * <p>A design is reused only when every input it reads is equal — the layout with its infills expanded
- * into the beams they generate, the columns present and their positions, the design settings that
- * concern floors, and this cache's catalog (a run with another catalog does not use the cache) — so a
+ * into the beams they generate, the columns present and their positions, the rules that concern
+ * floors ({@link FloorRules}: method, steel, deflection limits, section filters, live-load rules), and
+ * this cache's catalog (a run with another catalog does not use the cache) — so a
  * run gives the same result with or without it. The design of a floor is a pure function of those
  * inputs; equal inputs give equal designs.
  *
@@ -81,7 +82,7 @@ public final class FloorCache {
     }
 
     /** The design of {@code key}: kept, being computed by another thread, or computed here by {@code design}. */
-    FloorDesign get(Object key, Supplier<FloorDesign> design) {
+    public FloorDesign get(Object key, Supplier<FloorDesign> design) {
         FutureTask<FloorDesign> task;
         boolean mine = false;
         synchronized (this) {

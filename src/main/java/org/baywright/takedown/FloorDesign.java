@@ -16,6 +16,6 @@ import org.baywright.plan.Problem;
  * @param areaLoadAreas area load id → the part of it on the loaded floor, m²
  * @param problems the floor's problems in the order found
  */
-record FloorDesign(List<MemberResult> members, Map<String, double[]> columnLoads, Map<String, Double> columnArea,
+public record FloorDesign(List<MemberResult> members, Map<String, double[]> columnLoads, Map<String, Double> columnArea,
         Map<String, double[]> columnL0, double loadedArea, Map<String, Double> areaLoadAreas, List<Problem> problems) {
 }

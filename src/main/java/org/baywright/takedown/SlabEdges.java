@@ -57,8 +57,17 @@ public final class SlabEdges {
         return false;
     }
 
+    /**
+     * Where a column stands, for its live-load element factor.
+     *
+     * @param kll K_LL (ASCE 7-16 Table 4.7-1)
+     * @param description "interior", "edge", "corner", "… with cantilever slab"
+     */
+    public record ColumnPosition(double kll, String description) {
+    }
+
     /** Position of a column: K_LL and a description ("interior", "edge", "corner", "… with cantilever slab"). */
-    public static Object[] column(Plan plan, Column c, Floor floor, double cantilever, double tol) {
+    public static ColumnPosition column(Plan plan, Column c, Floor floor, double cantilever, double tol) {
         double[][] dirs = {{1, 0}, {-1, 0}, {0, 1}, {0, -1}};
         int exposed = 0;
         boolean allCantilever = true;
@@ -86,13 +95,14 @@ public final class SlabEdges {
             }
         }
         if (exposed == 0) {
-            return new Object[] {4.0, "interior"};
+            return new ColumnPosition(4.0, "interior");
         }
         String where = exposed == 1 ? "edge" : "corner";
         if (allCantilever) {
-            return exposed == 1 ? new Object[] {3.0, "edge, with cantilever slab"} : new Object[] {2.0, "corner, with cantilever slab"};
+            return exposed == 1 ? new ColumnPosition(3.0, "edge, with cantilever slab")
+                    : new ColumnPosition(2.0, "corner, with cantilever slab");
         }
-        return new Object[] {4.0, where};
+        return new ColumnPosition(4.0, where);
     }
 
     private static double spanAngle(Floor floor, Point p) {

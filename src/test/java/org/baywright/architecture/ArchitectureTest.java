@@ -74,6 +74,16 @@ class ArchitectureTest {
     }
 
     @Test
+    void theDesignersKnowNothingOfThePlanTheTakedownOrTheRun() {
+        // design (beam and column designers) takes plain values: loads, criteria, catalog, storey demands
+        noClasses().that().resideInAPackage("org.baywright.design..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.baywright.plan..", "org.baywright.takedown..",
+                        "org.baywright.run..", "org.baywright.geometry..", "org.baywright.report..", "org.baywright.study..",
+                        "org.baywright.io..", "org.baywright.ui..", "org.baywright.cli..")
+                .check(classes);
+    }
+
+    @Test
     void designCodesDoNotImportEachOther() {
         // each design.<code> package (aisc360, later en1993…) stands alone
         slices().matching("org.baywright.design.(*)..").should().notDependOnEachOther().check(classes);

@@ -120,9 +120,7 @@ class CliContractTest {
     void oneWhenAMemberIsOverstressed(@TempDir Path dir) throws Exception {
         DesignSettings d = DesignSettings.defaults();
         // girders may only be W6: none of them can carry a 9 m girder
-        Plan p = withSettings(regular("us"), new DesignSettings(d.method(), d.fy(), d.liveDeflection(), d.totalDeflection(),
-                d.beamSeries(), List.of("W6"), d.columnSeries(), d.maxBeamDepth(), d.spliceEvery(), d.liveLoadReduction(),
-                d.partitionAsDead(), d.girderAreaDelivered(), d.catalog()));
+        Plan p = withSettings(regular("us"), d.withBeamSeries(d.beamSeries(), List.of("W6")));
         Path plan = save(dir, "weak.bay.json", p);
         Run r = run("design", plan.toString());
         assertEquals(1, r.code(), r.err());

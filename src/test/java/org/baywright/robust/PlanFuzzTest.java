@@ -183,9 +183,7 @@ class PlanFuzzTest {
         for (String name : List.of("no/such/catalog.csv", "nul\u0000in-name.csv", "   ", ".", "\uFFFF")) {
             Plan p = build(smallRecipe());
             DesignSettings s = p.settings();
-            Plan withCatalog = new Plan(p.name(), p.units(), new DesignSettings(s.method(), s.fy(), s.liveDeflection(),
-                    s.totalDeflection(), s.beamSeries(), s.girderSeries(), s.columnSeries(), s.maxBeamDepth(), s.spliceEvery(),
-                    s.liveLoadReduction(), s.partitionAsDead(), s.girderAreaDelivered(), name), p.grid(), p.levels(),
+            Plan withCatalog = new Plan(p.name(), p.units(), s.withCatalog(name), p.grid(), p.levels(),
                     p.floors(), p.columns());
             RunResult r = Guard.call("run", () -> PlanRun.run(withCatalog));
             if (name.isBlank()) {

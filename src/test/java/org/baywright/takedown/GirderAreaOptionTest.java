@@ -25,9 +25,7 @@ class GirderAreaOptionTest {
                 List.of(30 * FT, 30 * FT), List.of(13 * FT), true, 10 * FT,
                 new LoadValues(Units.PSF.toSi(56), 0, Units.PSF.toSi(50), 0, 0, 0), LoadValues.ZERO, LoadValues.ZERO));
         DesignSettings s = p.settings();
-        p = new Plan(p.name(), p.units(), new DesignSettings(s.method(), s.fy(), s.liveDeflection(), s.totalDeflection(),
-                s.beamSeries(), s.girderSeries(), s.columnSeries(), s.maxBeamDepth(), s.spliceEvery(), true,
-                s.partitionAsDead(), delivered, s.catalog()), p.grid(), p.levels(), p.floors(), p.columns());
+        p = new Plan(p.name(), p.units(), s.withLiveLoad(true, s.partitionAsDead(), delivered), p.grid(), p.levels(), p.floors(), p.columns());
         TakedownResult t = PlanRun.run(p).takedown();
         return t.members().get(t.levelFloors().get("Level 2")).stream().filter(m -> m.id().equals("G-2-AB")).findFirst()
                 .orElseThrow();

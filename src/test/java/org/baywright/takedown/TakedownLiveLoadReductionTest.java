@@ -54,9 +54,7 @@ class TakedownLiveLoadReductionTest {
                 List.of(ft(13), ft(13)), true, ft(10), new LoadValues(psf(50), psf(10), psf(50), 0, 0, 0),
                 new LoadValues(psf(40), psf(10), 0, psf(20), 0, 0), LoadValues.ZERO));
         DesignSettings s = p.settings();
-        return new Plan(p.name(), p.units(), new DesignSettings(s.method(), s.fy(), s.liveDeflection(), s.totalDeflection(),
-                s.beamSeries(), s.girderSeries(), s.columnSeries(), s.maxBeamDepth(), s.spliceEvery(), true, false, delivered,
-                s.catalog()), p.grid(), p.levels(), p.floors(), p.columns());
+        return new Plan(p.name(), p.units(), s.withLiveLoad(true, false, delivered), p.grid(), p.levels(), p.floors(), p.columns());
     }
 
     private static MemberResult member(TakedownResult t, String level, String id) {

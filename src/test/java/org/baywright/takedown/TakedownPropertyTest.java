@@ -134,9 +134,8 @@ class TakedownPropertyTest {
                         f.areaLoads(), f.lineLoads(), f.roof() ? List.of() : pts));
             }
             DesignSettings s = base.settings();
-            DesignSettings settings = new DesignSettings(basis.method(), s.fy(), s.liveDeflection(), s.totalDeflection(),
-                    s.beamSeries(), s.girderSeries(), s.columnSeries(), s.maxBeamDepth(), s.spliceEvery(), basis.reduction(),
-                    basis.partitionAsDead(), basis.delivered(), s.catalog());
+            DesignSettings settings = s.withMethod(basis.method())
+                    .withLiveLoad(basis.reduction(), basis.partitionAsDead(), basis.delivered());
             return new Plan(base.name(), base.units(), settings, base.grid(), base.levels(), floors, base.columns());
         }
     }

@@ -98,7 +98,7 @@ final class SheetBuilder {
         UnitSystem u = options.units() != null ? options.units() : UnitSystem.parse(plan.units());
         this.units = u == null ? UnitSystem.US : u;
         this.paper = options.paper() != null ? options.paper() : this.units == UnitSystem.SI ? Paper.ISO_A1 : Paper.ARCH_D;
-        DesignMethod m = DesignMethod.parse(plan.settings().method());
+        DesignMethod m = run.basis().method();
         this.method = m == null ? DesignMethod.LRFD : m;
         this.t = paper.textSize();
     }

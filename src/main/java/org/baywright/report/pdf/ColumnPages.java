@@ -6,7 +6,6 @@ import org.baywright.calc.Calc;
 import org.baywright.calc.CalcLine;
 import org.baywright.calc.Quantity;
 import org.baywright.catalog.Catalog;
-import org.baywright.catalog.CatalogFile;
 import org.baywright.catalog.Section;
 import org.baywright.design.Steel;
 import org.baywright.design.aisc360.IShapeCompression;
@@ -87,7 +86,7 @@ final class ColumnPages {
         PageFlow f = cx.flow;
         UnitSystem us = cx.us;
         cx.part("Column strengths");
-        Catalog catalog = catalog(cx);
+        Catalog catalog = cx.basis().catalog();
         Steel steel = cx.steel();
         boolean lrfd = cx.method() == DesignMethod.LRFD;
         f.paragraph(f.body, "Compression strength of every column section at every storey height where it is used: flexural"
@@ -116,7 +115,7 @@ final class ColumnPages {
             f.paragraph(f.smallGrey, "Used in: " + users.get(e.getKey()));
             Section sec = catalog == null ? null : catalog.find(section).orElse(null);
             if (sec == null) {
-                f.paragraph(f.body, "The section is not in the catalog read for this package; see the schedule for its strength.");
+                f.paragraph(f.body, "The section is not in the catalog of the run; see the schedule for its strength.");
                 continue;
             }
             Calc calc = new Calc();
@@ -127,15 +126,6 @@ final class ColumnPages {
             f.paragraph(f.bold, "Available strength used in the schedule: " + (lrfd ? "φc·Pn" : "Pn/Ωc") + " = "
                     + Fmt.v(s.available(), Quantity.FORCE, us) + " with " + (lrfd ? "φc = " + CalcFormat.sig(ResistanceFactors.PHI_C)
                     : "Ωc = " + CalcFormat.sig(ResistanceFactors.OMEGA_C)) + " (" + FrontMatter.AISC + " E1)");
-        }
-    }
-
-    private static Catalog catalog(Context cx) {
-        String c = cx.run.plan().settings().catalog();
-        try {
-            return c == null || c.isBlank() ? CatalogFile.loadDefault() : CatalogFile.read(java.nio.file.Path.of(c));
-        } catch (RuntimeException e) {
-            return null;
         }
     }
 

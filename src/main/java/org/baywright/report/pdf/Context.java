@@ -5,8 +5,8 @@ import java.util.List;
 import org.apache.pdfbox.pdmodel.PDPage;
 import org.baywright.design.Steel;
 import org.baywright.load.DesignMethod;
+import org.baywright.run.DesignBasis;
 import org.baywright.run.RunResult;
-import org.baywright.takedown.MemberResult;
 import org.baywright.units.UnitSystem;
 
 /** What the page writers share: the run, the options, the page flow and the contents being collected. */
@@ -49,23 +49,18 @@ final class Context {
         return n.isEmpty() ? run.plan().name() : n;
     }
 
-    DesignMethod method() {
-        DesignMethod m = DesignMethod.parse(run.plan().settings().method());
-        return m == null ? DesignMethod.LRFD : m;
+    /** The run's design basis. */
+    DesignBasis basis() {
+        return run.basis();
     }
 
-    /** The steel the run designed with: that of any designed member, else A992 at the plan's Fy. */
+    /** The design method the run used. */
+    DesignMethod method() {
+        return run.basis().method();
+    }
+
+    /** The steel the run designed with. */
     Steel steel() {
-        if (run.takedown() != null) {
-            for (List<MemberResult> ms : run.takedown().members().values()) {
-                for (MemberResult m : ms) {
-                    if (m.criteria() != null) {
-                        return m.criteria().steel();
-                    }
-                }
-            }
-        }
-        double fy = run.plan().settings().fy();
-        return Steel.A992.fy() == fy ? Steel.A992 : Steel.A992.withFy(fy);
+        return run.basis().steel();
     }
 }

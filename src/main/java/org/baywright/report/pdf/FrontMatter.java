@@ -14,6 +14,7 @@ import org.baywright.load.DesignMethod;
 import org.baywright.load.LoadCase;
 import org.baywright.load.LoadCombination;
 import org.baywright.plan.DesignSettings;
+import org.baywright.run.DesignBasis;
 import org.baywright.report.pdf.PageFlow.Rgb;
 import org.baywright.report.pdf.PageFlow.Style;
 import org.baywright.units.UnitSystem;
@@ -98,7 +99,7 @@ final class FrontMatter {
 
     /** The design basis in one table: codes and editions, method, material, loads, criteria, catalog. */
     static Table basisTable(Context cx) {
-        DesignSettings st = cx.run.plan().settings();
+        DesignBasis b = cx.basis();
         DesignMethod m = cx.method();
         Steel steel = cx.steel();
         Table t = new Table().left("Item", 22).left("Basis", 58).left("Source", 28).fontSize(7.6f);
@@ -112,31 +113,31 @@ final class FrontMatter {
             combos.append(combos.length() == 0 ? "" : "; ").append(c.name());
         }
         t.row("Strength combinations", combos.toString(), ASCE + (m == DesignMethod.LRFD ? " §2.3.1" : " §2.4.1"));
-        t.row("Live-load reduction", liveLoadReduction(st), ASCE + " §4.7, §4.8");
-        t.row("Deflection criteria", deflection(st), deflectionSource(st));
+        t.row("Live-load reduction", liveLoadReduction(b), ASCE + " §4.7, §4.8");
+        t.row("Deflection criteria", deflection(b), deflectionSource(b));
         t.row("Steel", steel.name() + ", Fy = " + Fmt.v(steel.fy(), Quantity.STRESS, cx.us) + ", E = "
                 + Fmt.v(steel.e(), Quantity.STRESS, cx.us), AISC + " A3.1");
         t.row("Section catalog", cx.run.catalogName().isEmpty() ? "(none: the run stopped before sizing)" : cx.run.catalogName(),
-                st.catalog() == null || st.catalog().isBlank() ? "built into Baywright" : st.catalog());
+                b.catalogFile().isBlank() ? "built into Baywright" : b.catalogFile());
         return t;
     }
 
-    static String liveLoadReduction(DesignSettings st) {
-        if (!st.liveLoadReduction()) {
+    static String liveLoadReduction(DesignBasis b) {
+        if (!b.liveLoad().reduce()) {
             return "not applied: every member and column carries the full live load";
         }
         return "applied member by member with its own A_T and K_LL (floor live §4.7, roof live §4.8); partitions carried as "
-                + (st.partitionAsDead() ? "dead load" : "reducible live load") + "; girder A_T "
-                + (st.girderAreaDelivered() ? "= the area whose load it receives" : "≥ half the bay on each side");
+                + (b.liveLoad().partitionAsDead() ? "dead load" : "reducible live load") + "; girder A_T "
+                + (b.liveLoad().girderAreaDelivered() ? "= the area whose load it receives" : "≥ half the bay on each side");
     }
 
-    static String deflection(DesignSettings st) {
-        return "live load: " + limit(st.liveDeflection()) + "; dead + live (with own weight): " + limit(st.totalDeflection())
+    static String deflection(DesignBasis b) {
+        return "live load: " + limit(b.deflection().live()) + "; dead + live (with own weight): " + limit(b.deflection().total())
                 + "; bare steel E·Ix";
     }
 
-    static String deflectionSource(DesignSettings st) {
-        boolean defaults = st.liveDeflection() == DeflectionLimits.FLOOR.live() && st.totalDeflection() == DeflectionLimits.FLOOR.total();
+    static String deflectionSource(DesignBasis b) {
+        boolean defaults = b.deflection().live() == DeflectionLimits.FLOOR.live() && b.deflection().total() == DeflectionLimits.FLOOR.total();
         return defaults ? DeflectionLimits.SOURCE + " (floor members)"
                 : "project criteria (" + DeflectionLimits.SOURCE + " gives L/360 and L/240)";
     }
@@ -153,6 +154,7 @@ final class FrontMatter {
     static void basis(Context cx) {
         PageFlow f = cx.flow;
         DesignSettings st = cx.run.plan().settings();
+        DesignBasis b = cx.basis();
         DesignMethod m = cx.method();
         cx.part("Design basis");
 
@@ -170,8 +172,8 @@ final class FrontMatter {
         Table lc = new Table().left("Case", 8).left("What it contains", 92);
         lc.row("D", "Dead load: slab and deck, superimposed dead load (finishes, ceilings, services), cladding and other"
                 + " dead line and point loads, and the own weight of every beam, girder and column (each candidate section"
-                + " is checked under its own nominal weight)" + (st.partitionAsDead() ? ", and the partition allowance" : ""));
-        lc.row("L", "Floor live load" + (st.partitionAsDead() ? "" : " including the partition allowance")
+                + " is checked under its own nominal weight)" + (b.liveLoad().partitionAsDead() ? ", and the partition allowance" : ""));
+        lc.row("L", "Floor live load" + (b.liveLoad().partitionAsDead() ? "" : " including the partition allowance")
                 + ", reduced per member and column where §4.7 permits");
         lc.row("Lr", "Roof live load, reduced by §4.8.2 (R1 from the tributary area, flat roof R2 = 1)");
         lc.row("S", "Snow load as given in the plan (not reduced)");
@@ -184,8 +186,8 @@ final class FrontMatter {
         for (LoadCombination combo : Combinations.gravity(m, EnumSet.allOf(LoadCase.class))) {
             c.row(combo.name(), combo.reference(), "strength of members and columns");
         }
-        c.row("L (+ Lr, S where present)", DeflectionLimits.SOURCE, "live-load deflection, limit " + limit(st.liveDeflection()));
-        c.row("D + L (+ Lr, S) + own weight", DeflectionLimits.SOURCE, "total-load deflection, limit " + limit(st.totalDeflection()));
+        c.row("L (+ Lr, S where present)", DeflectionLimits.SOURCE, "live-load deflection, limit " + limit(b.deflection().live()));
+        c.row("D + L (+ Lr, S) + own weight", DeflectionLimits.SOURCE, "total-load deflection, limit " + limit(b.deflection().total()));
         c.draw(f);
         f.paragraph(f.small, "Each member is checked only under the combinations that matter for the cases it carries (a"
                 + " member with D and L only gets " + (m == DesignMethod.LRFD ? "1.4D and 1.2D + 1.6L" : "D and D + L")
@@ -193,7 +195,7 @@ final class FrontMatter {
                 + " 0.5L is not taken." : ""));
 
         f.heading2("Live-load reduction", 40);
-        if (!st.liveLoadReduction()) {
+        if (!b.liveLoad().reduce()) {
             f.paragraph(f.body, "Live-load reduction is switched off in the plan: members and columns carry the full live load.");
         } else {
             f.bullet(f.body, "Every member and column reduces its ordinary floor live load with its own influence area:"
@@ -206,18 +208,18 @@ final class FrontMatter {
                     + " it; columns 4 when interior or exterior without a cantilever slab, 3 at an edge with a cantilever"
                     + " slab, 2 at a corner with a cantilever slab.");
             f.bullet(f.body, "A_T of a member is the deck area whose load it actually receives: its own tributary area plus"
-                    + " what the members framing into it deliver" + (st.girderAreaDelivered() ? "."
+                    + " what the members framing into it deliver" + (b.liveLoad().girderAreaDelivered() ? "."
                     : "; for girders at least half the bay on each side (plan setting)."));
             f.bullet(f.body, "A_T of a column accumulates the delivered areas of every floor above it; roof live load"
                     + " uses the roof area alone (§4.8.2, Lr between 12 psf and L0).");
-            f.bullet(f.body, "Partition allowance (§4.3.2): carried as " + (st.partitionAsDead() ? "dead load."
+            f.bullet(f.body, "Partition allowance (§4.3.2): carried as " + (b.liveLoad().partitionAsDead() ? "dead load."
                     : "reducible live load."));
             f.bullet(f.body, "Reactions passed from member to member are always unreduced; each member reduces what it receives.");
         }
 
         f.heading2("Deflection criteria", 30);
-        f.paragraph(f.body, "Live load: " + limit(st.liveDeflection()) + ". Dead plus live load, with the member's own weight: "
-                + limit(st.totalDeflection()) + ". Source: " + deflectionSource(st) + ". These are serviceability criteria of the"
+        f.paragraph(f.body, "Live load: " + limit(b.deflection().live()) + ". Dead plus live load, with the member's own weight: "
+                + limit(b.deflection().total()) + ". Source: " + deflectionSource(b) + ". These are serviceability criteria of the"
                 + " project, not clauses of " + AISC + ". Deflections are those of the bare steel section (E·Ix), simply"
                 + " supported, under service loads.");
 
@@ -233,8 +235,8 @@ final class FrontMatter {
                 + " applied to what supports it before that is designed.");
         f.bullet(f.body, "Columns: " + AISC + " E3 flexural buckling about both axes with K = 1 and the storey height as"
                 + " unbraced length; shapes with slender elements (E7) are excluded. Column series: "
-                + (st.columnSeries().isEmpty() ? "any" : String.join(", ", st.columnSeries())) + "; one section per tier,"
-                + " a splice every " + st.spliceEvery() + " level" + (st.spliceEvery() == 1 ? "" : "s") + " from the foundation.");
+                + (b.columnSeries().isEmpty() ? "any" : String.join(", ", b.columnSeries())) + "; one section per tier,"
+                + " a splice every " + b.spliceEvery() + " level" + (b.spliceEvery() == 1 ? "" : "s") + " from the foundation.");
         f.bullet(f.body, "The run checks equilibrium for every load case: everything applied against the sum of the"
                 + " foundation reactions (part \"Takedown summary\").");
 

@@ -6,7 +6,6 @@ import java.util.Map;
 import org.baywright.calc.Quantity;
 import org.baywright.design.MemberStatus;
 import org.baywright.plan.AreaLoad;
-import org.baywright.plan.DesignSettings;
 import org.baywright.plan.Floor;
 import org.baywright.plan.Level;
 import org.baywright.plan.LineLoad;
@@ -33,11 +32,11 @@ final class Summaries {
     static void loads(Context cx) {
         PageFlow f = cx.flow;
         UnitSystem us = cx.us;
-        DesignSettings st = cx.run.plan().settings();
+        boolean partitionAsDead = cx.basis().liveLoad().partitionAsDead();
         cx.part("Load summary");
         f.paragraph(f.body, "Service loads as given in the plan, per floor layout. The framing's own weight is not listed:"
                 + " the design adds each member's and column's nominal weight to D. Partition allowance is carried as "
-                + (st.partitionAsDead() ? "dead load" : "live load") + ", so the columns \"D carried\" and \"L carried\""
+                + (partitionAsDead ? "dead load" : "live load") + ", so the columns \"D carried\" and \"L carried\""
                 + " show what enters the combinations before live-load reduction.");
         f.gap(4);
 
@@ -67,8 +66,8 @@ final class Summaries {
                         Fmt.fixed(area, Quantity.FLOOR_AREA, us, 0), num(v.dead(), Quantity.AREA_LOAD, us),
                         num(v.superimposed(), Quantity.AREA_LOAD, us), num(v.partition(), Quantity.AREA_LOAD, us),
                         num(v.live(), Quantity.AREA_LOAD, us), num(v.roofLive(), Quantity.AREA_LOAD, us),
-                        num(v.snow(), Quantity.AREA_LOAD, us), num(carriedDead(v, st), Quantity.AREA_LOAD, us),
-                        num(carriedLive(v, st), Quantity.AREA_LOAD, us));
+                        num(v.snow(), Quantity.AREA_LOAD, us), num(carriedDead(v, partitionAsDead), Quantity.AREA_LOAD, us),
+                        num(carriedLive(v, partitionAsDead), Quantity.AREA_LOAD, us));
             }
             if (fl.areaLoads().isEmpty()) {
                 t.row("(none)");
@@ -107,12 +106,12 @@ final class Summaries {
         }
     }
 
-    private static double carriedDead(LoadValues v, DesignSettings st) {
-        return v.dead() + v.superimposed() + (st.partitionAsDead() ? v.partition() : 0);
+    private static double carriedDead(LoadValues v, boolean partitionAsDead) {
+        return v.dead() + v.superimposed() + (partitionAsDead ? v.partition() : 0);
     }
 
-    private static double carriedLive(LoadValues v, DesignSettings st) {
-        return v.live() + (st.partitionAsDead() ? 0 : v.partition());
+    private static double carriedLive(LoadValues v, boolean partitionAsDead) {
+        return v.live() + (partitionAsDead ? 0 : v.partition());
     }
 
     private static String num(double si, Quantity q, UnitSystem us) {

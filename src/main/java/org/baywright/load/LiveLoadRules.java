@@ -1,0 +1,12 @@
+package org.baywright.load;
+
+/**
+ * How a run treats live load.
+ *
+ * @param reduce apply live-load reduction (ASCE 7-16 §4.7 floor live, §4.8 roof live)
+ * @param partitionAsDead carry the partition allowance (§4.3.2) as dead load instead of reducible live load
+ * @param girderAreaDelivered a girder's A_T is the deck area whose load it actually receives (true, the
+ *     conservative default) or, where larger, half the bay on each side (false)
+ */
+public record LiveLoadRules(boolean reduce, boolean partitionAsDead, boolean girderAreaDelivered) {
+}

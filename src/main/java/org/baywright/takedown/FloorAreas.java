@@ -1,0 +1,29 @@
+package org.baywright.takedown;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.baywright.geometry.FloorTributary;
+import org.baywright.geometry.GeometryProblem;
+import org.baywright.geometry.TributaryAnalysis;
+import org.baywright.plan.Problem;
+
+/**
+ * The second stage, per floor layout: the tributary areas of its members (one-way deck along the span
+ * direction), with the geometry's coverage problems located on the floor.
+ */
+public record FloorAreas(FloorTributary tributary, List<Problem> problems) {
+    public FloorAreas {
+        problems = List.copyOf(problems);
+    }
+
+    /** Computes the tributary areas of a layout's members on the grid {@link Takedown#GRID}. */
+    public static FloorAreas of(FloorInput in) {
+        FloorTributary trib = TributaryAnalysis.compute(in.floor(), in.members(), Takedown.GRID);
+        List<Problem> problems = new ArrayList<>();
+        for (GeometryProblem g : trib.problems()) {
+            problems.add(new Problem(Problem.Severity.ERROR, g.kind(), "floor " + in.floor().id(), g.objectId(), g.message(),
+                    g.where()));
+        }
+        return new FloorAreas(trib, problems);
+    }
+}

@@ -1,0 +1,213 @@
+package org.baywright.takedown;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import org.baywright.analysis.SpanLoad;
+import org.baywright.catalog.Section;
+import org.baywright.design.BeamCriteria;
+import org.baywright.design.BeamDesign;
+import org.baywright.design.MemberStatus;
+import org.baywright.geometry.FloorTributary;
+import org.baywright.geometry.MemberTributary;
+import org.baywright.geometry.TributaryAnalysis;
+import org.baywright.load.LoadCase;
+import org.baywright.plan.Deck;
+import org.baywright.plan.Floor;
+import org.baywright.plan.Member;
+import org.baywright.plan.MemberKind;
+import org.baywright.plan.Problem;
+import org.baywright.takedown.MemberLoads.Incoming;
+import org.baywright.takedown.SupportGraph.Ends;
+import org.baywright.takedown.SupportGraph.Support;
+
+/**
+ * The fourth stage, per floor layout: every member designed in the order of its {@link SupportGraph},
+ * its reactions passed on unreduced to the member or column that supports it. For each member in turn:
+ * its loads ({@link MemberLoads}), its live-load reduction ({@link MemberReduction}), its bracing, the
+ * lightest-section search or the check of its fixed size ({@link Searches}), and its reactions.
+ */
+public final class FloorDesigner {
+    private static final int NC = Component.values().length;
+
+    /**
+     * What a member hands on with its reactions: the largest live intensities it received, and the deck
+     * area whose load it carries with the part of it that goes to its start end.
+     */
+    private record Handoff(double[] l0, double startShare, double delivered) {
+        static final Handoff NONE = new Handoff(new double[NC], 0.5, 0);
+    }
+
+    /** A member as designed and what it hands on. */
+    private record Designed(MemberResult result, Handoff handoff) {
+    }
+
+    private final FloorInput in;
+    private final Floor floor;
+    private final FloorTributary trib;
+    private final FloorRules rules;
+    private final Searches searches;
+    private final Map<String, List<Incoming>> incoming = new HashMap<>();
+    private final Map<String, double[]> columnLoads = new LinkedHashMap<>();
+    private final Map<String, Double> columnArea = new LinkedHashMap<>();
+    private final Map<String, double[]> columnL0 = new LinkedHashMap<>();
+    private final List<Problem> problems = new ArrayList<>();
+    private FloorTributary halfBay;
+
+    private FloorDesigner(FloorInput in, FloorTributary trib, FloorRules rules, Searches searches) {
+        this.in = in;
+        this.floor = in.floor();
+        this.trib = trib;
+        this.rules = rules;
+        this.searches = searches;
+    }
+
+    /**
+     * Designs a layout's members in order.
+     *
+     * @param areas the layout's tributary areas (stage 2)
+     * @param graph its support graph (stage 3)
+     * @param searches the run's searches, shared by its floors
+     */
+    public static FloorDesign design(FloorInput in, FloorAreas areas, SupportGraph graph, FloorRules rules, Searches searches) {
+        FloorDesigner d = new FloorDesigner(in, areas.tributary(), rules, searches);
+        d.problems.addAll(in.leftOut());
+        d.problems.addAll(areas.problems());
+        d.problems.addAll(graph.problems());
+        Map<String, Member> byId = in.byId();
+        Map<String, MemberResult> results = new LinkedHashMap<>();
+        for (String id : graph.inLoop()) {
+            results.put(id, d.notDesigned(byId.get(id), graph.ends().get(id)));
+        }
+        for (String id : graph.order()) {
+            Ends ends = graph.ends().get(id);
+            Designed m = d.member(byId.get(id), ends);
+            results.put(id, m.result());
+            d.passOn(m, ends);
+        }
+        return new FloorDesign(List.copyOf(results.values()), Collections.unmodifiableMap(d.columnLoads),
+                Collections.unmodifiableMap(d.columnArea), Collections.unmodifiableMap(d.columnL0), d.trib.loadedArea(),
+                d.trib.areaLoadAreas(), List.copyOf(d.problems));
+    }
+
+    /** Designs one member whose framing members are all designed. */
+    private Designed member(Member m, Ends ends) {
+        if (!ends.supported()) {
+            return new Designed(notDesigned(m, ends), Handoff.NONE);
+        }
+        double span = m.length();
+        MemberLoads loads = MemberLoads.of(m, floor, trib, incoming.getOrDefault(m.id(), List.of()),
+                rules.liveLoad().partitionAsDead());
+        MemberReduction reduction = MemberReduction.of(loads, reductionArea(m, loads), kll(m), rules.liveLoad().reduce());
+        BeamCriteria criteria = new BeamCriteria(rules.method(), rules.steel(), loads.bracing(m.kind()), rules.deflection(), true);
+        Searches.Sized sized = size(m, reduction, loads, criteria);
+        BeamDesign d = sized.design();
+        MemberLoads.Reactions rx = loads.reactions(span, d.section());
+        MemberTributary mt = trib.members().get(m.id());
+        MemberResult r = new MemberResult(m.id(), floor.id(), m.kind(), m.start(), m.end(), span, d.status(), d,
+                loads.ownArea(), reduction.area(), reduction.kll(), reduction.ordinaryLive(), rx.start(), rx.end(),
+                ends.start().describe(), ends.end().describe(), mt == null ? List.of() : mt.polygons(), sized.loads(), criteria);
+        return new Designed(r, new Handoff(loads.l0(), loads.startShare(), loads.deliveredArea()));
+    }
+
+    /** The search, or the check of the member's fixed size when the catalog has it; problems for what went wrong. */
+    private Searches.Sized size(Member m, MemberReduction reduction, MemberLoads loads, BeamCriteria criteria) {
+        double span = m.length();
+        Optional<String> fixed = m.fixedSection();
+        Optional<Section> fixedSection = fixed.flatMap(searches.catalog()::find);
+        Map<LoadCase, List<SpanLoad>> caseLoads = reduction.apply(loads);
+        Searches.Sized sized;
+        if (fixedSection.isPresent()) {
+            sized = searches.check(fixedSection.get(), span, caseLoads, criteria);
+        } else {
+            if (fixed.isPresent()) {
+                problems.add(new Problem(Problem.Severity.ERROR, "unknown-section", "floor " + floor.id(), m.id(),
+                        "member " + m.id() + ": section " + fixed.get() + " is not in the catalog " + searches.catalog().name()
+                                + "; the member was sized instead", List.of(m.start(), m.end())));
+            }
+            sized = searches.search(span, caseLoads, criteria,
+                    m.kind() == MemberKind.GIRDER ? rules.girders() : rules.beams());
+        }
+        BeamDesign d = sized.design();
+        if (d.status() == MemberStatus.OVERSTRESSED) {
+            problems.add(new Problem(Problem.Severity.ERROR, "overstressed", "floor " + floor.id(), m.id(),
+                    "member " + m.id() + (d.section() == null ? ": no section is allowed by the filters"
+                            : ": " + (fixed.isPresent() ? "the fixed size " : "no section passes; closest ")
+                                    + d.section().designation() + " at ratio " + String.format(Locale.ROOT, "%.2f", d.maxRatio())),
+                    List.of(m.start(), m.end())));
+        }
+        return sized;
+    }
+
+    /** Passes a member's reactions to what supports each end, with the deck area and live intensities behind them. */
+    private void passOn(Designed m, Ends ends) {
+        MemberResult r = m.result();
+        Handoff h = m.handoff();
+        for (int end = 0; end < 2; end++) {
+            Support s = ends.at(end);
+            double[] rx = end == 0 ? r.startReaction() : r.endReaction();
+            // the deck area actually delivered passes on (never a girder's half-bay A_T, which would count
+            // the same deck twice in the columns' A_T)
+            double area = end == 0 ? h.delivered() * h.startShare() : h.delivered() * (1 - h.startShare());
+            if (s.member() != null) {
+                incoming.computeIfAbsent(s.member(), k -> new ArrayList<>()).add(new Incoming(s.position(), rx, area, h.l0()));
+            } else if (s.column() != null) {
+                double[] acc = columnLoads.computeIfAbsent(s.column(), k -> new double[NC]);
+                for (int c = 0; c < NC; c++) {
+                    acc[c] += rx[c];
+                }
+                columnArea.merge(s.column(), area, Double::sum);
+                double[] l0 = columnL0.computeIfAbsent(s.column(), k -> new double[NC]);
+                for (int c = 0; c < NC; c++) {
+                    l0[c] = Math.max(l0[c], h.l0()[c]);
+                }
+            }
+        }
+    }
+
+    private MemberResult notDesigned(Member m, Ends ends) {
+        return new MemberResult(m.id(), floor.id(), m.kind(), m.start(), m.end(), m.length(), MemberStatus.UNSUPPORTED, null,
+                0, 0, 0, 1, new double[NC], new double[NC], ends.start().describe(), ends.end().describe(), List.of(), null,
+                null);
+    }
+
+    /**
+     * A_T of a member: the area whose load it receives; for a girder with {@code girderAreaDelivered}
+     * off, half the bay on each side where that is larger.
+     */
+    private double reductionArea(Member m, MemberLoads loads) {
+        double at = loads.deliveredArea();
+        if (m.kind() == MemberKind.GIRDER && !rules.liveLoad().girderAreaDelivered()) {
+            MemberTributary half = halfBay().members().get(m.id());
+            if (half != null && half.area() > at) {
+                at = half.area();
+            }
+        }
+        return at;
+    }
+
+    /** Tributary areas with every deck turned 90°: girders then take half the bay on each side. */
+    private FloorTributary halfBay() {
+        if (halfBay == null) {
+            List<Deck> decks = new ArrayList<>();
+            List<Deck> src = floor.decks().isEmpty() ? List.of(new Deck("slab", floor.slabEdge(), 0)) : floor.decks();
+            for (Deck d : src) {
+                decks.add(new Deck(d.id(), d.outline(), d.spanAngle() + 90));
+            }
+            Floor turned = new Floor(floor.id(), floor.name(), floor.roof(), floor.slabEdge(), decks, floor.members(),
+                    floor.infills(), floor.openings(), floor.areaLoads(), List.of(), List.of());
+            halfBay = TributaryAnalysis.compute(turned, in.members(), Takedown.GRID);
+        }
+        return halfBay;
+    }
+
+    /** K_LL of a beam or girder (ASCE 7-16 Table 4.7-1): 1 for an edge member with a cantilever slab beyond it, else 2. */
+    private double kll(Member m) {
+        return SlabEdges.isEdgeWithCantilever(floor, in.members(), m, Takedown.CANTILEVER_SLAB, Takedown.TOLERANCE) ? 1 : 2;
+    }
+}

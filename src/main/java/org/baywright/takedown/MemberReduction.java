@@ -1,0 +1,58 @@
+package org.baywright.takedown;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import org.baywright.analysis.SpanLoad;
+import org.baywright.load.LiveLoadReduction;
+import org.baywright.load.LoadCase;
+
+/**
+ * The live-load reduction of one member by its own A_T and K_LL (ASCE 7-16 §4.7; roof live load §4.8).
+ *
+ * @param area A_T, m²
+ * @param kll the live-load element factor (Table 4.7-1)
+ * @param factor the reduction factor per {@link Component} ordinal (1 = none)
+ */
+record MemberReduction(double area, double kll, double[] factor) {
+
+    /** The factors for a member's loads; all 1 when reduction is off. */
+    static MemberReduction of(MemberLoads loads, double area, double kll, boolean reduce) {
+        double[] factor = new double[Component.values().length];
+        Arrays.fill(factor, 1.0);
+        if (reduce) {
+            double[] l0 = loads.l0();
+            for (Component c : Component.values()) {
+                if (c.isLive() && !loads.byComponent().get(c.ordinal()).isEmpty()) {
+                    factor[c.ordinal()] = LiveLoadReduction.floor(Math.max(l0[c.ordinal()], 1e-9), kll, area, 1,
+                            c.reducibleUse(), null).factor();
+                }
+            }
+            if (!loads.byComponent().get(Component.LR.ordinal()).isEmpty()) {
+                factor[Component.LR.ordinal()] = LiveLoadReduction.roof(Math.max(l0[Component.LR.ordinal()], 1e-9), area, 0,
+                        null).factor();
+            }
+        }
+        return new MemberReduction(area, kll, factor);
+    }
+
+    /** The member's service loads by load case, each component scaled by its factor. */
+    Map<LoadCase, List<SpanLoad>> apply(MemberLoads loads) {
+        Map<LoadCase, List<SpanLoad>> caseLoads = new EnumMap<>(LoadCase.class);
+        for (Component c : Component.values()) {
+            List<SpanLoad> list = caseLoads.computeIfAbsent(c.loadCase(), k -> new ArrayList<>());
+            double f = factor[c.ordinal()];
+            for (SpanLoad l : loads.byComponent().get(c.ordinal())) {
+                list.add(f == 1.0 ? l : l.scaled(f));
+            }
+        }
+        return caseLoads;
+    }
+
+    /** The factor of ordinary floor live load. */
+    double ordinaryLive() {
+        return factor[Component.L_ORDINARY.ordinal()];
+    }
+}

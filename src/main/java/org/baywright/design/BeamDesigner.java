@@ -331,17 +331,8 @@ public final class BeamDesigner {
      * cannot govern (the search needs the governing check, nothing more).
      */
     private Outcome evaluate(Calc calc, Section s, Strengths st, Trial t, boolean search) {
-        Steel steel = criteria.steel();
         double w = selfWeight(s);
-        IShapeFlexure.Constants k = st.flexure();
-        if (calc != null) {
-            calc.heading("Section " + s.designation());
-            calc.value("Fy", steel.fy(), Quantity.STRESS, steel.name(), CLAUSE_A3_1,
-                    Arg.of("E", steel.e(), Quantity.STRESS));
-            calc.value("wsw", w, Quantity.LINE_LOAD, criteria.selfWeight() ? "self-weight: nominal weight of "
-                    + s.designation() + ", added to D" : "self-weight not added: the dead load is taken to include it", "");
-            k = IShapeFlexure.constants(s, steel.fy(), steel.e(), calc);
-        }
+        IShapeFlexure.Constants k = calc == null ? st.flexure() : recordSection(calc, s, w);
 
         // Flexure, every combination and unbraced segment
         int segments = bounds.length - 1;
@@ -376,6 +367,16 @@ public final class BeamDesigner {
         return governs(t.total, governs(t.live, governs(t.shear, t.flexure)));
     }
 
+    /** Records the section's data and its length-independent flexural constants (F2, F3, Table B4.1b). */
+    private IShapeFlexure.Constants recordSection(Calc calc, Section s, double w) {
+        Steel steel = criteria.steel();
+        calc.heading("Section " + s.designation());
+        calc.value("Fy", steel.fy(), Quantity.STRESS, steel.name(), CLAUSE_A3_1, Arg.of("E", steel.e(), Quantity.STRESS));
+        calc.value("wsw", w, Quantity.LINE_LOAD, criteria.selfWeight() ? "self-weight: nominal weight of "
+                + s.designation() + ", added to D" : "self-weight not added: the dead load is taken to include it", "");
+        return IShapeFlexure.constants(s, steel.fy(), steel.e(), calc);
+    }
+
     /** The governing of two checks, {@code o} when it is active and its ratio is higher or NaN (the rule of {@link Check#governing}). */
     private static Outcome governs(Outcome o, Outcome g) {
         return o.active && (o.ratio > g.ratio || Double.isNaN(o.ratio)) ? o : g;
@@ -389,19 +390,13 @@ public final class BeamDesigner {
      */
     private void flexure(Calc calc, IShapeFlexure.Constants k, double w, int c, int seg, double[] m, Outcome o) {
         boolean continuous = criteria.bracing().isContinuous();
-        boolean lrfd = criteria.method() == DesignMethod.LRFD;
         double a = bounds[seg];
         double b = bounds[seg + 1];
         maxMoment(c, w, a, b, m);
         double mu = Math.abs(m[0]);
         double lb = continuous ? 0 : b - a;
         if (calc != null) {
-            LoadCombination combo = combos.get(c);
-            calc.heading("Flexure under " + combo.name() + " (" + combo.reference() + ")"
-                    + (bounds.length > 2 ? ", unbraced segment " + (seg + 1) + " of " + (bounds.length - 1) : ""));
-            calc.value(lrfd ? "Mu" : "Ma", mu, Quantity.MOMENT, "maximum in the segment (statics of the simple span)", "",
-                    Arg.of("x", m[1], Quantity.SPAN_LENGTH));
-            calc.value("Lb", lb, Quantity.SPAN_LENGTH, lb == 0 ? "compression flange braced continuously" : "unbraced length", "");
+            recordMoment(calc, c, seg, mu, m[1], lb);
         }
         double cb = 1.0;
         if (!continuous) {
@@ -420,12 +415,29 @@ public final class BeamDesigner {
         o.lb = lb;
         o.cb = cb;
         if (calc != null) {
-            calc.eq(lrfd ? "φb·Mn" : "Mn/Ωb", lrfd ? "φb·Mn" : "Mn/Ωb", CLAUSE_F1, avail, Quantity.MOMENT,
-                    Arg.num(lrfd ? "φb" : "Ωb", lrfd ? ResistanceFactors.PHI_B : ResistanceFactors.OMEGA_B),
-                    Arg.of("Mn", mn, Quantity.MOMENT));
-            calc.eq("ratio", "M_req/M_avail", flexureClause(k), ratio, Quantity.NUMBER,
-                    Arg.of("M_req", mu, Quantity.MOMENT), Arg.of("M_avail", avail, Quantity.MOMENT));
+            recordFlexureRatio(calc, k, mn, avail, mu, ratio);
         }
+    }
+
+    // The recording halves of the flexure and shear functions, apart so that the functions stay small for the compiler.
+
+    private void recordMoment(Calc calc, int c, int seg, double mu, double x, double lb) {
+        boolean lrfd = criteria.method() == DesignMethod.LRFD;
+        LoadCombination combo = combos.get(c);
+        calc.heading("Flexure under " + combo.name() + " (" + combo.reference() + ")"
+                + (bounds.length > 2 ? ", unbraced segment " + (seg + 1) + " of " + (bounds.length - 1) : ""));
+        calc.value(lrfd ? "Mu" : "Ma", mu, Quantity.MOMENT, "maximum in the segment (statics of the simple span)", "",
+                Arg.of("x", x, Quantity.SPAN_LENGTH));
+        calc.value("Lb", lb, Quantity.SPAN_LENGTH, lb == 0 ? "compression flange braced continuously" : "unbraced length", "");
+    }
+
+    private void recordFlexureRatio(Calc calc, IShapeFlexure.Constants k, double mn, double avail, double mu, double ratio) {
+        boolean lrfd = criteria.method() == DesignMethod.LRFD;
+        calc.eq(lrfd ? "φb·Mn" : "Mn/Ωb", lrfd ? "φb·Mn" : "Mn/Ωb", CLAUSE_F1, avail, Quantity.MOMENT,
+                Arg.num(lrfd ? "φb" : "Ωb", lrfd ? ResistanceFactors.PHI_B : ResistanceFactors.OMEGA_B),
+                Arg.of("Mn", mn, Quantity.MOMENT));
+        calc.eq("ratio", "M_req/M_avail", flexureClause(k), ratio, Quantity.NUMBER,
+                Arg.of("M_req", mu, Quantity.MOMENT), Arg.of("M_avail", avail, Quantity.MOMENT));
     }
 
     private static String flexureClause(IShapeFlexure.Constants k) {
@@ -437,18 +449,13 @@ public final class BeamDesigner {
      * shear is at a support, the larger end reaction (own weight in D).
      */
     private void shear(Calc calc, Section s, IShapeShear.Strength vs, double w, int c, Outcome o) {
-        boolean lrfd = criteria.method() == DesignMethod.LRFD;
         double sw = comboDeadFactor[c] * w * span / 2;
         double r1 = Math.abs(comboSpans[c].leftReaction() + sw);
         double r2 = Math.abs(comboSpans[c].rightReaction() + sw);
         double v = Math.max(r1, r2);
         double x = r1 >= r2 ? 0 : span;
         if (calc != null) {
-            Steel steel = criteria.steel();
-            calc.heading("Shear under " + combos.get(c).name());
-            vs = IShapeShear.strength(s, steel.fy(), steel.e(), calc);
-            calc.value(lrfd ? "Vu" : "Va", v, Quantity.FORCE, "at the " + (x == 0 ? "left" : "right") + " support"
-                    + " (statics of the simple span)", "");
+            vs = recordShear(calc, s, c, v, x);
         }
         double vAvail = criteria.method().available(vs.vn(), vs.phi(), vs.omega());
         o.demand = v;
@@ -457,11 +464,26 @@ public final class BeamDesigner {
         o.position = x;
         o.combination = c;
         if (calc != null) {
-            calc.eq(lrfd ? "φv·Vn" : "Vn/Ωv", lrfd ? "φv·Vn" : "Vn/Ωv", CLAUSE_G1, vAvail, Quantity.FORCE,
-                    Arg.num(lrfd ? "φv" : "Ωv", lrfd ? vs.phi() : vs.omega()), Arg.of("Vn", vs.vn(), Quantity.FORCE));
-            calc.eq("ratio", "V_req/V_avail", vs.caseA() ? CLAUSE_G2_1_A : CLAUSE_G2_1_B, o.ratio, Quantity.NUMBER,
-                    Arg.of("V_req", v, Quantity.FORCE), Arg.of("V_avail", vAvail, Quantity.FORCE));
+            recordShearRatio(calc, vs, vAvail, v, o.ratio);
         }
+    }
+
+    /** Records the heading, the shear strength of the section (G2.1) and the demand; returns the strength. */
+    private IShapeShear.Strength recordShear(Calc calc, Section s, int c, double v, double x) {
+        Steel steel = criteria.steel();
+        calc.heading("Shear under " + combos.get(c).name());
+        IShapeShear.Strength vs = IShapeShear.strength(s, steel.fy(), steel.e(), calc);
+        calc.value(criteria.method() == DesignMethod.LRFD ? "Vu" : "Va", v, Quantity.FORCE, "at the "
+                + (x == 0 ? "left" : "right") + " support" + " (statics of the simple span)", "");
+        return vs;
+    }
+
+    private void recordShearRatio(Calc calc, IShapeShear.Strength vs, double vAvail, double v, double ratio) {
+        boolean lrfd = criteria.method() == DesignMethod.LRFD;
+        calc.eq(lrfd ? "φv·Vn" : "Vn/Ωv", lrfd ? "φv·Vn" : "Vn/Ωv", CLAUSE_G1, vAvail, Quantity.FORCE,
+                Arg.num(lrfd ? "φv" : "Ωv", lrfd ? vs.phi() : vs.omega()), Arg.of("Vn", vs.vn(), Quantity.FORCE));
+        calc.eq("ratio", "V_req/V_avail", vs.caseA() ? CLAUSE_G2_1_A : CLAUSE_G2_1_B, ratio, Quantity.NUMBER,
+                Arg.of("V_req", v, Quantity.FORCE), Arg.of("V_avail", vAvail, Quantity.FORCE));
     }
 
     /** Live-load deflection under the service live loads against L/n (project criteria, IBC Table 1604.3). */

@@ -33,6 +33,14 @@ import org.baywright.load.LoadCombination;
  * over the span. All loads must act downward, so that moment diagrams are concave: the maximum
  * moment in an unbraced segment is then at its ends or at the single point of zero shear.
  *
+ * <p>One flow computes and records: each check is one function (flexure of one unbraced segment under
+ * one combination, shear under one combination, live- and total-load deflection) that takes a
+ * {@link Calc} which may be null. The search calls them without a recorder for every candidate; the
+ * calculation sheet of the chosen section comes from calling the same functions again with a recorder
+ * for the governing combination and segment, so the sheet prints the numbers the decision used. The
+ * governing combination is chosen by {@link Combinations#governing(double[])}; pass or fail by
+ * {@link Check#passes(double)}.
+ *
  * <p>Tie-break: among equal nominal weights the shallower section (smaller d) is tried first, then
  * the designation in alphabetical order ({@link Catalog#SEARCH_ORDER}).
  */
@@ -59,7 +67,6 @@ public final class BeamDesigner {
     private final SimpleSpan[] comboSpans;
     private final double[] comboDeadFactor;
     private final double[] bounds;
-    private final SimpleSpan liveSpan;
     private final SimpleSpan totalSpan;
     private final double liveDeflectionEi;
     private final double liveDeflectionAt;
@@ -97,7 +104,7 @@ public final class BeamDesigner {
         for (int i = 0; i < fr.length; i++) {
             bounds[i] = fr[i] * span;
         }
-        this.liveSpan = SimpleSpan.combine(new double[] {0, 1, 1, 1}, caseSpans);
+        SimpleSpan liveSpan = SimpleSpan.combine(new double[] {0, 1, 1, 1}, caseSpans);
         this.totalSpan = SimpleSpan.combine(new double[] {1, 1, 1, 1}, caseSpans);
         org.baywright.analysis.Extreme ld = liveSpan.maxDeflection(1.0);
         this.liveDeflectionEi = ld.value();

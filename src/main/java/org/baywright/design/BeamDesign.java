@@ -22,7 +22,7 @@ public record BeamDesign(MemberStatus status, Section section, List<Check> check
 
     /** The governing (highest-ratio) check. */
     public Check governing() {
-        return BeamDesigner.governing(checks);
+        return Check.governing(checks);
     }
 
     /** The highest ratio of all checks. */

@@ -1,6 +1,7 @@
 package org.baywright.design;
 
 import java.util.ArrayList;
+import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
@@ -32,6 +33,14 @@ import org.baywright.load.LoadCombination;
  * over the span. All loads must act downward, so that moment diagrams are concave: the maximum
  * moment in an unbraced segment is then at its ends or at the single point of zero shear.
  *
+ * <p>One flow computes and records: each check is one function (flexure of one unbraced segment under
+ * one combination, shear under one combination, live- and total-load deflection) that takes a
+ * {@link Calc} which may be null. The search calls them without a recorder for every candidate; the
+ * calculation sheet of the chosen section comes from calling the same functions again with a recorder
+ * for the governing combination and segment, so the sheet prints the numbers the decision used. The
+ * governing combination is chosen by {@link Combinations#governing(double[])}; pass or fail by
+ * {@link Check#passes(double)}.
+ *
  * <p>Tie-break: among equal nominal weights the shallower section (smaller d) is tried first, then
  * the designation in alphabetical order ({@link Catalog#SEARCH_ORDER}).
  */
@@ -58,17 +67,16 @@ public final class BeamDesigner {
     private final SimpleSpan[] comboSpans;
     private final double[] comboDeadFactor;
     private final double[] bounds;
-    private final SimpleSpan liveSpan;
     private final SimpleSpan totalSpan;
     private final double liveDeflectionEi;
     private final double liveDeflectionAt;
     private final double totalDeflectionEi;
-    private final String liveName;
-    private final String totalName;
-    private final String totalNameSw;
+    private final LoadCombination liveCombination;
+    private final LoadCombination totalCombination;
+    private final LoadCombination totalCombinationSw;
     private final String liveNote;
     private final String totalNote;
-    private final String[] segmentNotes;
+    private final UnbracedSegment[] segments;
 
     public BeamDesigner(BeamLoads loads, BeamCriteria criteria) {
         this.loads = loads;
@@ -96,27 +104,43 @@ public final class BeamDesigner {
         for (int i = 0; i < fr.length; i++) {
             bounds[i] = fr[i] * span;
         }
-        this.liveSpan = SimpleSpan.combine(new double[] {0, 1, 1, 1}, caseSpans);
+        SimpleSpan liveSpan = SimpleSpan.combine(new double[] {0, 1, 1, 1}, caseSpans);
         this.totalSpan = SimpleSpan.combine(new double[] {1, 1, 1, 1}, caseSpans);
         org.baywright.analysis.Extreme ld = liveSpan.maxDeflection(1.0);
         this.liveDeflectionEi = ld.value();
         this.totalDeflectionEi = totalSpan.maxDeflection(1.0).value();
         this.liveDeflectionAt = ld.position();
-        StringBuilder ln = new StringBuilder();
+        // the service combinations of the deflection checks: the live cases present (L when none is), and D with them
+        Map<LoadCase, Double> live = new EnumMap<>(LoadCase.class);
         for (LoadCase c : new LoadCase[] {LoadCase.L, LoadCase.LR, LoadCase.S}) {
             if (present.contains(c)) {
-                ln.append(ln.length() == 0 ? "" : " + ").append(c.symbol());
+                live.put(c, 1.0);
             }
         }
-        this.liveName = ln.length() == 0 ? "L" : ln.toString();
-        this.totalName = "D + " + liveName;
-        this.totalNameSw = totalName + " + self-weight";
+        if (live.isEmpty()) {
+            live.put(LoadCase.L, 1.0);
+        }
+        Map<LoadCase, Double> total = new EnumMap<>(live);
+        total.put(LoadCase.D, 1.0);
+        this.liveCombination = new LoadCombination(serviceName(live), live, Combinations.SERVICE_REFERENCE);
+        this.totalCombination = new LoadCombination(serviceName(total), total, Combinations.SERVICE_REFERENCE);
+        this.totalCombinationSw = new LoadCombination(totalCombination.name() + " + self-weight", total,
+                Combinations.SERVICE_REFERENCE);
         this.liveNote = limitNote(criteria.deflection().live());
         this.totalNote = limitNote(criteria.deflection().total());
-        this.segmentNotes = new String[bounds.length - 1];
-        for (int i = 0; i < segmentNotes.length; i++) {
-            segmentNotes[i] = "segment " + (i + 1) + " of " + segmentNotes.length;
+        this.segments = new UnbracedSegment[bounds.length - 1];
+        for (int i = 0; i < segments.length; i++) {
+            segments[i] = new UnbracedSegment(i, segments.length, bounds[i], bounds[i + 1]);
         }
+    }
+
+    /** "D + L + Lr": the cases of a service combination, every factor 1. */
+    private static String serviceName(Map<LoadCase, Double> cases) {
+        StringBuilder b = new StringBuilder();
+        for (LoadCase c : cases.keySet()) {
+            b.append(b.length() == 0 ? "" : " + ").append(c.symbol());
+        }
+        return b.toString();
     }
 
     private static String limitNote(double n) {
@@ -136,21 +160,17 @@ public final class BeamDesigner {
         return combos;
     }
 
-    /** The check with the highest ratio. */
+    /** The check with the highest ratio; the same as {@link Check#governing(List)}, where it now lives. */
+    @Deprecated
     public static Check governing(List<Check> checks) {
-        Check g = null;
-        for (Check c : checks) {
-            if (g == null || c.ratio() > g.ratio() || Double.isNaN(c.ratio())) {
-                g = c;
-            }
-        }
-        return g;
+        return Check.governing(checks);
     }
 
     /** Searches {@code catalog} for the lightest section that passes every check. */
     public BeamDesign search(Catalog catalog, SearchFilter filter) {
         List<Rejection> rejected = new ArrayList<>();
         Steel steel = criteria.steel();
+        Trial t = new Trial();
         Section best = null;
         double bestRatio = Double.POSITIVE_INFINITY;
         int candidates = 0;
@@ -160,15 +180,13 @@ public final class BeamDesigner {
             }
             candidates++;
             Strengths st = strengths(s, steel);
-            IShapeFlexure.Constants k = st.flexure();
-            IShapeShear.Strength vs = st.shear();
-            int g = evaluate(s, k, vs, false);
-            if (ratio[g] <= 1.0 + 1e-9) {
+            Outcome g = evaluate(null, s, st, t, true);
+            if (Check.passes(g.ratio)) {
                 return new BeamDesign(MemberStatus.SIZED, s, check(s, null), rejected, candidates);
             }
-            rejected.add(new Rejection(s, toCheck(g, k, vs, criteria.selfWeight() ? s.weight() : 0)));
-            if (ratio[g] < bestRatio) {
-                bestRatio = ratio[g];
+            rejected.add(new Rejection(s, toCheck(g, st, selfWeight(s))));
+            if (g.ratio < bestRatio) {
+                bestRatio = g.ratio;
                 best = s;
             }
         }
@@ -181,34 +199,73 @@ public final class BeamDesigner {
     /** Checks a section the user chose (fixed size). */
     public BeamDesign checkFixed(Section s) {
         List<Check> checks = check(s, null);
-        return new BeamDesign(governing(checks).passes() ? MemberStatus.FIXED_SIZE : MemberStatus.OVERSTRESSED, s,
+        return new BeamDesign(Check.governing(checks).passes() ? MemberStatus.FIXED_SIZE : MemberStatus.OVERSTRESSED, s,
                 checks, List.of(), 1);
     }
 
-    /** The moment of combination {@code c} at {@code x} including a self-weight {@code w} (N/m, unfactored). */
-    private double moment(int c, double w, double x) {
-        return comboSpans[c].moment(x) + comboDeadFactor[c] * w * x * (span - x) / 2;
+    /**
+     * Every check of {@code s}: flexure, shear and, where their limits are set, live- and total-load
+     * deflection. With a recorder, the same evaluation writes the calculation sheet of the section
+     * (for each check, the lines of its governing combination and segment).
+     */
+    public List<Check> check(Section s, Calc calc) {
+        Strengths st = strengths(s, criteria.steel());
+        Trial t = new Trial();
+        evaluate(calc, s, st, t, false);
+        double w = selfWeight(s);
+        List<Check> out = new ArrayList<>(4);
+        out.add(toCheck(t.flexure, st, w));
+        out.add(toCheck(t.shear, st, w));
+        if (t.live.active) {
+            out.add(toCheck(t.live, st, w));
+        }
+        if (t.total.active) {
+            out.add(toCheck(t.total, st, w));
+        }
+        return out;
     }
 
+    // ---- the checks, one function each --------------------------------------------------------
+    // Each is called with calc = null by the search, for every candidate, and with a recorder for the
+    // sheet of the chosen section: the numbers the sheet prints are the numbers the decision used.
+
     /**
-     * Maximum moment on [a, b] of a concave moment diagram (all loads downward): at the single point
-     * of zero shear when it lies inside, otherwise at the end nearer to it. Writes value and position.
+     * Flexure of unbraced segment {@code segment} under combination {@code combination} (indices into
+     * {@link #combinations()} and the bracing's segments, 0 = continuous bracing's single one).
      */
-    private void maxMoment(int c, double w, double a, double b, double[] out) {
-        double k = comboDeadFactor[c] * w;
-        if (a == 0 && b == span) {
-            comboSpans[c].maxMomentWithUniform(k, out);
-            return;
-        }
-        comboSpans[c].maxMomentWithUniform(k, out);
-        double x = out[1];
-        if (x < a) {
-            out[0] = moment(c, w, a);
-            out[1] = a;
-        } else if (x > b) {
-            out[0] = moment(c, w, b);
-            out[1] = b;
-        }
+    Check flexure(Section s, int combination, int segment, Calc calc) {
+        Strengths st = strengths(s, criteria.steel());
+        Outcome o = new Outcome(FLEXURE);
+        flexure(calc, st.flexure(), selfWeight(s), combination, segment, new double[2], o);
+        return toCheck(o, st, selfWeight(s));
+    }
+
+    /** Shear under combination {@code combination}: the larger end reaction. */
+    Check shear(Section s, int combination, Calc calc) {
+        Strengths st = strengths(s, criteria.steel());
+        Outcome o = new Outcome(SHEAR);
+        shear(calc, s, st.shear(), selfWeight(s), combination, o);
+        return toCheck(o, st, selfWeight(s));
+    }
+
+    /** Live-load deflection (null when no live-load limit is set). */
+    Check liveDeflection(Section s, Calc calc) {
+        Strengths st = strengths(s, criteria.steel());
+        Outcome o = new Outcome(LIVE);
+        liveDeflection(calc, s, o);
+        return o.active ? toCheck(o, st, selfWeight(s)) : null;
+    }
+
+    /** Total-load deflection, own weight included when the criteria add it (null when no limit is set). */
+    Check totalDeflection(Section s, Calc calc) {
+        Strengths st = strengths(s, criteria.steel());
+        Outcome o = new Outcome(TOTAL);
+        totalDeflection(calc, s, selfWeight(s), Double.NaN, new double[2], o);
+        return o.active ? toCheck(o, st, selfWeight(s)) : null;
+    }
+
+    private double selfWeight(Section s) {
+        return criteria.selfWeight() ? s.weight() : 0;
     }
 
     private static Strengths strengths(Section s, Steel steel) {
@@ -225,228 +282,312 @@ public final class BeamDesigner {
         return t;
     }
 
-    // Scratch results of the last evaluation (a designer serves one thread).
-    private static final int FLEX = 0;
+    /** What a check is. */
+    private static final int FLEXURE = 0;
     private static final int SHEAR = 1;
     private static final int LIVE = 2;
     private static final int TOTAL = 3;
-    private final double[] demand = new double[4];
-    private final double[] capacity = new double[4];
-    private final double[] ratio = new double[4];
-    private final double[] position = new double[4];
-    private final int[] combo = new int[4];
-    private final boolean[] active = new boolean[4];
-    private double flexLb;
-    private double flexCb;
-    private int flexSeg;
-    private final double[] tmp = new double[2];
 
     /**
-     * Evaluates every check of {@code s} into the scratch arrays, with plain arithmetic (the hot path
-     * of the search). Returns the index of the governing check.
+     * The values of one check as a check function leaves them: plain fields, so that the search, which
+     * evaluates every candidate, allocates nothing per candidate.
      */
-    private int evaluate(Section s, IShapeFlexure.Constants k, IShapeShear.Strength vs, boolean exact) {
-        Steel steel = criteria.steel();
-        DesignMethod method = criteria.method();
-        double w = criteria.selfWeight() ? s.weight() : 0;
-        boolean continuous = criteria.bracing().isContinuous();
+    private static final class Outcome {
+        final int kind;
+        boolean active = true;
+        double demand;
+        double capacity;
+        double ratio;
+        double position;
+        int combination;
+        int segment;
+        double lb = Double.NaN;
+        double cb = Double.NaN;
 
-        // Flexure, every combination and unbraced segment
-        ratio[FLEX] = -1;
-        active[FLEX] = true;
-        double mnBraced = continuous ? IShapeFlexure.mn(k, 0, 1, null) : Double.NaN;
-        for (int c = 0; c < combos.size(); c++) {
-            for (int seg = 0; seg + 1 < bounds.length; seg++) {
-                double a = bounds[seg];
-                double b = bounds[seg + 1];
-                maxMoment(c, w, a, b, tmp);
-                double lb = continuous ? 0 : b - a;
-                double cb = 1.0;
-                double mn;
-                if (continuous) {
-                    mn = mnBraced;
-                } else {
-                    double q = (b - a) / 4;
-                    cb = BendingCoefficient.cb(tmp[0], moment(c, w, a + q), moment(c, w, a + 2 * q),
-                            moment(c, w, a + 3 * q), null);
-                    mn = IShapeFlexure.mn(k, lb, cb, null);
-                }
-                double avail = method.available(mn, ResistanceFactors.PHI_B, ResistanceFactors.OMEGA_B);
-                double r = Double.isNaN(mn) ? Double.POSITIVE_INFINITY : Math.abs(tmp[0]) / avail;
-                if (r > ratio[FLEX]) {
-                    ratio[FLEX] = r;
-                    demand[FLEX] = Math.abs(tmp[0]);
-                    capacity[FLEX] = avail;
-                    position[FLEX] = tmp[1];
-                    combo[FLEX] = c;
-                    flexLb = lb;
-                    flexCb = cb;
-                    flexSeg = seg;
-                }
+        Outcome(int kind) {
+            this.kind = kind;
+        }
+    }
+
+    /** The working space of one search or one check: an outcome for each combination (and segment). */
+    private final class Trial {
+        final Outcome[] flexures = new Outcome[combos.size() * (bounds.length - 1)];
+        final double[] flexureRatios = new double[flexures.length];
+        final Outcome[] shears = new Outcome[combos.size()];
+        final double[] shearRatios = new double[shears.length];
+        final Outcome live = new Outcome(LIVE);
+        final Outcome total = new Outcome(TOTAL);
+        final double[] moment = new double[2];
+        Outcome flexure;
+        Outcome shear;
+
+        Trial() {
+            for (int i = 0; i < flexures.length; i++) {
+                flexures[i] = new Outcome(FLEXURE);
+            }
+            for (int i = 0; i < shears.length; i++) {
+                shears[i] = new Outcome(SHEAR);
             }
         }
+    }
 
-        // Shear: with downward loads the largest shear is at a support
-        double vAvail = method.available(vs.vn(), vs.phi(), vs.omega());
-        ratio[SHEAR] = -1;
-        active[SHEAR] = true;
+    /**
+     * Evaluates every check of {@code s} into {@code t} and returns the governing one. With a recorder,
+     * writes the sheet: the section's data, then each check's governing case through the same check
+     * function. With {@code search}, the total-load deflection is only bounded when the bound shows it
+     * cannot govern (the search needs the governing check, nothing more).
+     */
+    private Outcome evaluate(Calc calc, Section s, Strengths st, Trial t, boolean search) {
+        double w = selfWeight(s);
+        IShapeFlexure.Constants k = calc == null ? st.flexure() : recordSection(calc, s, w);
+
+        // Flexure, every combination and unbraced segment
+        int segments = bounds.length - 1;
         for (int c = 0; c < combos.size(); c++) {
-            double sw = comboDeadFactor[c] * w * span / 2;
-            double r1 = Math.abs(comboSpans[c].leftReaction() + sw);
-            double r2 = Math.abs(comboSpans[c].rightReaction() + sw);
-            double v = Math.max(r1, r2);
-            if (v / vAvail > ratio[SHEAR]) {
-                ratio[SHEAR] = v / vAvail;
-                demand[SHEAR] = v;
-                capacity[SHEAR] = vAvail;
-                position[SHEAR] = r1 >= r2 ? 0 : span;
-                combo[SHEAR] = c;
+            for (int seg = 0; seg < segments; seg++) {
+                int i = c * segments + seg;
+                flexure(null, k, w, c, seg, t.moment, t.flexures[i]);
+                t.flexureRatios[i] = t.flexures[i].ratio;
             }
+        }
+        t.flexure = t.flexures[Combinations.governing(t.flexureRatios)];
+        if (calc != null) {
+            flexure(calc, k, w, t.flexure.combination, t.flexure.segment, t.moment, t.flexure);
+        }
+
+        // Shear, every combination
+        for (int c = 0; c < combos.size(); c++) {
+            shear(null, s, st.shear(), w, c, t.shears[c]);
+            t.shearRatios[c] = t.shears[c].ratio;
+        }
+        t.shear = t.shears[Combinations.governing(t.shearRatios)];
+        if (calc != null) {
+            shear(calc, s, st.shear(), w, t.shear.combination, t.shear);
         }
 
         // Deflections under service loads (project criteria)
-        double ei = steel.e() * s.props().ix();
-        DeflectionLimits dl = criteria.deflection();
-        active[LIVE] = dl.live() > 0;
-        if (active[LIVE]) {
-            demand[LIVE] = liveDeflectionEi / ei;
-            capacity[LIVE] = span / dl.live();
-            ratio[LIVE] = demand[LIVE] / capacity[LIVE];
-            position[LIVE] = liveDeflectionAt;
-        }
-        active[TOTAL] = dl.total() > 0;
-        if (active[TOTAL]) {
-            capacity[TOTAL] = span / dl.total();
-            if (!exact) {
-                // The sum of the two maxima bounds the maximum of the sum. When even that bound does
-                // not govern, the exact value cannot either, and the search needs only the governing check.
-                double bound = (totalDeflectionEi + w * 5 * span * span * span * span / 384) / ei / capacity[TOTAL];
-                double others = Math.max(ratio[FLEX], Math.max(ratio[SHEAR], active[LIVE] ? ratio[LIVE] : 0));
-                if (bound <= others) {
-                    ratio[TOTAL] = bound;
-                    demand[TOTAL] = Double.NaN;
-                    return governingIndex();
-                }
-            }
-            totalSpan.maxEiDeflectionWithUniform(w, tmp);
-            demand[TOTAL] = tmp[0] / ei;
-            capacity[TOTAL] = span / dl.total();
-            ratio[TOTAL] = demand[TOTAL] / capacity[TOTAL];
-            position[TOTAL] = tmp[1];
-        }
-        return governingIndex();
+        liveDeflection(calc, s, t.live);
+        double others = search ? Math.max(t.flexure.ratio, Math.max(t.shear.ratio, t.live.active ? t.live.ratio : 0))
+                : Double.NaN;
+        totalDeflection(calc, s, w, others, t.moment, t.total);
+
+        return governs(t.total, governs(t.live, governs(t.shear, t.flexure)));
     }
 
-    private int governingIndex() {
-        int g = FLEX;
-        for (int i = 1; i < 4; i++) {
-            if (active[i] && (ratio[i] > ratio[g] || Double.isNaN(ratio[i]))) {
-                g = i;
-            }
-        }
-        return g;
+    /** Records the section's data and its length-independent flexural constants (F2, F3, Table B4.1b). */
+    private IShapeFlexure.Constants recordSection(Calc calc, Section s, double w) {
+        Steel steel = criteria.steel();
+        calc.heading("Section " + s.designation());
+        calc.value("Fy", steel.fy(), Quantity.STRESS, steel.name(), CLAUSE_A3_1, Arg.of("E", steel.e(), Quantity.STRESS));
+        calc.value("wsw", w, Quantity.LINE_LOAD, criteria.selfWeight() ? "self-weight: nominal weight of "
+                + s.designation() + ", added to D" : "self-weight not added: the dead load is taken to include it", "");
+        return IShapeFlexure.constants(s, steel.fy(), steel.e(), calc);
     }
 
-    /** Builds the check record {@code i} of the last evaluation. */
-    private Check toCheck(int i, IShapeFlexure.Constants k, IShapeShear.Strength vs, double w) {
-        return switch (i) {
-            case FLEX -> new Check("flexure", demand[i], capacity[i], ratio[i], combos.get(combo[i]).name(),
-                    k.flange() == IShapeFlexure.FlangeClass.COMPACT ? CLAUSE_F2 : CLAUSE_F3, Quantity.MOMENT,
-                    position[i], flexLb, flexLb == 0 ? Double.NaN : flexCb,
-                    !k.webCompact() ? "noncompact web: AISC 360-16 F4 not implemented"
-                            : bounds.length > 2 ? segmentNotes[flexSeg] : "");
-            case SHEAR -> new Check("shear", demand[i], capacity[i], ratio[i], combos.get(combo[i]).name(),
-                    vs.caseA() ? CLAUSE_G2_1_A : CLAUSE_G2_1_B, Quantity.FORCE, position[i], Double.NaN,
-                    Double.NaN, (position[i] == 0 ? "left" : "right") + " support");
-            case LIVE -> new Check("live-load deflection", demand[i], capacity[i], ratio[i], liveName,
-                    DeflectionLimits.SOURCE, Quantity.SECTION_LENGTH, position[i], Double.NaN, Double.NaN,
-                    liveNote);
-            default -> new Check("total-load deflection", demand[i], capacity[i], ratio[i],
-                    w > 0 ? totalNameSw : totalName, DeflectionLimits.SOURCE, Quantity.SECTION_LENGTH,
-                    position[i], Double.NaN, Double.NaN, totalNote);
-        };
+    /** The governing of two checks, {@code o} when it is active and its ratio is higher or NaN (the rule of {@link Check#governing}). */
+    private static Outcome governs(Outcome o, Outcome g) {
+        return o.active && (o.ratio > g.ratio || Double.isNaN(o.ratio)) ? o : g;
     }
 
     /**
-     * Every check of {@code s}. With a recorder, also writes the calculation sheet of the section
-     * from the same equations.
+     * Flexure, AISC 360-16 F1–F3, of one unbraced segment under one strength combination: the largest
+     * moment in the segment (with the section's own weight in D), Cb from the moment diagram of the
+     * segment (F1-1), Mn for Lb and Cb, the available strength and the ratio. {@code m} is scratch for
+     * the moment and its position.
      */
-    public List<Check> check(Section s, Calc calc) {
-        Steel steel = criteria.steel();
-        Strengths st = strengths(s, steel);
-        IShapeFlexure.Constants k = st.flexure();
-        IShapeShear.Strength vs = st.shear();
-        evaluate(s, k, vs, true);
-        double w = criteria.selfWeight() ? s.weight() : 0;
-        List<Check> out = new ArrayList<>(4);
-        for (int i = 0; i < 4; i++) {
-            if (active[i]) {
-                out.add(toCheck(i, k, vs, w));
-            }
-        }
+    private void flexure(Calc calc, IShapeFlexure.Constants k, double w, int c, int seg, double[] m, Outcome o) {
+        boolean continuous = criteria.bracing().isContinuous();
+        double a = bounds[seg];
+        double b = bounds[seg + 1];
+        maxMoment(c, w, a, b, m);
+        double mu = Math.abs(m[0]);
+        double lb = continuous ? 0 : b - a;
         if (calc != null) {
-            record(calc, s, out, w);
+            recordMoment(calc, c, seg, mu, m[1], lb);
         }
-        return out;
-    }
-
-    /** Writes the calculation sheet of {@code s}, whose checks are {@code checks}. */
-    private void record(Calc calc, Section s, List<Check> checks, double w) {
-        Steel steel = criteria.steel();
-        boolean lrfd = criteria.method() == DesignMethod.LRFD;
-        calc.heading("Section " + s.designation());
-        calc.value("Fy", steel.fy(), Quantity.STRESS, steel.name(), CLAUSE_A3_1,
-                Arg.of("E", steel.e(), Quantity.STRESS));
-        calc.value("wsw", w, Quantity.LINE_LOAD, criteria.selfWeight() ? "self-weight: nominal weight of "
-                + s.designation() + ", added to D" : "self-weight not added: the dead load is taken to include it", "");
-        IShapeFlexure.Constants k = IShapeFlexure.constants(s, steel.fy(), steel.e(), calc);
-        Check flex = checks.get(0);
-        int c = combos.indexOf(combos.stream().filter(x -> x.name().equals(flex.combination())).findFirst().orElseThrow());
-        double lb = Double.isNaN(flex.lb()) ? 0 : flex.lb();
-        double a = criteria.bracing().isContinuous() ? 0 : bounds[flexSeg];
-        double b = criteria.bracing().isContinuous() ? span : bounds[flexSeg + 1];
-        recordFlexure(calc, c, flexSeg, a, b, w, new double[] {flex.demand(), flex.position()}, lb,
-                Double.isNaN(flex.cb()) ? 1 : flex.cb(), k, IShapeFlexure.mn(k, lb, Double.isNaN(flex.cb()) ? 1 : flex.cb(), null), lrfd);
-        calc.eq("ratio", "M_req/M_avail", flex.clause(), flex.ratio(), Quantity.NUMBER,
-                Arg.of("M_req", flex.demand(), Quantity.MOMENT), Arg.of("M_avail", flex.capacity(), Quantity.MOMENT));
-
-        Check shear = checks.get(1);
-        calc.heading("Shear under " + shear.combination());
-        IShapeShear.Strength vs = IShapeShear.strength(s, steel.fy(), steel.e(), calc);
-        calc.value(lrfd ? "Vu" : "Va", shear.demand(), Quantity.FORCE, "at the " + shear.note()
-                + " (statics of the simple span)", "");
-        calc.eq(lrfd ? "φv·Vn" : "Vn/Ωv", lrfd ? "φv·Vn" : "Vn/Ωv", CLAUSE_G1, shear.capacity(), Quantity.FORCE,
-                Arg.num(lrfd ? "φv" : "Ωv", lrfd ? vs.phi() : vs.omega()), Arg.of("Vn", vs.vn(), Quantity.FORCE));
-        calc.eq("ratio", "V_req/V_avail", shear.clause(), shear.ratio(), Quantity.NUMBER,
-                Arg.of("V_req", shear.demand(), Quantity.FORCE), Arg.of("V_avail", shear.capacity(), Quantity.FORCE));
-
-        for (Check d : checks.subList(2, checks.size())) {
-            calc.heading("Deflection (" + d.name() + ") under " + d.combination() + ", " + d.note());
-            calc.value("Δ", d.demand(), Quantity.SECTION_LENGTH, "statics of the simple span with E·Ix, Ix = "
-                    + "design value of " + s.designation(), "", Arg.of("x", d.position(), Quantity.SPAN_LENGTH));
-            double n = d.name().startsWith("live") ? criteria.deflection().live() : criteria.deflection().total();
-            calc.eq("Δ_allow", "L/n", DeflectionLimits.SOURCE, d.capacity(), Quantity.SECTION_LENGTH,
-                    Arg.of("L", span, Quantity.SPAN_LENGTH), Arg.num("n", n));
-            calc.eq("ratio", "Δ/Δ_allow", DeflectionLimits.SOURCE, d.ratio(), Quantity.NUMBER,
-                    Arg.of("Δ", d.demand(), Quantity.SECTION_LENGTH), Arg.of("Δ_allow", d.capacity(), Quantity.SECTION_LENGTH));
-        }
-    }
-
-    private void recordFlexure(Calc calc, int c, int seg, double a, double b, double w, double[] mm, double lb,
-            double cb, IShapeFlexure.Constants k, double mn, boolean lrfd) {
-        calc.heading("Flexure under " + combos.get(c).name() + " (" + combos.get(c).reference() + ")"
-                + (bounds.length > 2 ? ", unbraced segment " + (seg + 1) + " of " + (bounds.length - 1) : ""));
-        calc.value(lrfd ? "Mu" : "Ma", mm[0], Quantity.MOMENT, "maximum in the segment (statics of the simple span)", "",
-                Arg.of("x", mm[1], Quantity.SPAN_LENGTH));
-        calc.value("Lb", lb, Quantity.SPAN_LENGTH, lb == 0 ? "compression flange braced continuously" : "unbraced length", "");
-        if (lb > 0) {
+        double cb = 1.0;
+        if (!continuous) {
             double q = (b - a) / 4;
-            BendingCoefficient.cb(mm[0], moment(c, w, a + q), moment(c, w, a + 2 * q), moment(c, w, a + 3 * q), calc);
+            cb = BendingCoefficient.cb(m[0], moment(c, w, a + q), moment(c, w, a + 2 * q), moment(c, w, a + 3 * q), calc);
         }
-        IShapeFlexure.mn(k, lb, cb, calc);
-        calc.eq(lrfd ? "φb·Mn" : "Mn/Ωb", lrfd ? "φb·Mn" : "Mn/Ωb", CLAUSE_F1,
-                criteria.method().available(mn, ResistanceFactors.PHI_B, ResistanceFactors.OMEGA_B), Quantity.MOMENT,
+        double mn = IShapeFlexure.mn(k, lb, cb, calc);
+        double avail = criteria.method().available(mn, ResistanceFactors.PHI_B, ResistanceFactors.OMEGA_B);
+        double ratio = Double.isNaN(mn) ? Double.POSITIVE_INFINITY : mu / avail;
+        o.demand = mu;
+        o.capacity = avail;
+        o.ratio = ratio;
+        o.position = m[1];
+        o.combination = c;
+        o.segment = seg;
+        o.lb = lb;
+        o.cb = cb;
+        if (calc != null) {
+            recordFlexureRatio(calc, k, mn, avail, mu, ratio);
+        }
+    }
+
+    // The recording halves of the flexure and shear functions, apart so that the functions stay small for the compiler.
+
+    private void recordMoment(Calc calc, int c, int seg, double mu, double x, double lb) {
+        boolean lrfd = criteria.method() == DesignMethod.LRFD;
+        LoadCombination combo = combos.get(c);
+        calc.heading("Flexure under " + combo.name() + " (" + combo.reference() + ")"
+                + (bounds.length > 2 ? ", unbraced segment " + (seg + 1) + " of " + (bounds.length - 1) : ""));
+        calc.value(lrfd ? "Mu" : "Ma", mu, Quantity.MOMENT, "maximum in the segment (statics of the simple span)", "",
+                Arg.of("x", x, Quantity.SPAN_LENGTH));
+        calc.value("Lb", lb, Quantity.SPAN_LENGTH, lb == 0 ? "compression flange braced continuously" : "unbraced length", "");
+    }
+
+    private void recordFlexureRatio(Calc calc, IShapeFlexure.Constants k, double mn, double avail, double mu, double ratio) {
+        boolean lrfd = criteria.method() == DesignMethod.LRFD;
+        calc.eq(lrfd ? "φb·Mn" : "Mn/Ωb", lrfd ? "φb·Mn" : "Mn/Ωb", CLAUSE_F1, avail, Quantity.MOMENT,
                 Arg.num(lrfd ? "φb" : "Ωb", lrfd ? ResistanceFactors.PHI_B : ResistanceFactors.OMEGA_B),
                 Arg.of("Mn", mn, Quantity.MOMENT));
+        calc.eq("ratio", "M_req/M_avail", flexureClause(k), ratio, Quantity.NUMBER,
+                Arg.of("M_req", mu, Quantity.MOMENT), Arg.of("M_avail", avail, Quantity.MOMENT));
+    }
+
+    private static String flexureClause(IShapeFlexure.Constants k) {
+        return k.flange() == IShapeFlexure.FlangeClass.COMPACT ? CLAUSE_F2 : CLAUSE_F3;
+    }
+
+    /**
+     * Shear, AISC 360-16 G1 and G2.1, under one strength combination: with downward loads the largest
+     * shear is at a support, the larger end reaction (own weight in D).
+     */
+    private void shear(Calc calc, Section s, IShapeShear.Strength vs, double w, int c, Outcome o) {
+        double sw = comboDeadFactor[c] * w * span / 2;
+        double r1 = Math.abs(comboSpans[c].leftReaction() + sw);
+        double r2 = Math.abs(comboSpans[c].rightReaction() + sw);
+        double v = Math.max(r1, r2);
+        double x = r1 >= r2 ? 0 : span;
+        if (calc != null) {
+            vs = recordShear(calc, s, c, v, x);
+        }
+        double vAvail = criteria.method().available(vs.vn(), vs.phi(), vs.omega());
+        o.demand = v;
+        o.capacity = vAvail;
+        o.ratio = v / vAvail;
+        o.position = x;
+        o.combination = c;
+        if (calc != null) {
+            recordShearRatio(calc, vs, vAvail, v, o.ratio);
+        }
+    }
+
+    /** Records the heading, the shear strength of the section (G2.1) and the demand; returns the strength. */
+    private IShapeShear.Strength recordShear(Calc calc, Section s, int c, double v, double x) {
+        Steel steel = criteria.steel();
+        calc.heading("Shear under " + combos.get(c).name());
+        IShapeShear.Strength vs = IShapeShear.strength(s, steel.fy(), steel.e(), calc);
+        calc.value(criteria.method() == DesignMethod.LRFD ? "Vu" : "Va", v, Quantity.FORCE, "at the "
+                + (x == 0 ? "left" : "right") + " support" + " (statics of the simple span)", "");
+        return vs;
+    }
+
+    private void recordShearRatio(Calc calc, IShapeShear.Strength vs, double vAvail, double v, double ratio) {
+        boolean lrfd = criteria.method() == DesignMethod.LRFD;
+        calc.eq(lrfd ? "φv·Vn" : "Vn/Ωv", lrfd ? "φv·Vn" : "Vn/Ωv", CLAUSE_G1, vAvail, Quantity.FORCE,
+                Arg.num(lrfd ? "φv" : "Ωv", lrfd ? vs.phi() : vs.omega()), Arg.of("Vn", vs.vn(), Quantity.FORCE));
+        calc.eq("ratio", "V_req/V_avail", vs.caseA() ? CLAUSE_G2_1_A : CLAUSE_G2_1_B, ratio, Quantity.NUMBER,
+                Arg.of("V_req", v, Quantity.FORCE), Arg.of("V_avail", vAvail, Quantity.FORCE));
+    }
+
+    /** Live-load deflection under the service live loads against L/n (project criteria, IBC Table 1604.3). */
+    private void liveDeflection(Calc calc, Section s, Outcome o) {
+        double n = criteria.deflection().live();
+        o.active = n > 0;
+        if (!o.active) {
+            return;
+        }
+        o.demand = liveDeflectionEi / (criteria.steel().e() * s.props().ix());
+        o.capacity = span / n;
+        o.ratio = o.demand / o.capacity;
+        o.position = liveDeflectionAt;
+        recordDeflection(calc, s, "live-load deflection", liveCombination, liveNote, n, o);
+    }
+
+    /**
+     * Total-load deflection under the service dead and live loads (own weight included) against L/n.
+     * When {@code others} is a number (the search), the sum of the two maxima, which bounds the
+     * maximum of the sum, is kept instead of the exact value if even the bound does not exceed
+     * {@code others}: the exact value could not govern either.
+     */
+    private void totalDeflection(Calc calc, Section s, double w, double others, double[] m, Outcome o) {
+        double n = criteria.deflection().total();
+        o.active = n > 0;
+        if (!o.active) {
+            return;
+        }
+        double ei = criteria.steel().e() * s.props().ix();
+        o.capacity = span / n;
+        double bound = (totalDeflectionEi + w * 5 * span * span * span * span / 384) / ei / o.capacity;
+        if (bound <= others) {
+            o.ratio = bound;
+            o.demand = Double.NaN;
+            return;
+        }
+        totalSpan.maxEiDeflectionWithUniform(w, m);
+        o.demand = m[0] / ei;
+        o.ratio = o.demand / o.capacity;
+        o.position = m[1];
+        recordDeflection(calc, s, "total-load deflection", w > 0 ? totalCombinationSw : totalCombination, totalNote, n, o);
+    }
+
+    private void recordDeflection(Calc calc, Section s, String name, LoadCombination combo, String note, double n, Outcome o) {
+        if (calc == null) {
+            return;
+        }
+        calc.heading("Deflection (" + name + ") under " + combo.name() + ", " + note);
+        calc.value("Δ", o.demand, Quantity.SECTION_LENGTH, "statics of the simple span with E·Ix, Ix = "
+                + "design value of " + s.designation(), "", Arg.of("x", o.position, Quantity.SPAN_LENGTH));
+        calc.eq("Δ_allow", "L/n", DeflectionLimits.SOURCE, o.capacity, Quantity.SECTION_LENGTH,
+                Arg.of("L", span, Quantity.SPAN_LENGTH), Arg.num("n", n));
+        calc.eq("ratio", "Δ/Δ_allow", DeflectionLimits.SOURCE, o.ratio, Quantity.NUMBER,
+                Arg.of("Δ", o.demand, Quantity.SECTION_LENGTH), Arg.of("Δ_allow", o.capacity, Quantity.SECTION_LENGTH));
+    }
+
+    /** The check record of an outcome. */
+    private Check toCheck(Outcome o, Strengths st, double w) {
+        return switch (o.kind) {
+            case FLEXURE -> new Check("flexure", o.demand, o.capacity, o.ratio, combos.get(o.combination),
+                    flexureClause(st.flexure()), Quantity.MOMENT, o.position,
+                    criteria.bracing().isContinuous() ? null : segments[o.segment], o.lb, o.lb == 0 ? Double.NaN : o.cb,
+                    !st.flexure().webCompact() ? "noncompact web: AISC 360-16 F4 not implemented"
+                            : bounds.length > 2 ? segments[o.segment].label() : "");
+            case SHEAR -> new Check("shear", o.demand, o.capacity, o.ratio, combos.get(o.combination),
+                    st.shear().caseA() ? CLAUSE_G2_1_A : CLAUSE_G2_1_B, Quantity.FORCE, o.position, null, Double.NaN,
+                    Double.NaN, (o.position == 0 ? "left" : "right") + " support");
+            case LIVE -> new Check("live-load deflection", o.demand, o.capacity, o.ratio, liveCombination,
+                    DeflectionLimits.SOURCE, Quantity.SECTION_LENGTH, o.position, null, Double.NaN, Double.NaN, liveNote);
+            default -> new Check("total-load deflection", o.demand, o.capacity, o.ratio,
+                    w > 0 ? totalCombinationSw : totalCombination, DeflectionLimits.SOURCE, Quantity.SECTION_LENGTH,
+                    o.position, null, Double.NaN, Double.NaN, totalNote);
+        };
+    }
+
+    /** The moment of combination {@code c} at {@code x} including a self-weight {@code w} (N/m, unfactored). */
+    private double moment(int c, double w, double x) {
+        return comboSpans[c].moment(x) + comboDeadFactor[c] * w * x * (span - x) / 2;
+    }
+
+    /**
+     * Maximum moment on [a, b] of a concave moment diagram (all loads downward): at the single point
+     * of zero shear when it lies inside, otherwise at the end nearer to it. Writes value and position.
+     */
+    private void maxMoment(int c, double w, double a, double b, double[] out) {
+        double k = comboDeadFactor[c] * w;
+        comboSpans[c].maxMomentWithUniform(k, out);
+        if (a == 0 && b == span) {
+            return;
+        }
+        double x = out[1];
+        if (x < a) {
+            out[0] = moment(c, w, a);
+            out[1] = a;
+        } else if (x > b) {
+            out[0] = moment(c, w, b);
+            out[1] = b;
+        }
     }
 }

@@ -37,6 +37,61 @@ public final class Combinations {
         return cached;
     }
 
+    /**
+     * A governing combination and its combined value.
+     *
+     * @param combination the combination that governs
+     * @param index its position in the list it was chosen from
+     * @param value its combined value (N, or whatever the by-case values are)
+     */
+    public record Governing(LoadCombination combination, int index, double value) {
+    }
+
+    /**
+     * The value of combination {@code c} for values by load case ({@code byCase[LoadCase.ordinal()]}):
+     * the sum of factor × value, taken in the order of {@link LoadCase}.
+     */
+    public static double combine(LoadCombination c, double[] byCase) {
+        double v = 0;
+        for (LoadCase lc : LoadCase.values()) {
+            v += c.factor(lc) * byCase[lc.ordinal()];
+        }
+        return v;
+    }
+
+    /**
+     * The combination of {@code combos} that gives the largest combined value of {@code byCase} (by
+     * {@link #combine}), chosen by the rule of {@link #governing(double[])}. {@code combos} must not be empty.
+     */
+    public static Governing governing(double[] byCase, List<LoadCombination> combos) {
+        double[] values = new double[combos.size()];
+        for (int i = 0; i < values.length; i++) {
+            values[i] = combine(combos.get(i), byCase);
+        }
+        int g = governing(values);
+        return new Governing(combos.get(g), g, values[g]);
+    }
+
+    /**
+     * Which of several results governs, given one value per result (a combined load, a demand or a
+     * ratio; for a member, one per combination or per combination and unbraced segment): the index of
+     * the largest value. Of equal values the first governs, so the order of {@link #gravity} decides
+     * ties; a NaN never governs (0 is returned when no value is a number). This is the one rule every
+     * governing combination in Baywright is chosen by. Allocates nothing (the sizing search calls it
+     * for every candidate section).
+     */
+    public static int governing(double[] values) {
+        int g = 0;
+        double best = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < values.length; i++) {
+            if (values[i] > best) {
+                best = values[i];
+                g = i;
+            }
+        }
+        return g;
+    }
+
     private static final java.util.Map<Integer, List<LoadCombination>> CACHE = new java.util.concurrent.ConcurrentHashMap<>();
 
     private static List<LoadCombination> build(DesignMethod method, Set<LoadCase> present) {

@@ -95,8 +95,9 @@ public final class IShapeFlexure {
         }
         double ltb;
         if (lb <= k.lp()) {
-            Calc.branch(calc, (lb == 0 ? "Lb = 0 (continuously braced)" : "Lb ≤ Lp") + " → no lateral-torsional buckling",
-                    CLAUSE_F2_2_A);
+            // two whole constants, not a concatenation: the search calls this without a recorder for every candidate
+            Calc.branch(calc, lb == 0 ? "Lb = 0 (continuously braced) → no lateral-torsional buckling"
+                    : "Lb ≤ Lp → no lateral-torsional buckling", CLAUSE_F2_2_A);
             ltb = k.mp();
         } else if (lb <= k.lr()) {
             Calc.branch(calc, "Lp < Lb ≤ Lr → inelastic lateral-torsional buckling", CLAUSE_F2_2_B);

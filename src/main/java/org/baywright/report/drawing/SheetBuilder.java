@@ -721,15 +721,7 @@ final class SheetBuilder {
 
     /** The largest combined reaction of a set of combinations, N. */
     static double governing(double[] byCase, List<LoadCombination> combos) {
-        double best = 0;
-        for (LoadCombination c : combos) {
-            double v = 0;
-            for (LoadCase lc : LoadCase.values()) {
-                v += c.factor(lc) * byCase[lc.ordinal()];
-            }
-            best = Math.max(best, v);
-        }
-        return best;
+        return Math.max(0, Combinations.governing(byCase, combos).value());
     }
 
     private String serviceText(double[] byCase) {

@@ -199,19 +199,12 @@ final class MemberSheets {
 
     /** The strength combination that governs flexure (falls back on the first one). */
     static LoadCombination governingCombination(MemberResult m) {
-        List<LoadCombination> combos = Combinations.gravity(m.criteria().method(), m.loads().present());
-        String name = "";
         for (Check c : m.design().checks()) {
-            if (c.name().equals("flexure")) {
-                name = c.combination();
+            if (c.name().equals("flexure") && c.loadCombination() != null) {
+                return c.loadCombination();
             }
         }
-        for (LoadCombination c : combos) {
-            if (c.name().equals(name)) {
-                return c;
-            }
-        }
-        return combos.get(0);
+        return Combinations.gravity(m.criteria().method(), m.loads().present()).get(0);
     }
 
     /** The span under a combination, with the section's own weight as the check adds it. */

@@ -110,4 +110,20 @@ class MemberSheetTest {
                 ProjectInfo.named("Tower 塔 A", LocalDate.of(2025, 3, 14)), 0));
         assertTrue(pages.get(0).contains("Tower ? A"), pages.get(0));
     }
+
+    /**
+     * The shear and moment diagrams are drawn under the combination that governs flexure, taken from the
+     * flexure check itself. Light dead and heavy live load: 1.2D + 1.6L governs over 1.4D (ASCE 7-16
+     * §2.3.1, from memory); heavy dead load alone (live ≈ 0): 1.4D does.
+     */
+    @Test
+    void theDiagramsUseTheCombinationThatGovernsFlexure() {
+        MemberResult live = OneMemberRun.member("B-1", 30, 0.4, 1.0, "W18X50");
+        MemberResult dead = OneMemberRun.member("B-2", 30, 1.0, 0.01, "W18X50");
+        assertAll(
+                () -> assertEquals("1.2D + 1.6L", MemberSheets.governingCombination(live).name()),
+                () -> assertEquals("1.4D", MemberSheets.governingCombination(dead).name()),
+                () -> assertTrue(live.design().checks().stream().anyMatch(
+                        c -> c.loadCombination() == MemberSheets.governingCombination(live)), "the flexure check's own combination"));
+    }
 }

@@ -13,7 +13,6 @@ import org.baywright.design.aisc360.ResistanceFactors;
 import org.baywright.load.Combinations;
 import org.baywright.load.DesignMethod;
 import org.baywright.load.LoadCase;
-import org.baywright.load.LoadCombination;
 
 /**
  * Sizes the tiers of one column line, the lightest allowed section per tier: flexural buckling by AISC
@@ -25,7 +24,6 @@ import org.baywright.load.LoadCombination;
  * <p>Immutable and thread-safe: column lines are independent and may be designed in parallel.
  */
 public final class ColumnDesigner {
-    private static final double PASS = 1.0 + 1e-9;
 
     /**
      * The axial load in one storey from everything above, without the own weight of any column.
@@ -138,7 +136,7 @@ public final class ColumnDesigner {
         TierDesign best = null;
         for (Section s : candidates.sections()) {
             TierDesign d = check(tier, s, weightAbove, rejected);
-            if (d.maxRatio() <= PASS) {
+            if (Check.passes(d.maxRatio())) {
                 chosen = d;
                 break;
             }
@@ -151,7 +149,7 @@ public final class ColumnDesigner {
         if (given.isPresent()) {
             rejected.clear();
             TierDesign d = check(tier, given.get(), weightAbove, rejected);
-            chosen = d.maxRatio() <= PASS ? d.withStatus(MemberStatus.FIXED_SIZE) : null;
+            chosen = Check.passes(d.maxRatio()) ? d.withStatus(MemberStatus.FIXED_SIZE) : null;
             best = d;
         }
         if (chosen != null) {
@@ -186,18 +184,9 @@ public final class ColumnDesigner {
                 present.add(lc);
             }
         }
-        double req = 0;
-        String gov = "";
-        for (LoadCombination combo : Combinations.gravity(method, present)) {
-            double p = 0;
-            for (LoadCase lc : LoadCase.values()) {
-                p += combo.factor(lc) * reduced[lc.ordinal()];
-            }
-            if (p > req || gov.isEmpty()) {
-                req = p;
-                gov = combo.name();
-            }
-        }
+        Combinations.Governing g = Combinations.governing(reduced, Combinations.gravity(method, present));
+        double req = g.value();
+        String gov = g.combination().name();
         double avail = Double.NaN;
         if (s != null) {
             IShapeCompression.Strength st = IShapeCompression.strength(s, steel.fy(), steel.e(), d.height(), d.height(), null);

@@ -523,8 +523,7 @@ public final class EditorModel {
     /** The unit system the plan is written in. */
     public UnitSystem units() {
         Plan p = plan.get();
-        UnitSystem u = p == null ? null : UnitSystem.parse(p.units());
-        return u == null ? UnitSystem.US : u;
+        return p == null ? UnitSystem.US : org.baywright.run.DesignBasis.unitsOf(p);
     }
 
     public ReadOnlyObjectProperty<Plan> planProperty() {

@@ -129,11 +129,7 @@ public final class StudyPanelModel {
 
     /** The unit system a plan is written in (US when it names none). */
     public static UnitSystem units(Plan plan) {
-        try {
-            return UnitSystem.parse(plan.units());
-        } catch (RuntimeException e) {
-            return UnitSystem.US;
-        }
+        return org.baywright.run.DesignBasis.unitsOf(plan);
     }
 
     /**

@@ -8,7 +8,6 @@ import java.util.Set;
 import org.baywright.calc.Quantity;
 import org.baywright.load.DesignMethod;
 import org.baywright.load.LoadCase;
-import org.baywright.load.LoadCombination;
 import org.baywright.load.Combinations;
 import org.baywright.plan.DesignSettings;
 import org.baywright.plan.Floor;
@@ -119,19 +118,8 @@ final class CheckerPages {
             }
         }
         present.add(LoadCase.D);
-        double best = Double.NEGATIVE_INFINITY;
-        String name = "";
-        for (LoadCombination combo : Combinations.gravity(method, present)) {
-            double v = 0;
-            for (LoadCase c : LoadCase.values()) {
-                v += combo.factor(c) * byCase[c.ordinal()];
-            }
-            if (v > best) {
-                best = v;
-                name = combo.name();
-            }
-        }
-        return new EndReaction(m.id(), m.section(), which, support, byCase, best, name);
+        Combinations.Governing g = Combinations.governing(byCase, Combinations.gravity(method, present));
+        return new EndReaction(m.id(), m.section(), which, support, byCase, g.value(), g.combination().name());
     }
 
     /** The part "End reactions": a table per floor layout. */

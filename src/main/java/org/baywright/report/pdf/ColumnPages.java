@@ -69,7 +69,7 @@ final class ColumnPages {
                             Fmt.fixed(s.reductionArea(), Quantity.FLOOR_AREA, us, 0), Integer.toString(s.floorsSupported()),
                             Fmt.fixed(s.required(), Quantity.FORCE, us, 1), Fmt.fixed(s.available(), Quantity.FORCE, us, 1),
                             Fmt.ratio(s.ratio()), s.combination()};
-                    if (s.ratio() <= 1.0 + 1e-9) {
+                    if (org.baywright.design.Check.passes(s.ratio())) {
                         t.row(cells);
                     } else {
                         t.colored(Rgb.FAIL, cells);

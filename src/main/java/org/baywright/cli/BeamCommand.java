@@ -54,6 +54,9 @@ import picocli.CommandLine.Spec;
             "Exit code: 0 sized or fixed size passes; 1 overstressed; 2 bad input."},
         footer = {"", Caution.TEXT})
 public final class BeamCommand implements Callable<Integer> {
+    /** A point load this fraction of the span past the end is still on it: the rounding of a typed position equal to the span. */
+    private static final double ON_SPAN = 1e-12;
+
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -253,7 +256,7 @@ public final class BeamCommand implements Callable<Integer> {
         }
         double p = CliValues.quantity(option + " (force)", text.substring(0, at), Dimension.FORCE, false);
         double x = CliValues.quantity(option + " (position)", text.substring(at + 1), Dimension.LENGTH, false);
-        if (x > span * (1 + 1e-12)) {
+        if (x > span * (1 + ON_SPAN)) {
             throw new BadInputException(option + ": \"" + text + "\": the position is beyond the span; it must lie between 0 and the span from the left support");
         }
         return new PointLoad(Math.min(x, span), p);

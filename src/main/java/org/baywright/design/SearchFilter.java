@@ -12,6 +12,12 @@ import org.baywright.catalog.Section;
  * @param excluded designations never chosen
  */
 public record SearchFilter(double minDepth, double maxDepth, Set<String> series, Set<String> excluded) {
+    /**
+     * A depth limit admits sections this much deeper (m, a nanometre): a limit typed as the catalog's own
+     * depth (24in = 0.6096 m) must admit that section after unit conversion.
+     */
+    public static final double DEPTH_ROUNDING = 1e-9;
+
 
     public static final SearchFilter ALL = new SearchFilter(0, Double.POSITIVE_INFINITY, Set.of(), Set.of());
 
@@ -26,7 +32,7 @@ public record SearchFilter(double minDepth, double maxDepth, Set<String> series,
     /** Whether the search may choose {@code s}. */
     public boolean allows(Section s) {
         double d = s.depth();
-        return d >= minDepth - 1e-9 && d <= maxDepth + 1e-9
+        return d >= minDepth - DEPTH_ROUNDING && d <= maxDepth + DEPTH_ROUNDING
                 && (series.isEmpty() || series.contains(s.series()))
                 && !excluded.contains(s.designation());
     }

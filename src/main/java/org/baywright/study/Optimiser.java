@@ -45,7 +45,7 @@ public final class Optimiser {
         if (!(step > 0) || !(to >= from)) {
             throw new IllegalArgumentException("a range needs a step greater than zero and an end not below its start");
         }
-        long n = (long) Math.floor((to - from) / step + 1e-9) + 1;
+        long n = SearchLimits.count(from, to, step);
         if (n > 100_000) {
             throw new IllegalArgumentException("a range of " + n + " values is too long");
         }

@@ -35,7 +35,7 @@ public record StudyResult(List<VariantResult> variants, int total, boolean cance
      * (0 = none), best first; ties keep study order.
      */
     public List<VariantResult> best(Objective objective, double depthLimit, int n) {
-        return sound().stream().filter(v -> depthLimit <= 0 || v.structuralDepth() <= depthLimit + 1e-9)
+        return sound().stream().filter(v -> depthLimit <= 0 || v.structuralDepth() <= depthLimit + SearchLimits.DEPTH_ROUNDING)
                 .sorted(Comparator.comparingDouble(objective::score).thenComparingInt(VariantResult::index)).limit(n).toList();
     }
 }

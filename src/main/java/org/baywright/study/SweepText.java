@@ -90,7 +90,7 @@ public final class SweepText {
                 double to = Quantities.parsePositive(where, b, Dimension.LENGTH);
                 double by = Quantities.parsePositive(where, step, Dimension.LENGTH);
                 check(to >= from, where, "the end of the range (" + b + ") is below its start (" + a + ")");
-                long n = (long) Math.floor((to - from) / by + 1e-9) + 1;
+                long n = SearchLimits.count(from, to, by);
                 check(n <= MAX_VALUES, where, "the range has " + n + " values; at most " + MAX_VALUES);
                 Unit u = p == Parameter.MAX_DEPTH ? units.smallLength() : units.length();
                 for (long i = 0; i < n; i++) {

@@ -179,9 +179,12 @@ public final class Variations {
         return direction == GridLine.Axis.Y ? 0 : 90;
     }
 
+    /** Two span angles closer than this (degrees) are one direction: far below the editor's 5° steps. */
+    private static final double SAME_DIRECTION = 1e-6;
+
     private static boolean sameLine(double a, double b) {
         double d = ((a - b) % 180 + 180) % 180;
-        return d < 1e-6 || 180 - d < 1e-6;
+        return d < SAME_DIRECTION || 180 - d < SAME_DIRECTION;
     }
 
     /**

@@ -50,7 +50,7 @@ public record EquilibriumCheck(List<Equilibrium> cases, List<Problem> problems) 
                         "load case %s: applied %.6g N but the foundations carry %.6g N (difference %.3g %%); see the"
                                 + " other problems for load that does not reach a column",
                         lc.symbol(), e.applied(), e.reactions(), 100 * (e.reactions() - e.applied())
-                                / Math.max(Math.abs(e.applied()), 1e-30))));
+                                / Math.max(Math.abs(e.applied()), Double.MIN_NORMAL))));
             }
         }
         return new EquilibriumCheck(out, problems);

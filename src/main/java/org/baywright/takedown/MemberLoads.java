@@ -35,6 +35,9 @@ import org.baywright.plan.PointLoadItem;
  */
 record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea, double deliveredArea, double startShare,
         List<Double> bracePoints) {
+    /** A load piece shorter than this along the span (m, a nanometre) has no length and carries nothing. */
+    static final double NO_LENGTH = 1e-9;
+
     private static final int NC = Component.values().length;
 
     /** A member's reaction arriving on the member that supports it. */
@@ -84,7 +87,7 @@ record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea
     private static void deck(MemberTributary mt, Floor floor, double span, boolean partitionAsDead, List<List<SpanLoad>> comp,
             List<SpanLoad> areaFlow, double[] l0) {
         for (WidthSegment w : mt.widths()) {
-            if (clamp(w.s1(), span) - clamp(w.s0(), span) <= 1e-9) {
+            if (clamp(w.s1(), span) - clamp(w.s0(), span) <= NO_LENGTH) {
                 continue;
             }
             areaFlow.add(new DistributedLoad(clamp(w.s0(), span), clamp(w.s1(), span), w.w0(), w.w1()));
@@ -96,7 +99,7 @@ record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea
             }
             double[] q = ServiceLoads.split(al.values(), al.use(), partitionAsDead, l0);
             for (WidthSegment w : segs) {
-                if (clamp(w.s1(), span) - clamp(w.s0(), span) <= 1e-9) {
+                if (clamp(w.s1(), span) - clamp(w.s0(), span) <= NO_LENGTH) {
                     continue;
                 }
                 for (int c = 0; c < NC; c++) {
@@ -123,7 +126,7 @@ record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea
                     }
                     if (sh.isConcentrated()) {
                         comp.get(c).add(new PointLoad(clamp(sh.s0(), span), sh.force(q[c])));
-                    } else if (clamp(sh.s1(), span) - clamp(sh.s0(), span) > 1e-9) {
+                    } else if (clamp(sh.s1(), span) - clamp(sh.s0(), span) > NO_LENGTH) {
                         comp.get(c).add(new DistributedLoad(clamp(sh.s0(), span), clamp(sh.s1(), span), sh.f0() * q[c],
                                 sh.f1() * q[c]));
                     }

@@ -144,19 +144,24 @@ public final class SlabEdges {
         return Double.isFinite(near) ? near : 0;
     }
 
+    /** A ray and a segment whose directions' cross product is below this (m²) are parallel: they never meet. */
+    private static final double PARALLEL = 1e-12;
+    /** A ray meeting a segment this fraction past either end still meets it (a slab corner is on both edges). */
+    private static final double ON_SEGMENT = 1e-9;
+
     /** Parameter t ≥ 0 where the ray p + t·u meets segment ab, or +∞. */
     static double rayToSegment(Point p, double ux, double uy, Point a, Point b) {
         double ex = b.x() - a.x();
         double ey = b.y() - a.y();
         double den = ux * ey - uy * ex;
-        if (Math.abs(den) < 1e-12) {
+        if (Math.abs(den) < PARALLEL) {
             return Double.POSITIVE_INFINITY;
         }
         double wx = a.x() - p.x();
         double wy = a.y() - p.y();
         double t = (wx * ey - wy * ex) / den;
         double s = (wx * uy - wy * ux) / den;
-        if (t < -1e-12 || s < -1e-9 || s > 1 + 1e-9) {
+        if (t < -PARALLEL || s < -ON_SEGMENT || s > 1 + ON_SEGMENT) {
             return Double.POSITIVE_INFINITY;
         }
         return Math.max(0, t);

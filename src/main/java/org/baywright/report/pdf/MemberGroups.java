@@ -23,6 +23,9 @@ import org.baywright.takedown.TakedownResult;
  * prints. Each group keeps its members in design order; groups come in the order of their first member.
  */
 final class MemberGroups {
+    /** Values this close to zero are equal whatever the relative tolerance says (two zeros, or 0 and -0). */
+    private static final double ZERO = 1e-12;
+
     private static final double TOLERANCE = 1e-9;
 
     /**
@@ -144,7 +147,7 @@ final class MemberGroups {
         if (Double.isNaN(a) || Double.isNaN(b)) {
             return Double.isNaN(a) && Double.isNaN(b);
         }
-        return Math.abs(a - b) <= TOLERANCE * Math.max(Math.abs(a), Math.abs(b)) + 1e-12;
+        return Math.abs(a - b) <= TOLERANCE * Math.max(Math.abs(a), Math.abs(b)) + ZERO;
     }
 
     private static boolean near(double[] a, double[] b) {
@@ -159,7 +162,7 @@ final class MemberGroups {
             scale = Math.max(scale, Math.max(Math.abs(a[i]), Math.abs(b[i])));
         }
         for (int i = 0; i < a.length; i++) {
-            if (Math.abs(a[i] - b[i]) > TOLERANCE * scale + 1e-12) {
+            if (Math.abs(a[i] - b[i]) > TOLERANCE * scale + ZERO) {
                 return false;
             }
         }

@@ -60,6 +60,8 @@ final class PageFlow {
     private PDPageContentStream cs;
     private float y;
     private String runningTitle = "";
+    /** The cursor this close to the top (points) has drawn nothing yet: a hundredth of a point of float rounding. */
+    private static final float AT_TOP = 0.01f;
     private final List<String> titles = new ArrayList<>();
 
     PageFlow(PDDocument doc, Fonts fonts, PDRectangle paper) {
@@ -181,7 +183,7 @@ final class PageFlow {
 
     /** True when the cursor is at the top of a fresh page. */
     boolean atTop() {
-        return y >= top() - 0.01f;
+        return y >= top() - AT_TOP;
     }
 
     // ---- drawing primitives ------------------------------------------------------------------

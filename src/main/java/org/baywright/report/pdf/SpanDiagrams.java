@@ -21,6 +21,14 @@ import org.baywright.units.UnitSystem;
  * design used).
  */
 final class SpanDiagrams {
+    /**
+     * Samples are taken this fraction of the span either side of a point load, so the diagram shows the
+     * jump in shear as a vertical step: far below a drawn line's width, far above rounding.
+     */
+    private static final double BESIDE = 1e-7;
+    /** A diagram whose values span less than this is flat: its range is not divided by (no NaN scale). */
+    private static final double FLAT = 1e-12;
+
     private static final Rgb LOAD_FILL = new Rgb(0.86f, 0.9f, 0.96f);
     private static final Rgb LOAD_EDGE = new Rgb(0.2f, 0.35f, 0.6f);
     private static final Rgb SHEAR_FILL = new Rgb(0.88f, 0.94f, 0.88f);
@@ -204,7 +212,7 @@ final class SpanDiagrams {
         for (int i = 0; i <= n; i++) {
             s.add(len * i / n);
         }
-        double eps = 1e-7 * len;
+        double eps = BESIDE * len;
         for (SpanLoad l : span.loads()) {
             if (l instanceof PointLoad p) {
                 s.add(p.position());
@@ -233,7 +241,7 @@ final class SpanDiagrams {
             max = Math.max(max, d);
             min = Math.min(min, d);
         }
-        double range = Math.max(max - min, 1e-12);
+        double range = Math.max(max - min, FLAT);
         // the zero line divides the plot in the ratio of the positive and negative parts
         float zero = down ? plotTop - (float) (-min / range) * plotH : plotTop - (float) (max / range) * plotH;
         float x0 = x + 4;

@@ -26,12 +26,16 @@ final class LoadPlacement {
     private final List<DeckContext> decks;
     private final double tol;
     private final List<GeometryProblem> problems;
+    /** The plan's unit system: lengths in problems are written in it. */
+    private final org.baywright.units.UnitSystem units;
 
-    LoadPlacement(List<PlacedMember> members, List<DeckContext> decks, double tol, List<GeometryProblem> problems) {
+    LoadPlacement(List<PlacedMember> members, List<DeckContext> decks, double tol, List<GeometryProblem> problems,
+            org.baywright.units.UnitSystem units) {
         this.members = members;
         this.decks = decks;
         this.tol = tol;
         this.problems = problems;
+        this.units = units;
     }
 
     // ---------------------------------------------------------------- point loads
@@ -173,8 +177,8 @@ final class LoadPlacement {
         for (double[] part : parts) {
             double l = (part[1] - part[0]) * len;
             if (l > tol) {
-                problems.add(new GeometryProblem(kind, load.id(), String.format(
-                        "%.3f m of line load %s %s; that part is not delivered", l, load.id(), what),
+                problems.add(new GeometryProblem(kind, load.id(), String.format(java.util.Locale.ROOT,
+                        "%s of line load %s %s; that part is not delivered", units.lengthText(l), load.id(), what),
                         List.of(lerp(p0, p1, part[0]), lerp(p0, p1, part[1]))));
             }
         }

@@ -33,8 +33,12 @@ final class Shapes {
     /** A grid scale 1/tol within this relative distance of a whole number is that number (1/1e-6 is not exactly 1e6). */
     private static final double WHOLE_SCALE = 1e-9;
 
-    Shapes(double tol) {
+    /** The plan's unit system: lengths in problems are written in it. */
+    private final org.baywright.units.UnitSystem units;
+
+    Shapes(double tol, org.baywright.units.UnitSystem units) {
         this.tol = tol;
+        this.units = units;
         double scale = 1.0 / tol;
         double whole = Math.rint(scale);
         if (Math.abs(scale - whole) <= WHOLE_SCALE * scale) {
@@ -86,7 +90,7 @@ final class Shapes {
             if (!substantial(fixed)) {
                 problems.add(new GeometryProblem(GeometryProblem.DEGENERATE_POLYGON, id,
                         what + " " + id + " encloses no area (its vertices are collinear or it is thinner than the"
-                                + " tolerance " + tol + " m); it is ignored", p.vertices()));
+                                + " tolerance " + units.toleranceText(tol) + "); it is ignored", p.vertices()));
                 return null;
             }
             TopologyValidationError e = check.getValidationError();
@@ -98,7 +102,7 @@ final class Shapes {
             g = fixed;
         } else if (!substantial(g)) {
             problems.add(new GeometryProblem(GeometryProblem.DEGENERATE_POLYGON, id,
-                    what + " " + id + " encloses no area (thinner than the tolerance " + tol + " m); it is ignored",
+                    what + " " + id + " encloses no area (thinner than the tolerance " + units.toleranceText(tol) + "); it is ignored",
                     p.vertices()));
             return null;
         }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import org.baywright.plan.AreaLoad;
@@ -13,6 +14,7 @@ import org.baywright.plan.LineLoad;
 import org.baywright.plan.Member;
 import org.baywright.plan.Opening;
 import org.baywright.plan.Point;
+import org.baywright.units.UnitSystem;
 import org.baywright.plan.PointLoadItem;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Envelope;
@@ -82,12 +84,22 @@ public final class TributaryAnalysis {
      *     e.g. 1e-6
      */
     public static FloorTributary compute(Floor floor, List<Member> members, double tolerance) {
-        return new Run(floor, members, tolerance).result();
+        return compute(floor, members, tolerance, UnitSystem.SI);
+    }
+
+    /**
+     * Tributary areas of one floor, with the problems' quantities written in {@code units} (the plan's
+     * unit system: what the user reads).
+     */
+    public static FloorTributary compute(Floor floor, List<Member> members, double tolerance, UnitSystem units) {
+        return new Run(floor, members, tolerance, units).result();
     }
 
     /** One computation: mutable working state, discarded after {@link #result()}. */
     private static final class Run {
         private final Floor floor;
+        /** The plan's unit system: the quantities in problems are written in it. */
+        private final UnitSystem units;
         private final List<GeometryProblem> problems = new ArrayList<>();
         private final double tol;
         private final Shapes shapes;
@@ -107,17 +119,23 @@ public final class TributaryAnalysis {
         private Geometry loadedUnion;
         private final Map<String, Double> areaLoadAreas = new java.util.LinkedHashMap<>();
 
-        Run(Floor floor, List<Member> members, double tolerance) {
+        /** An area to nine significant figures in the plan's unit (an invariant check: the digits matter). */
+        private String exact(double squareMetres) {
+            return String.format(Locale.ROOT, "%.9g %s", units.floorArea().fromSi(squareMetres), units.floorArea().symbol());
+        }
+
+        Run(Floor floor, List<Member> members, double tolerance, UnitSystem units) {
             this.floor = floor;
+            this.units = units;
             double t = tolerance;
             if (!(t > 0) || !Double.isFinite(t)) {
                 problems.add(new GeometryProblem(GeometryProblem.BAD_INPUT, floor.id(),
-                        "tolerance " + tolerance + " m is not a positive number; " + DEFAULT_TOLERANCE + " m is used",
-                        List.of()));
+                        "tolerance " + tolerance + " m is not a positive number; " + units.toleranceText(DEFAULT_TOLERANCE)
+                                + " is used", List.of()));
                 t = DEFAULT_TOLERANCE;
             }
             this.tol = t;
-            this.shapes = new Shapes(t);
+            this.shapes = new Shapes(t, units);
             acceptMembers(members != null ? members : floor.members());
         }
 
@@ -136,7 +154,7 @@ public final class TributaryAnalysis {
             guard("area loads", floor.id(), this::areaLoads);
             Map<String, List<LoadShare>> pointShares = new LinkedHashMap<>();
             Map<String, List<LineShare>> lineShares = new LinkedHashMap<>();
-            LoadPlacement placement = new LoadPlacement(placed, decks, tol, problems);
+            LoadPlacement placement = new LoadPlacement(placed, decks, tol, problems, units);
             for (PointLoadItem p : floor.pointLoads()) {
                 pointShares.put(p.id(), List.of());
                 guard("point load", p.id(), () -> pointShares.put(p.id(), placement.point(p, shapes.snap(p.at()))));
@@ -166,21 +184,21 @@ public final class TributaryAnalysis {
                 double integral = mt.widthIntegral();
                 widthSum += integral;
                 if (Math.abs(integral - area[i]) > COVERAGE_ACCURACY * Math.max(area[i], Math.max(loadedArea, tol * tol))) {
-                    problems.add(new GeometryProblem(GeometryProblem.COVERAGE, m.id(), String.format(
-                            "the width profile of %s integrates to %.9g m² but its tributary area is %.9g m²",
-                            m.id(), integral, area[i]), List.of(m.a(), m.b())));
+                    problems.add(new GeometryProblem(GeometryProblem.COVERAGE, m.id(), String.format(Locale.ROOT,
+                            "the width profile of %s integrates to %s but its tributary area is %s",
+                            m.id(), exact(integral), exact(area[i])), List.of(m.a(), m.b())));
                 }
             }
             double scale = Math.max(loadedArea, tol * tol);
             if (Math.abs(tributary + undeliveredArea - loadedArea) > COVERAGE_ACCURACY * scale) {
-                problems.add(new GeometryProblem(GeometryProblem.COVERAGE, floor.id(), String.format(
-                        "tributary areas %.9g m² plus undelivered deck %.9g m² do not add up to the loaded area %.9g m²",
-                        tributary, undeliveredArea, loadedArea), List.of()));
+                problems.add(new GeometryProblem(GeometryProblem.COVERAGE, floor.id(), String.format(Locale.ROOT,
+                        "tributary areas %s plus undelivered deck %s do not add up to the loaded area %s",
+                        exact(tributary), exact(undeliveredArea), exact(loadedArea)), List.of()));
             }
             if (Math.abs(widthSum - tributary) > COVERAGE_ACCURACY * scale) {
-                problems.add(new GeometryProblem(GeometryProblem.COVERAGE, floor.id(), String.format(
-                        "width profiles integrate to %.9g m² but the tributary areas add up to %.9g m²",
-                        widthSum, tributary), List.of()));
+                problems.add(new GeometryProblem(GeometryProblem.COVERAGE, floor.id(), String.format(Locale.ROOT,
+                        "width profiles integrate to %s but the tributary areas add up to %s",
+                        exact(widthSum), exact(tributary)), List.of()));
             }
             return new FloorTributary(out, loadedArea, tributary, problems, pointShares, lineShares, areaLoadAreas);
         }
@@ -218,7 +236,8 @@ public final class TributaryAnalysis {
                 double length = a.distance(b);
                 if (length <= tol) {
                     problems.add(new GeometryProblem(GeometryProblem.ZERO_LENGTH_MEMBER, id,
-                            "member " + id + " has zero length (its ends are within " + tol + " m); it is ignored",
+                            "member " + id + " has zero length (its ends are within " + units.toleranceText(tol)
+                                    + "); it is ignored",
                             List.of(a)));
                     continue;
                 }
@@ -283,9 +302,9 @@ public final class TributaryAnalysis {
             for (Partition.Overlap o : parts.overlaps()) {
                 DeckInput first = inputs.get(o.first());
                 DeckInput later = inputs.get(o.later());
-                problems.add(new GeometryProblem(GeometryProblem.OVERLAP, later.id(), String.format(
-                        "deck %s overlaps deck %s by %.4g m²; the overlap is carried once, by %s's span",
-                        later.id(), first.id(), o.area().getArea(), first.id()), Shapes.outline(o.area())));
+                problems.add(new GeometryProblem(GeometryProblem.OVERLAP, later.id(), String.format(Locale.ROOT,
+                        "deck %s overlaps deck %s by %s; the overlap is carried once, by %s's span",
+                        later.id(), first.id(), units.areaText(o.area().getArea()), first.id()), Shapes.outline(o.area())));
             }
             for (int i = 0; i < inputs.size(); i++) {
                 DeckInput d = inputs.get(i);
@@ -397,8 +416,8 @@ public final class TributaryAnalysis {
                 String why = noSupports
                         ? "no member crosses its span direction (" + ctx.spanAngle() + "°)"
                         : "no member supports it on either side along its span (" + ctx.spanAngle() + "°)";
-                found.add(new GeometryProblem(GeometryProblem.UNSUPPORTED_DECK, ctx.deckId(), String.format(
-                        "%.4g m² of deck %s is unsupported: %s; its load is not delivered", part.getArea(),
+                found.add(new GeometryProblem(GeometryProblem.UNSUPPORTED_DECK, ctx.deckId(), String.format(Locale.ROOT,
+                        "%s of deck %s is unsupported: %s; its load is not delivered", units.areaText(part.getArea()),
                         ctx.deckId(), why), Shapes.outline(plan)));
             }
         }
@@ -425,9 +444,9 @@ public final class TributaryAnalysis {
                     if (shapes.substantial(both)) {
                         PlacedMember a = placed.get(list.get(i).getKey());
                         PlacedMember b = placed.get(list.get(j).getKey());
-                        found.add(new GeometryProblem(GeometryProblem.OVERLAP, a.id(), String.format(
-                                "the tributary areas of members %s and %s overlap by %.4g m²", a.id(), b.id(),
-                                both.getArea()), Shapes.outline(frame.toPlan(both, shapes.frameFactory))));
+                        found.add(new GeometryProblem(GeometryProblem.OVERLAP, a.id(), String.format(Locale.ROOT,
+                                "the tributary areas of members %s and %s overlap by %s", a.id(), b.id(),
+                                units.areaText(both.getArea())), Shapes.outline(frame.toPlan(both, shapes.frameFactory))));
                     }
                 }
             }
@@ -457,9 +476,9 @@ public final class TributaryAnalysis {
             Geometry off = decksUnion == null ? g : shapes.difference(g, decksUnion);
             areaLoadAreas.put(load.id(), loadedUnion == null ? 0.0 : shapes.frameIntersection(g, loadedUnion).getArea());
             if (shapes.substantial(off)) {
-                problems.add(new GeometryProblem(GeometryProblem.AREA_LOAD_OFF_DECK, load.id(), String.format(
-                        "%.4g m² of area load %s lies outside the decks and slab edge; that part is not delivered",
-                        off.getArea(), load.id()), Shapes.outline(off)));
+                problems.add(new GeometryProblem(GeometryProblem.AREA_LOAD_OFF_DECK, load.id(), String.format(Locale.ROOT,
+                        "%s of area load %s lies outside the decks and slab edge; that part is not delivered",
+                        units.areaText(off.getArea()), load.id()), Shapes.outline(off)));
             }
             for (int d = 0; d < decks.size(); d++) {
                 DeckContext ctx = decks.get(d);

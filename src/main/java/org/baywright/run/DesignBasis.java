@@ -125,7 +125,7 @@ public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, Str
 
     /** What the design of a floor layout reads from the basis (besides the catalog). */
     public FloorRules floorRules() {
-        return new FloorRules(method, steel, deflection, beams, girders, liveLoad);
+        return new FloorRules(method, steel, deflection, beams, girders, liveLoad, units);
     }
 
     /** The designer of column tiers: the catalog's non-slender shapes of the allowed series. */

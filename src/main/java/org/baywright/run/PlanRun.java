@@ -74,7 +74,7 @@ public final class PlanRun {
         List<LevelDesign> levels = expanded.withDesigns(floors);
         ColumnLines columns = ColumnLines.design(plan, levels, basis.columnDesigner(), basis.columnRules());
         Foundations foundations = Foundations.of(columns);
-        EquilibriumCheck equilibrium = EquilibriumCheck.of(levels, foundations, basis.liveLoad().partitionAsDead());
+        EquilibriumCheck equilibrium = EquilibriumCheck.of(levels, foundations, basis.liveLoad().partitionAsDead(), basis.units());
         TakedownResult t = Takedown.result(expanded, floors, columns, foundations, equilibrium);
         double ms = (System.nanoTime() - t0) / 1e6;
         return new RunResult(plan, t, List.of(), basis.catalog().name(), version(), ms, basis);
@@ -82,8 +82,8 @@ public final class PlanRun {
 
     /** Stages 2 to 4 for one floor layout: tributary areas, support graph, members designed in order. */
     private static FloorDesign designFloor(FloorInput floor, FloorRules rules, Searches searches) {
-        FloorAreas areas = FloorAreas.of(floor);
-        SupportGraph graph = SupportGraph.of(floor);
+        FloorAreas areas = FloorAreas.of(floor, rules.units());
+        SupportGraph graph = SupportGraph.of(floor, rules.units());
         return FloorDesigner.design(floor, areas, graph, rules, searches);
     }
 

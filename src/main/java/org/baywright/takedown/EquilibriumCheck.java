@@ -24,8 +24,9 @@ public record EquilibriumCheck(List<Equilibrium> cases, List<Problem> problems) 
         problems = List.copyOf(problems);
     }
 
-    /** Checks the levels' applied loads against the foundations. */
-    public static EquilibriumCheck of(List<LevelDesign> levels, Foundations foundations, boolean partitionAsDead) {
+    /** Checks the levels' applied loads against the foundations; forces in problems are in {@code units}. */
+    public static EquilibriumCheck of(List<LevelDesign> levels, Foundations foundations, boolean partitionAsDead,
+            org.baywright.units.UnitSystem units) {
         double[] applied = new double[LoadCase.values().length];
         double[] slack = new double[LoadCase.values().length];
         for (LevelDesign lv : levels) {
@@ -47,10 +48,10 @@ public record EquilibriumCheck(List<Equilibrium> cases, List<Problem> problems) 
             out.add(e);
             if (!e.holds()) {
                 problems.add(Problem.error("equilibrium", "load case " + lc.symbol(), "", String.format(Locale.ROOT,
-                        "load case %s: applied %.6g N but the foundations carry %.6g N (difference %.3g %%); see the"
+                        "load case %s: applied %s but the foundations carry %s (difference %.1f %%); see the"
                                 + " other problems for load that does not reach a column",
-                        lc.symbol(), e.applied(), e.reactions(), 100 * (e.reactions() - e.applied())
-                                / Math.max(Math.abs(e.applied()), Double.MIN_NORMAL))));
+                        lc.symbol(), units.forceText(e.applied()), units.forceText(e.reactions()), 100 * (e.reactions()
+                                - e.applied()) / Math.max(Math.abs(e.applied()), Double.MIN_NORMAL))));
             }
         }
         return new EquilibriumCheck(out, problems);

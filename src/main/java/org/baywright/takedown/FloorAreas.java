@@ -16,9 +16,12 @@ public record FloorAreas(FloorTributary tributary, List<Problem> problems) {
         problems = List.copyOf(problems);
     }
 
-    /** Computes the tributary areas of a layout's members on the grid {@link Takedown#GRID}. */
-    public static FloorAreas of(FloorInput in) {
-        FloorTributary trib = TributaryAnalysis.compute(in.floor(), in.members(), Takedown.GRID);
+    /**
+     * Computes the tributary areas of a layout's members on the grid {@link Takedown#GRID}, with the
+     * problems' quantities in {@code units}.
+     */
+    public static FloorAreas of(FloorInput in, org.baywright.units.UnitSystem units) {
+        FloorTributary trib = TributaryAnalysis.compute(in.floor(), in.members(), Takedown.GRID, units);
         List<Problem> problems = new ArrayList<>();
         for (GeometryProblem g : trib.problems()) {
             problems.add(new Problem(Problem.Severity.ERROR, g.kind(), "floor " + in.floor().id(), g.objectId(), g.message(),

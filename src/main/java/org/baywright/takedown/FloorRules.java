@@ -1,5 +1,6 @@
 package org.baywright.takedown;
 
+import org.baywright.units.UnitSystem;
 import org.baywright.design.DeflectionLimits;
 import org.baywright.design.SearchFilter;
 import org.baywright.design.Steel;
@@ -13,7 +14,8 @@ import org.baywright.load.LiveLoadRules;
  *
  * @param beams the sections a beam may be
  * @param girders the sections a girder may be
+ * @param units the plan's unit system, in which the floor's problems are written (so it is part of the key)
  */
 public record FloorRules(DesignMethod method, Steel steel, DeflectionLimits deflection, SearchFilter beams,
-        SearchFilter girders, LiveLoadRules liveLoad) {
+        SearchFilter girders, LiveLoadRules liveLoad, UnitSystem units) {
 }

@@ -72,8 +72,13 @@ public record SupportGraph(Map<String, Ends> ends, List<String> order, List<Stri
         problems = List.copyOf(problems);
     }
 
-    /** Builds the graph of a layout with the columns present. */
+    /** Builds the graph of a layout with the columns present, its problems' points in SI. */
     public static SupportGraph of(FloorInput in) {
+        return of(in, org.baywright.units.UnitSystem.SI);
+    }
+
+    /** Builds the graph of a layout with the columns present, its problems' points in {@code units}. */
+    public static SupportGraph of(FloorInput in, org.baywright.units.UnitSystem units) {
         List<Problem> problems = new ArrayList<>();
         Map<String, Ends> ends = new LinkedHashMap<>();
         for (Member m : in.members()) {
@@ -82,7 +87,7 @@ public record SupportGraph(Map<String, Ends> ends, List<String> order, List<Stri
                         "member " + m.id() + " has zero length; its ends must be distinct points", List.of(m.start())));
                 continue;
             }
-            ends.put(m.id(), new Ends(support(in, m, m.start(), problems), support(in, m, m.end(), problems)));
+            ends.put(m.id(), new Ends(support(in, m, m.start(), problems, units), support(in, m, m.end(), problems, units)));
         }
         Ordering o = new Ordering(ends);
         List<String> inLoop = o.run();
@@ -181,7 +186,8 @@ public record SupportGraph(Map<String, Ends> ends, List<String> order, List<Stri
     }
 
     /** What supports the member end at {@code p}; an unsupported end is reported. */
-    private static Support support(FloorInput in, Member m, Point p, List<Problem> problems) {
+    private static Support support(FloorInput in, Member m, Point p, List<Problem> problems,
+            org.baywright.units.UnitSystem units) {
         for (Column c : in.columns()) {
             if (c.at().distance(p) <= Takedown.TOLERANCE) {
                 return Support.column(c.id());
@@ -210,8 +216,8 @@ public record SupportGraph(Map<String, Ends> ends, List<String> order, List<Stri
             return Support.member(best.id(), bestS);
         }
         problems.add(new Problem(Problem.Severity.ERROR, "unsupported-member", "floor " + in.floor().id(), m.id(),
-                "member " + m.id() + " has no support at (" + String.format(Locale.ROOT, "%.3f m, %.3f m", p.x(), p.y())
-                        + "): no column there and no member passes through that point", List.of(p)));
+                "member " + m.id() + " has no support at " + units.pointText(p.x(), p.y())
+                        + ": no column there and no member passes through that point", List.of(p)));
         return Support.NONE;
     }
 

@@ -126,6 +126,53 @@ public enum UnitSystem {
         };
     }
 
+    // ---- quantities in messages: the same words and precision wherever a problem is shown
+
+    /**
+     * A length as a message prints it: {@code 30'-6"} (to 1/8 in) in US units, {@code 9.144 m} in SI.
+     */
+    public String lengthText(double metres) {
+        return this == US ? feetInches(metres, 8) : grouped(metres, 3) + " m";
+    }
+
+    /** A plan point as a message prints it: {@code (30'-0", 12'-6")} or {@code (9.144 m, 3.810 m)}. */
+    public String pointText(double x, double y) {
+        return "(" + lengthText(x) + ", " + lengthText(y) + ")";
+    }
+
+    /**
+     * A floor area as a message prints it, in ft² or m², grouped: whole units from 100 up, to 0.1 from 1
+     * up, and two significant figures below, so a sliver is never printed as 0.
+     */
+    public String areaText(double squareMetres) {
+        double v = floorArea.fromSi(squareMetres);
+        double a = Math.abs(v);
+        return (a >= 1 ? grouped(v, a >= 100 ? 0 : 1) : twoFigures(v)) + " " + floorArea.symbol();
+    }
+
+    /** Two significant figures in plain notation (0.000096), for values below one. */
+    private static String twoFigures(double v) {
+        return v == 0 ? "0" : !Double.isFinite(v) ? String.valueOf(v)
+                : new java.math.BigDecimal(v).round(new java.math.MathContext(2)).stripTrailingZeros().toPlainString();
+    }
+
+    /** A force as a message prints it: kip or kN to 0.1, grouped ({@code 3,709.7 kip}). */
+    public String forceText(double newtons) {
+        return grouped(force.fromSi(newtons), 1) + " " + force.symbol();
+    }
+
+    /**
+     * A very small length (a tolerance) as a message prints it, to two significant figures in inches or
+     * millimetres, never in scientific notation: {@code 0.000039 in}, {@code 0.001 mm}.
+     */
+    public String toleranceText(double metres) {
+        return twoFigures(smallLength.fromSi(metres)) + " " + smallLength.symbol();
+    }
+
+    private static String grouped(double v, int decimals) {
+        return String.format(Locale.US, "%,." + decimals + "f", v + 0.0);
+    }
+
     /** Formats an SI value in the given unit with a fixed number of decimals and the unit symbol. */
     public static String format(double si, Unit unit, int decimals) {
         return String.format(Locale.ROOT, "%." + decimals + "f %s", unit.fromSi(si), unit.symbol()).trim();

@@ -2,48 +2,23 @@ package org.baywright.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 import org.baywright.report.Takeoff;
-import org.baywright.report.workbook.TakeoffWorkbook;
+import org.baywright.report.workbook.TakeoffFiles;
 import org.baywright.run.RunResult;
 import org.baywright.units.UnitSystem;
 
-/** {@code design --takeoff}: the takeoff as a workbook or as two tidy CSV tables, and its line in the summary. */
+/** {@code design --takeoff}: the takeoff files ({@link TakeoffFiles}) and the takeoff line of the summary. */
 final class TakeoffOutput {
     private TakeoffOutput() {
     }
 
-    /** True for a name that asks for a workbook. */
-    static boolean workbook(Path file) {
-        return file.getFileName() != null && file.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".xlsx");
-    }
-
-    /**
-     * The file the totals go to beside a CSV takeoff: {@code takeoff.csv} → {@code takeoff-totals.csv}
-     * (a tidy table holds one kind of row, so the totals are a table of their own).
-     */
-    static Path totalsFile(Path csv) {
-        String name = csv.getFileName().toString();
-        String stem = name.toLowerCase(Locale.ROOT).endsWith(".csv") ? name.substring(0, name.length() - 4) : name;
-        return csv.resolveSibling(stem + "-totals.csv");
-    }
-
     /** Writes the takeoff and says what was written on {@code err}. */
     static void write(RunResult run, double allowancePercent, UnitSystem us, Path file, PrintWriter err) throws IOException {
-        Takeoff t = Takeoff.of(run, allowancePercent);
-        if (workbook(file)) {
-            TakeoffWorkbook.write(t, us, run.plan().name(), file);
-            err.println("wrote " + file + ": takeoff workbook (" + String.join(", ", TakeoffWorkbook.SHEETS) + ")");
-            return;
+        for (String line : TakeoffFiles.write(Takeoff.of(run, allowancePercent), us, run.plan().name(), file)) {
+            err.println("wrote " + line);
         }
-        Files.writeString(file, t.csv(us), StandardCharsets.UTF_8);
-        Path totals = totalsFile(file);
-        Files.writeString(totals, t.totalsCsv(us), StandardCharsets.UTF_8);
-        err.println("wrote " + file + ": takeoff, " + t.lines().size() + " rows of size × level × kind");
-        err.println("wrote " + totals + ": takeoff totals");
     }
 
     /** The run's text summary with the takeoff line (if any) after its steel weight line. */

@@ -6,8 +6,8 @@ import java.nio.file.Path;
 import java.util.Objects;
 import org.baywright.catalog.Catalog;
 import org.baywright.catalog.CatalogException;
-import org.baywright.catalog.CatalogFile;
 import org.baywright.plan.Plan;
+import org.baywright.run.DesignBasis;
 import org.baywright.run.PlanRun;
 import org.baywright.run.RunResult;
 import org.baywright.takedown.FloorCache;
@@ -58,8 +58,7 @@ final class DocumentRuns {
     private Catalog catalogOf(Plan plan) {
         CatalogKey now = CatalogKey.of(plan.settings().catalog());
         if (!now.equals(key) || catalog == null) {
-            String name = now.name();
-            catalog = name.isEmpty() ? CatalogFile.loadDefault() : CatalogFile.read(Path.of(name));
+            catalog = DesignBasis.catalogOf(plan); // the one place a plan's catalog is read
             cache = new FloorCache(catalog, budget);
             key = now;
         }

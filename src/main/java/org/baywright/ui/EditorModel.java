@@ -450,10 +450,14 @@ public final class EditorModel {
                 .withProject(org.baywright.report.pdf.ProjectInfo.named(r.plan().name(), java.time.LocalDate.now())));
     }
 
-    /** Writes the steel takeoff (CSV) with a connection allowance in percent. */
-    public void exportTakeoff(Path out, double allowancePercent) throws java.io.IOException {
-        java.nio.file.Files.writeString(out, org.baywright.report.Takeoff.of(requireRun(), allowancePercent).csv(units()),
-                java.nio.charset.StandardCharsets.UTF_8);
+    /**
+     * Writes the steel takeoff with a connection allowance in percent: a workbook for a name ending in
+     * .xlsx, else the CSV table with its totals beside it (the same files as {@code design --takeoff}).
+     */
+    public java.util.List<String> exportTakeoff(Path out, double allowancePercent) throws java.io.IOException {
+        RunResult r = requireRun();
+        return org.baywright.report.workbook.TakeoffFiles.write(org.baywright.report.Takeoff.of(r, allowancePercent), units(),
+                r.plan().name(), out);
     }
 
     /** Writes the column schedule (CSV). */

@@ -25,8 +25,12 @@ class EditorExportTest {
         m.exportSchedule(schedule);
         assertTrue(Files.readString(svg).contains("Level 3"), "the drawing is of the selected level");
         assertTrue(Files.size(pdf) > 100_000, "calculation package");
-        assertTrue(Files.readString(takeoff).startsWith("group,item,count,length[ft],weight[lb]"));
-        assertTrue(Files.readString(takeoff).contains("allowance 10.0 %"));
+        assertTrue(Files.readString(takeoff).startsWith("section,level,kind,pieces,length[ft],weight[lb]\n"));
+        assertTrue(Files.readString(dir.resolve("takeoff-totals.csv")).contains("connections and miscellaneous allowance,10.0,%"),
+                "the totals with the allowance beside the table");
+        Path xlsx = dir.resolve("takeoff.xlsx");
+        m.exportTakeoff(xlsx, 10);
+        assertTrue(Files.size(xlsx) > 3_000, "the workbook");
         assertTrue(Files.readString(schedule).startsWith("column,grid,position,level,section"));
     }
 

@@ -401,7 +401,7 @@ public final class BeamCommand implements Callable<Integer> {
     private Map<String, Object> toJson(BeamDesign d, UnitSystem us, double l, DesignMethod m, BeamCriteria c, Catalog cat) {
         Map<String, Object> o = new LinkedHashMap<>();
         o.put("units", us.name().toLowerCase(Locale.ROOT));
-        o.put("unitNames", Map.of(
+        o.put("unitNames", org.baywright.report.RunSummary.ordered(
                 "length", us.length().symbol(),
                 "weight", us.weightPerLength().symbol(),
                 "moment", us.moment().symbol(),

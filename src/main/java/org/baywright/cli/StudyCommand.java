@@ -305,7 +305,7 @@ public final class StudyCommand implements Callable<Integer> {
         o.put("format", "baywright-study");
         o.put("version", 1);
         o.put("plan", plan.name());
-        o.put("units", Map.of("system", us.name().toLowerCase(Locale.ROOT), "weight", weightUnit(us), "weightPerArea",
+        o.put("units", org.baywright.report.RunSummary.ordered("system", us.name().toLowerCase(Locale.ROOT), "weight", weightUnit(us), "weightPerArea",
                 perAreaUnit(us), "depth", us.smallLength().symbol()));
         o.put("parameters", sweeps.stream().map(s -> s.parameter().key()).toList());
         o.put("objective", obj.pieceCost() == 0 ? "weight" : "weight+pieces");

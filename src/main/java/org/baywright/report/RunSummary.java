@@ -89,6 +89,18 @@ public final class RunSummary {
         return o;
     }
 
+    /**
+     * A JSON object with its keys in the order given ({@code Map.of} has none, so the output would change
+     * from run to run): {@code ordered("a", 1, "b", 2)}.
+     */
+    public static Map<String, Object> ordered(Object... keysAndValues) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        for (int i = 0; i + 1 < keysAndValues.length; i += 2) {
+            m.put((String) keysAndValues[i], keysAndValues[i + 1]);
+        }
+        return m;
+    }
+
     /** The full result as a tree. */
     public static Map<String, Object> json(RunResult run, UnitSystem us) {
         Map<String, Object> o = new LinkedHashMap<>();
@@ -98,7 +110,7 @@ public final class RunSummary {
         o.put("program", "Baywright " + run.version());
         o.put("catalog", run.catalogName());
         o.put("method", run.basis().method().name().toLowerCase(Locale.ROOT));
-        o.put("units", Map.of("system", us.name().toLowerCase(Locale.ROOT), "length", us.length().symbol(),
+        o.put("units", ordered("system", us.name().toLowerCase(Locale.ROOT), "length", us.length().symbol(),
                 "force", us.force().symbol(), "area", us.floorArea().symbol(), "weightPerLength", us.weightPerLength().symbol(),
                 "weight", weightUnit(us), "weightPerArea", weightPerAreaUnit(us), "moment", us.moment().symbol(),
                 "deflection", us.smallLength().symbol()));

@@ -15,7 +15,6 @@ import org.baywright.plan.Column;
 import org.baywright.plan.Floor;
 import org.baywright.plan.Framing;
 import org.baywright.plan.LineLoad;
-import org.baywright.plan.Member;
 import org.baywright.plan.Opening;
 import org.baywright.plan.Point;
 import org.baywright.plan.PointLoadItem;
@@ -213,10 +212,5 @@ final class CanvasLayers {
                     x + 48 + 140, mid);
         }
         g.setTextBaseline(VPos.BASELINE);
-    }
-
-    /** The plan's members at the current level, designed or not (for hit-testing before a run). */
-    static List<Member> planMembers(EditorModel model) {
-        return model.currentFloor().map(f -> Framing.members(model.plan(), f)).orElse(List.of());
     }
 }

@@ -56,6 +56,10 @@ public final class PlanCanvas extends Region {
     private final CanvasTools tools;
     /** Lays the plan out again once a zoom has settled. */
     private final PauseTransition settle = new PauseTransition(Duration.millis(180));
+    /** After an edit, how long the picture waits for the edit's run before it is drawn with the previous results. */
+    private final PauseTransition awaitRun = new PauseTransition(Duration.millis(150));
+    /** True from an edit until its run arrives (or {@link #awaitRun} ends): the picture is not rebuilt twice. */
+    private boolean awaitingRun;
     private ViewTransform view = ViewTransform.identity();
     private boolean followFit = true;
     private boolean spaceDown;
@@ -90,9 +94,26 @@ public final class PlanCanvas extends Region {
             followFit = true;
             zoomToFit();
         });
-        model.planProperty().addListener((o, a, b) -> fitOrRedraw());
-        model.levelProperty().addListener((o, a, b) -> fitOrRedraw());
+        awaitRun.setOnFinished(e -> {
+            awaitingRun = false;
+            drawPlan();
+        });
+        model.planProperty().addListener((o, a, b) -> {
+            // an edit of a plan that has run: its own run follows at once, so wait for it rather than
+            // building the picture of the new plan with the old results first
+            awaitingRun = model.run() != null && a != null && b != null;
+            if (awaitingRun) {
+                awaitRun.playFromStart();
+            }
+            fitOrRedraw();
+        });
+        model.levelProperty().addListener((o, a, b) -> {
+            awaitingRun = false;
+            fitOrRedraw();
+        });
         model.runProperty().addListener((o, a, b) -> {
+            awaitingRun = false;
+            awaitRun.stop();
             drawUnder();
             drawPlan();
         });
@@ -320,21 +341,61 @@ public final class PlanCanvas extends Region {
     }
 
     private void drawUnder() {
-        CanvasLayers.under(under.getGraphicsContext2D(), model, view, BACKGROUND);
+        if (fresh(0, id(model.plan()), id(model.run()), model.levelProperty().get(), java.util.Set.copyOf(model.selection()),
+                model.showTributaryProperty().get())) {
+            CanvasLayers.under(under.getGraphicsContext2D(), model, view, BACKGROUND);
+        }
     }
 
     private void drawMarks() {
-        CanvasLayers.over(marks.getGraphicsContext2D(), model, view, LEGEND_H);
+        if (fresh(1, id(model.plan()), model.levelProperty().get(), List.copyOf(model.problems()),
+                model.shownProblemProperty().get(), model.showReactionsProperty().get())) {
+            CanvasLayers.over(marks.getGraphicsContext2D(), model, view, LEGEND_H);
+        }
     }
 
-    /** Draws the plan picture, building it first when what it shows has changed. */
+    /** Draws the plan picture, building it first when what it shows has changed (not while an edit's run is awaited). */
     private void drawPlan() {
-        var g = canvas.getGraphicsContext2D();
-        g.clearRect(0, 0, canvas.getWidth(), canvas.getHeight());
-        List<Primitive> prims = content();
-        if (!prims.isEmpty()) {
-            FxRenderer.draw(g, prims, view, PX_PER_MM * view.scale() / laidOutScale);
+        List<Primitive> prims = awaitingRun && laidOut != null ? laidOut : content();
+        double pxPerMm = PX_PER_MM * view.scale() / laidOutScale;
+        if (fresh(2, id(prims), pxPerMm)) {
+            var g = canvas.getGraphicsContext2D();
+            g.clearRect(0, 0, canvas.getWidth(), canvas.getHeight());
+            FxRenderer.draw(g, prims, view, pxPerMm);
         }
+    }
+
+    /** What each layer (under, marks, plan) was last drawn from, with the view and size. */
+    private final Object[] drawnFrom = new Object[3];
+
+    /** True, and remembered, when a layer's inputs differ from those it was last drawn from. */
+    private boolean fresh(int layer, Object... inputs) {
+        List<Object> key = new ArrayList<>(java.util.Arrays.asList(inputs));
+        key.add(view);
+        key.add(getWidth());
+        key.add(getHeight());
+        if (key.equals(drawnFrom[layer])) {
+            return false;
+        }
+        drawnFrom[layer] = key;
+        return true;
+    }
+
+    /** Compares by identity (a plan, a run and a picture are values too large to compare on every redraw). */
+    private record Id(Object o) {
+        @Override
+        public boolean equals(Object x) {
+            return x instanceof Id i && i.o == o;
+        }
+
+        @Override
+        public int hashCode() {
+            return System.identityHashCode(o);
+        }
+    }
+
+    private static Id id(Object o) {
+        return new Id(o);
     }
 
     /** The laid-out primitives of the current plan, level and run (empty with no plan). */

@@ -14,7 +14,7 @@ import org.baywright.ui.TaskRunner;
 
 /**
  * Writes a PNG of the editor's plan canvas on a plan, headless (Monocle), to look at the canvas without a
- * display: {@code java -cp … org.baywright.demo.CanvasSnapshot OUT.png [PLAN] [LEVEL] [reactions] [tributary]}.
+ * display: {@code java -cp … org.baywright.demo.CanvasSnapshot OUT.png [PLAN] [LEVEL] [reactions] [tributary] [zoom=F]}.
  */
 public final class CanvasSnapshot {
     private CanvasSnapshot() {
@@ -29,6 +29,8 @@ public final class CanvasSnapshot {
         String level = args.length > 2 ? args[2] : null;
         boolean reactions = java.util.Arrays.asList(args).contains("reactions");
         boolean tributary = java.util.Arrays.asList(args).contains("tributary");
+        double zoom = java.util.Arrays.stream(args).filter(x -> x.startsWith("zoom=")).mapToDouble(x -> Double.parseDouble(
+                x.substring(5))).findFirst().orElse(1);
         CountDownLatch up = new CountDownLatch(1);
         Platform.startup(up::countDown);
         up.await();
@@ -50,6 +52,10 @@ public final class CanvasSnapshot {
                 window.canvas().applyCss();
                 window.canvas().layout();
                 window.canvas().zoomToFit();
+                if (zoom != 1) {
+                    var c = window.canvas();
+                    c.setTransform(c.transform().zoomAt(c.getWidth() * 0.35, c.getHeight() * 0.4, zoom));
+                }
                 File f = out.toFile();
                 ImageIO.write(SwingFXUtils.fromFXImage(window.canvas().snapshot(null, null), null), "png", f);
                 System.out.println("wrote " + f);

@@ -227,7 +227,7 @@ public final class PlanPicture {
 
     /** Distance from the plan's extents to the outer edge of the grid bubbles, mm. */
     public double annotationMm() {
-        return gridExtensionMm() + 2 * bubbleRadiusMm() + 0.5 * t;
+        return gridExtensionMm() + 2 * bubbleRadiusMm() + (style.compact() ? 0 : 0.5 * t);
     }
 
     /**
@@ -250,8 +250,13 @@ public final class PlanPicture {
         if (style.loadsAndDecks()) {
             decksAndLoads(); // before the columns' marks: on the screen a label that meets an earlier one is left out
         }
-        drawColumns();
-        dimensions();
+        if (style.fitLabels()) {
+            dimensions(); // on the screen the dimensions go before the columns' marks, which give way to them
+            drawColumns();
+        } else {
+            drawColumns();
+            dimensions();
+        }
         openingsAndAreaLoads();
         List<Primitive> sorted = new ArrayList<>(out);
         sorted.sort(Comparator.comparingInt(p -> p.layer().ordinal()));
@@ -315,16 +320,16 @@ public final class PlanPicture {
     }
 
     private double gridExtensionMm() {
-        return (style.compact() ? 3.6 : 7.4) * t;
+        return (style.compact() ? 4.2 : 7.4) * t;
     }
 
     private double bubbleRadiusMm() {
-        return (style.compact() ? 1.1 : 1.7) * t;
+        return (style.compact() ? 1.0 : 1.7) * t;
     }
 
     /** Distance of the first and second dimension rows from the plan's extents, mm. */
     private double dimensionRowMm(int row) {
-        return style.compact() ? (row == 0 ? 1.3 : 2.5) * t : (row == 0 ? 3.2 : 6.0) * t;
+        return style.compact() ? (row == 0 ? 2.0 : 3.1) * t : (row == 0 ? 3.2 : 6.0) * t;
     }
 
     // ---------------------------------------------------------------- grid and dimensions
@@ -348,7 +353,7 @@ public final class PlanPicture {
             for (Pt c : List.of(new Pt(a.x() - dx, a.y() - dy), new Pt(b.x() + dx, b.y() + dy))) {
                 out.add(new Primitive.Circle(Layer.GRID, Space.PLAN, c, r, Pen.solid(0.35, Rgb.INK), style.ground()));
                 taken.add(new double[] {c.x() - r * k, c.y() - r * k, c.x() + r * k, c.y() + r * k});
-                out.add(new Primitive.Text(Layer.GRID, Space.PLAN, c, g.label(), fitBubble(g.label(), (style.compact() ? 1.0 : 1.3) * t, r), 0,
+                out.add(new Primitive.Text(Layer.GRID, Space.PLAN, c, g.label(), fitBubble(g.label(), (style.compact() ? 0.95 : 1.3) * t, r), 0,
                         Anchor.MIDDLE_CENTRE, Rgb.INK, true));
             }
         }

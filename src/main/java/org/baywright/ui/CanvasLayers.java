@@ -1,11 +1,15 @@
 package org.baywright.ui;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 import javafx.geometry.VPos;
 import javafx.scene.canvas.GraphicsContext;
 import javafx.scene.paint.Color;
+import javafx.scene.paint.CycleMethod;
+import javafx.scene.paint.LinearGradient;
+import javafx.scene.paint.Stop;
 import javafx.scene.shape.StrokeLineCap;
 import javafx.scene.text.Font;
 import javafx.scene.text.FontWeight;
@@ -13,6 +17,8 @@ import javafx.scene.text.TextAlignment;
 import org.baywright.plan.AreaLoad;
 import org.baywright.plan.Column;
 import org.baywright.plan.Floor;
+import org.baywright.plan.GridLine;
+import org.baywright.plan.Plan;
 import org.baywright.plan.Framing;
 import org.baywright.plan.LineLoad;
 import org.baywright.plan.Opening;
@@ -181,10 +187,12 @@ final class CanvasLayers {
         g.fillText("0", x, mid);
         x += 12;
         double barW = 150;
-        for (int i = 0; i < barW; i++) {
-            g.setFill(FxRenderer.colour(Cividis.at(i / (barW - 1))));
-            g.fillRect(x + i, mid - 6, 1.5, 12);
+        List<Stop> stops = new ArrayList<>();
+        for (int i = 0; i <= 15; i++) {
+            stops.add(new Stop(i / 15.0, FxRenderer.colour(Cividis.at(i / 15.0))));
         }
+        g.setFill(new LinearGradient(x, 0, x + barW, 0, false, CycleMethod.NO_CYCLE, stops));
+        g.fillRect(x, mid - 6, barW, 12);
         g.setStroke(INK);
         g.strokeRect(x, mid - 6, barW, 12);
         g.setFill(INK);
@@ -212,5 +220,42 @@ final class CanvasLayers {
                     x + 48 + 140, mid);
         }
         g.setTextBaseline(VPos.BASELINE);
+    }
+
+    /** [minX, minY, maxX, maxY] of the current level's grid, slab edge, members and columns, or null for an empty plan. */
+    static double[] bounds(EditorModel model) {
+        Plan p = model.plan();
+        if (p == null) {
+            return null;
+        }
+        List<Point> pts = new ArrayList<>();
+        model.currentFloor().ifPresent(f -> {
+            pts.addAll(f.slabEdge().vertices());
+            f.members().forEach(m -> {
+                pts.add(m.start());
+                pts.add(m.end());
+            });
+        });
+        p.columns().forEach(c -> pts.add(c.at()));
+        double minX = Double.POSITIVE_INFINITY;
+        double maxX = Double.NEGATIVE_INFINITY;
+        double minY = Double.POSITIVE_INFINITY;
+        double maxY = Double.NEGATIVE_INFINITY;
+        for (GridLine g : p.grid()) {
+            if (g.axis() == GridLine.Axis.X) {
+                minX = Math.min(minX, g.offset());
+                maxX = Math.max(maxX, g.offset());
+            } else {
+                minY = Math.min(minY, g.offset());
+                maxY = Math.max(maxY, g.offset());
+            }
+        }
+        for (Point q : pts) {
+            minX = Math.min(minX, q.x());
+            maxX = Math.max(maxX, q.x());
+            minY = Math.min(minY, q.y());
+            maxY = Math.max(maxY, q.y());
+        }
+        return Double.isFinite(minX) && Double.isFinite(minY) ? new double[] {minX, minY, maxX, maxY} : null;
     }
 }

@@ -1,6 +1,5 @@
 package org.baywright.ui;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import javafx.animation.PauseTransition;
@@ -17,9 +16,6 @@ import javafx.scene.input.ScrollEvent;
 import javafx.scene.layout.Region;
 import javafx.scene.paint.Color;
 import javafx.util.Duration;
-import org.baywright.plan.GridLine;
-import org.baywright.plan.Plan;
-import org.baywright.plan.Point;
 import org.baywright.report.drawing.PlanPicture;
 import org.baywright.report.drawing.Primitive;
 import org.baywright.report.drawing.Rgb;
@@ -67,6 +63,8 @@ public final class PlanCanvas extends Region {
     private double lastX;
     private double lastY;
 
+    /** What the under (0), marks (1) and plan (2) canvases were last drawn from. */
+    private final LayerMemo drawn = new LayerMemo(3);
     private PlanPicture picture;
     /** What the picture was built from: plan, run, level, reactions shown (compared by identity). */
     private Object[] pictureOf = new Object[4];
@@ -220,39 +218,7 @@ public final class PlanCanvas extends Region {
 
     /** [minX, minY, maxX, maxY] of what is drawn, or null for an empty plan. */
     double[] bounds() {
-        Plan p = model.plan();
-        if (p == null) {
-            return null;
-        }
-        List<Point> pts = new ArrayList<>();
-        model.currentFloor().ifPresent(f -> {
-            pts.addAll(f.slabEdge().vertices());
-            f.members().forEach(m -> {
-                pts.add(m.start());
-                pts.add(m.end());
-            });
-        });
-        p.columns().forEach(c -> pts.add(c.at()));
-        double minX = Double.POSITIVE_INFINITY;
-        double maxX = Double.NEGATIVE_INFINITY;
-        double minY = Double.POSITIVE_INFINITY;
-        double maxY = Double.NEGATIVE_INFINITY;
-        for (GridLine g : p.grid()) {
-            if (g.axis() == GridLine.Axis.X) {
-                minX = Math.min(minX, g.offset());
-                maxX = Math.max(maxX, g.offset());
-            } else {
-                minY = Math.min(minY, g.offset());
-                maxY = Math.max(maxY, g.offset());
-            }
-        }
-        for (Point q : pts) {
-            minX = Math.min(minX, q.x());
-            maxX = Math.max(maxX, q.x());
-            minY = Math.min(minY, q.y());
-            maxY = Math.max(maxY, q.y());
-        }
-        return Double.isFinite(minX) && Double.isFinite(minY) ? new double[] {minX, minY, maxX, maxY} : null;
+        return CanvasLayers.bounds(model);
     }
 
     // ---- interaction --------------------------------------------------------------------------
@@ -341,14 +307,16 @@ public final class PlanCanvas extends Region {
     }
 
     private void drawUnder() {
-        if (fresh(0, id(model.plan()), id(model.run()), model.levelProperty().get(), java.util.Set.copyOf(model.selection()),
-                model.showTributaryProperty().get())) {
+        // the plan matters only for where selected openings, loads and columns are
+        Object planIfSelection = model.selection().isEmpty() ? null : id(model.plan());
+        if (fresh(0, planIfSelection, model.plan() == null, id(model.run()), model.levelProperty().get(),
+                java.util.Set.copyOf(model.selection()), model.showTributaryProperty().get())) {
             CanvasLayers.under(under.getGraphicsContext2D(), model, view, BACKGROUND);
         }
     }
 
     private void drawMarks() {
-        if (fresh(1, id(model.plan()), model.levelProperty().get(), List.copyOf(model.problems()),
+        if (fresh(1, model.plan() == null, model.currentFloorId(), model.units(), List.copyOf(model.problems()),
                 model.shownProblemProperty().get(), model.showReactionsProperty().get())) {
             CanvasLayers.over(marks.getGraphicsContext2D(), model, view, LEGEND_H);
         }
@@ -365,37 +333,17 @@ public final class PlanCanvas extends Region {
         }
     }
 
-    /** What each layer (under, marks, plan) was last drawn from, with the view and size. */
-    private final Object[] drawnFrom = new Object[3];
-
-    /** True, and remembered, when a layer's inputs differ from those it was last drawn from. */
+    /** True when a layer's inputs, the view or the size changed since it was last drawn (then remembered). */
     private boolean fresh(int layer, Object... inputs) {
-        List<Object> key = new ArrayList<>(java.util.Arrays.asList(inputs));
-        key.add(view);
-        key.add(getWidth());
-        key.add(getHeight());
-        if (key.equals(drawnFrom[layer])) {
-            return false;
-        }
-        drawnFrom[layer] = key;
-        return true;
+        Object[] all = java.util.Arrays.copyOf(inputs, inputs.length + 3);
+        all[inputs.length] = view;
+        all[inputs.length + 1] = getWidth();
+        all[inputs.length + 2] = getHeight();
+        return drawn.fresh(layer, all);
     }
 
-    /** Compares by identity (a plan, a run and a picture are values too large to compare on every redraw). */
-    private record Id(Object o) {
-        @Override
-        public boolean equals(Object x) {
-            return x instanceof Id i && i.o == o;
-        }
-
-        @Override
-        public int hashCode() {
-            return System.identityHashCode(o);
-        }
-    }
-
-    private static Id id(Object o) {
-        return new Id(o);
+    private static Object id(Object o) {
+        return LayerMemo.id(o);
     }
 
     /** The laid-out primitives of the current plan, level and run (empty with no plan). */

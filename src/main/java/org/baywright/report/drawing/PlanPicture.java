@@ -46,11 +46,16 @@ import org.baywright.units.UnitSystem;
  * of millimetres off their members, so {@link #build(double)} is called again when the scale changes.
  *
  * <p>What differs between the sheet and the screen is a {@link Style}: the lettering height, the
- * reactions shown, the ground colour behind labels, whether labels that do not fit their member are left
- * out, and whether deck spans and line and point loads are drawn (the sheet does not show them yet).
+ * reactions shown, the ground colour behind labels, whether labels that do not fit (longer than their
+ * member, or over an earlier label) are left out, whether deck spans and line and point loads are drawn
+ * (the sheet does not show them yet), and a compact annotation (smaller bubbles, dimension rows closer to
+ * the plan) for the screen's narrow margin. The sheet's style draws exactly what the sheet printed before
+ * the picture was taken out of {@link SheetBuilder} (its golden file is unchanged).
  *
- * <p>Known limitations: a label that does not fit is dropped on the screen, never moved; tags of
- * openings and area loads avoid labels and member lines, not each other's leaders.
+ * <p>Known limitations: on the screen a label that does not fit is left out, never moved (which label
+ * gives way follows the building order: members, loads, dimensions, column marks, tags); tags of openings
+ * and area loads avoid labels and member lines, not each other's leaders. {@link #build(double)} is
+ * synchronized: one picture lays out one scale at a time.
  */
 public final class PlanPicture {
     static final Rgb HATCH_INK = new Rgb(120, 120, 120);
@@ -208,16 +213,6 @@ public final class PlanPicture {
     /** The style it is drawn in. */
     public Style style() {
         return style;
-    }
-
-    /** The floor layout drawn. */
-    Floor floor() {
-        return floor;
-    }
-
-    /** The designed members drawn, in drawing order. */
-    List<MemberResult> members() {
-        return members;
     }
 
     /** [minX, minY, maxX, maxY] of the drawn plan objects (grid, slab, members, openings, loads, columns), m. */

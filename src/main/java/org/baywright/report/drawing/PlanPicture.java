@@ -497,6 +497,23 @@ public final class PlanPicture {
         Pt centre = new Pt((box[0] + box[2]) / 2, (box[1] + box[3]) / 2);
         double span = Math.max(1e-9, box[2] - box[0] + box[3] - box[1]);
         int n = 16;
+        // only labels and lines near the polygon can meet a candidate box or leader: count against those
+        double mx = bw + 4 * k;
+        double my = bh + 4 * k;
+        double[] near = {box[0] - mx, box[1] - my, box[2] + mx, box[3] + my};
+        List<double[]> nearTaken = new ArrayList<>();
+        for (double[] o : taken) {
+            if (o[0] <= near[2] && near[0] <= o[2] && o[1] <= near[3] && near[1] <= o[3]) {
+                nearTaken.add(o);
+            }
+        }
+        List<double[]> nearLines = new ArrayList<>();
+        for (double[] l : lines) {
+            if (segmentMeetsBox(l[0], l[1], l[2], l[3], new double[] {near[0] - l[4], near[1] - l[4], near[2] + l[4],
+                near[3] + l[4]})) {
+                nearLines.add(l);
+            }
+        }
         // points inside the polygon, clear of member lines: where a leader may end
         List<Pt> targets = new ArrayList<>();
         Pt best = null;
@@ -508,13 +525,13 @@ public final class PlanPicture {
                 if (!contains(poly, c)) {
                     continue;
                 }
-                if (overlaps(new double[] {c.x() - k, c.y() - k, c.x() + k, c.y() + k}) == 0) {
+                if (overlaps(new double[] {c.x() - k, c.y() - k, c.x() + k, c.y() + k}, nearTaken, nearLines) == 0) {
                     targets.add(c);
                 }
                 double[] r = {c.x() - bw / 2, c.y() - bh / 2, c.x() + bw / 2, c.y() + bh / 2};
                 boolean inside = contains(poly, new Pt(r[0], r[1])) && contains(poly, new Pt(r[2], r[1]))
                         && contains(poly, new Pt(r[0], r[3])) && contains(poly, new Pt(r[2], r[3]));
-                int hits = overlaps(r);
+                int hits = overlaps(r, nearTaken, nearLines);
                 double score = (inside && hits == 0 ? 0 : 100) + 10 * hits + StrictMath.hypot(c.x() - centre.x(),
                         c.y() - centre.y()) / span;
                 if (score < bestScore - 1e-12) {
@@ -534,10 +551,17 @@ public final class PlanPicture {
                 if (r[0] < box[2] && box[0] < r[2] && r[1] < box[3] && box[1] < r[3]) {
                     continue;
                 }
-                Pt target = targets.stream().min(Comparator.comparingDouble(
-                        q -> StrictMath.hypot(q.x() - c.x(), q.y() - c.y()))).orElseThrow();
+                Pt target = null;
+                double closest = Double.POSITIVE_INFINITY;
+                for (Pt q : targets) {
+                    double d = StrictMath.hypot(q.x() - c.x(), q.y() - c.y());
+                    if (d < closest) {
+                        closest = d;
+                        target = q;
+                    }
+                }
                 Pt from = boxExit(c, bw, bh, target);
-                double score = 3 + 10 * overlaps(r) + 4 * crossings(from, target)
+                double score = 3 + 10 * overlaps(r, nearTaken, nearLines) + 4 * crossings(from, target, nearLines)
                         + StrictMath.hypot(target.x() - from.x(), target.y() - from.y()) / span;
                 if (score < bestScore - 1e-12) {
                     bestScore = score;
@@ -576,7 +600,7 @@ public final class PlanPicture {
     }
 
     /** How many member lines a segment crosses. */
-    private int crossings(Pt a, Pt b) {
+    private static int crossings(Pt a, Pt b, List<double[]> lines) {
         int n = 0;
         for (double[] l : lines) {
             if (segmentsCross(a.x(), a.y(), b.x(), b.y(), l[0], l[1], l[2], l[3])) {
@@ -599,7 +623,7 @@ public final class PlanPicture {
     }
 
     /** How many labels and member lines a box would cover. */
-    private int overlaps(double[] r) {
+    private static int overlaps(double[] r, List<double[]> taken, List<double[]> lines) {
         int n = 0;
         for (double[] o : taken) {
             if (r[0] < o[2] && o[0] < r[2] && r[1] < o[3] && o[1] < r[3]) {

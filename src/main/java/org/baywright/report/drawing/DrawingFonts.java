@@ -9,7 +9,7 @@ import java.io.UncheckedIOException;
  * licence ({@code DejaVu-LICENSE.txt}). Every renderer and the text measurement use these files, so a
  * label measured by the model is the label drawn.
  */
-final class DrawingFonts {
+public final class DrawingFonts {
     static final String REGULAR = "/fonts/DejaVuSans.ttf";
     static final String BOLD = "/fonts/DejaVuSans-Bold.ttf";
     /** The font family written into SVG files, with fallbacks for viewers without DejaVu. */
@@ -22,7 +22,7 @@ final class DrawingFonts {
     }
 
     /** The bytes of the TrueType file. */
-    static synchronized byte[] bytes(boolean isBold) {
+    public static synchronized byte[] bytes(boolean isBold) {
         if (isBold) {
             if (bold == null) {
                 bold = read(BOLD);

@@ -7,14 +7,15 @@ import java.util.List;
 /**
  * Hatch lines of a polygon on the paper, computed once for every renderer: each family of parallel lines
  * sits at multiples of the spacing from the paper origin (so neighbouring areas' hatching lines up) and
- * is cut to the polygon by the even–odd rule, which also handles concave outlines.
+ * is cut to the polygon by the even–odd rule, which also handles concave outlines. Public for renderers outside
+ * this package (the editor's canvas).
  */
-final class Hatching {
+public final class Hatching {
     private Hatching() {
     }
 
     /** The hatch segments inside a polygon given in paper mm, each {@code {from, to}}. */
-    static List<Pt[]> segments(List<Pt> polygon, Hatch hatch) {
+    public static List<Pt[]> segments(List<Pt> polygon, Hatch hatch) {
         List<Pt[]> out = new ArrayList<>();
         int n = polygon.size();
         if (n < 3) {

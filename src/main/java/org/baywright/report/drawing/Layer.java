@@ -7,6 +7,8 @@ public enum Layer {
     AREA_LOADS("area-loads"),
     OPENINGS("openings"),
     MEMBERS("members"),
+    DECKS("deck-spans"),
+    LOADS("line-and-point-loads"),
     COLUMNS("columns"),
     MEMBER_LABELS("member-labels"),
     DIMENSIONS("dimensions"),

@@ -343,7 +343,7 @@ class FramingPlanDrawingTest {
                     for (Primitive.Path b : boxes) {
                         double[] r = {b.points().get(0).x(), b.points().get(0).y(), b.points().get(2).x(), b.points().get(2).y()};
                         for (Primitive.Line l : members) {
-                            assertTrue(!SheetBuilder.segmentMeetsBox(l.from().x(), l.from().y(), l.to().x(), l.to().y(), r),
+                            assertTrue(!PlanPicture.segmentMeetsBox(l.from().x(), l.from().y(), l.to().x(), l.to().y(), r),
                                     "a tag hides a member line from " + l.from() + " to " + l.to());
                         }
                     }

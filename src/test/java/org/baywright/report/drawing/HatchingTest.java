@@ -35,7 +35,7 @@ class HatchingTest {
         Polygon poly = new Polygon(u.stream().map(p -> new Point(p.x(), p.y())).toList());
         double total = segs.stream().mapToDouble(HatchingTest::length).sum();
         assertAll(
-                () -> assertTrue(segs.stream().allMatch(s -> SheetBuilder.contains(poly,
+                () -> assertTrue(segs.stream().allMatch(s -> PlanPicture.contains(poly,
                         new Pt((s[0].x() + s[1].x()) / 2, (s[0].y() + s[1].y()) / 2))), "every segment inside"),
                 // y = 0 … 1.5: one segment each; y = 2 … 5.5: two (either side of the notch); none at the top edge
                 () -> assertEquals(4 + 8 * 2, segs.size()),

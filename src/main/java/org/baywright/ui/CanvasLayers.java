@@ -1,0 +1,261 @@
+package org.baywright.ui;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+import javafx.geometry.VPos;
+import javafx.scene.canvas.GraphicsContext;
+import javafx.scene.paint.Color;
+import javafx.scene.paint.CycleMethod;
+import javafx.scene.paint.LinearGradient;
+import javafx.scene.paint.Stop;
+import javafx.scene.shape.StrokeLineCap;
+import javafx.scene.text.Font;
+import javafx.scene.text.FontWeight;
+import javafx.scene.text.TextAlignment;
+import org.baywright.plan.AreaLoad;
+import org.baywright.plan.Column;
+import org.baywright.plan.Floor;
+import org.baywright.plan.GridLine;
+import org.baywright.plan.Plan;
+import org.baywright.plan.Framing;
+import org.baywright.plan.LineLoad;
+import org.baywright.plan.Opening;
+import org.baywright.plan.Point;
+import org.baywright.plan.PointLoadItem;
+import org.baywright.plan.Polygon;
+import org.baywright.plan.Problem;
+import org.baywright.report.drawing.Cividis;
+import org.baywright.report.drawing.Rgb;
+import org.baywright.takedown.MemberResult;
+import org.baywright.units.UnitSystem;
+
+/**
+ * The editor's own layers around the plan picture: under it, the tributary areas and the selection;
+ * over it, the problem markers and the legend strip. The plan itself is {@link FxRenderer} drawing the
+ * report's {@link org.baywright.report.drawing.PlanPicture}.
+ */
+final class CanvasLayers {
+    static final Color SELECTION = Color.rgb(214, 92, 40, 0.55);
+    private static final Color PROBLEM = Color.web("#b91c1c");
+    private static final Color INK = Color.web("#1d1f22");
+    private static final Color REACTION = Color.web("#24507a");
+
+    private CanvasLayers() {
+    }
+
+    /** The layer under the plan: the ground, tributary areas (when shown) and the selection. */
+    static void under(GraphicsContext g, EditorModel model, ViewTransform view, Color ground) {
+        double w = g.getCanvas().getWidth();
+        double h = g.getCanvas().getHeight();
+        g.setLineDashes();
+        g.setFill(ground);
+        g.fillRect(0, 0, w, h);
+        if (model.plan() == null) {
+            g.setFill(Color.web("#7d8591"));
+            g.setFont(Font.font(14));
+            g.setTextAlign(TextAlignment.CENTER);
+            g.fillText("No plan open. Use File › New or File › Open…", w / 2, h / 2);
+            return;
+        }
+        List<MemberResult> results = model.currentMembers();
+        Set<String> sel = model.selection();
+        if (model.showTributaryProperty().get()) {
+            int i = 0;
+            for (MemberResult m : results) {
+                if (m.tributary() == null || m.tributary().isEmpty()) {
+                    continue;
+                }
+                Color c = (i++ % 2 == 0) ? Color.rgb(70, 110, 170, 0.16) : Color.rgb(200, 150, 60, 0.18);
+                for (Polygon poly : m.tributary()) {
+                    CanvasOverlay.polygonPath(g, poly, view);
+                    g.setFill(sel.contains(m.id()) ? Color.rgb(214, 92, 40, 0.30) : c);
+                    g.fill();
+                    g.setStroke(Color.rgb(60, 60, 70, 0.35));
+                    g.setLineWidth(0.6);
+                    g.stroke();
+                }
+            }
+        }
+        if (sel.isEmpty()) {
+            return;
+        }
+        Optional<Floor> floor = model.currentFloor();
+        g.setLineCap(StrokeLineCap.ROUND);
+        g.setStroke(SELECTION);
+        if (results.isEmpty()) {
+            floor.ifPresent(f -> Framing.members(model.plan(), f).stream().filter(m -> sel.contains(m.id()))
+                    .forEach(m -> selectionLine(g, view, m.start(), m.end(), 18)));
+        } else {
+            results.stream().filter(m -> sel.contains(m.id())).forEach(m -> selectionLine(g, view, m.start(), m.end(), 18));
+        }
+        floor.ifPresent(f -> {
+            g.setLineWidth(6);
+            for (Opening o : f.openings()) {
+                if (sel.contains(o.id())) {
+                    CanvasOverlay.polygonPath(g, o.outline(), view);
+                    g.stroke();
+                }
+            }
+            for (AreaLoad a : f.areaLoads()) {
+                if (sel.contains(a.id())) {
+                    CanvasOverlay.polygonPath(g, a.outline(), view);
+                    g.stroke();
+                }
+            }
+            for (LineLoad l : f.lineLoads()) {
+                for (int i = 0; sel.contains(l.id()) && i + 1 < l.path().size(); i++) {
+                    selectionLine(g, view, l.path().get(i), l.path().get(i + 1), 10);
+                }
+            }
+            g.setFill(SELECTION);
+            for (PointLoadItem q : f.pointLoads()) {
+                if (sel.contains(q.id())) {
+                    disc(g, view, q.at(), 14);
+                }
+            }
+        });
+        for (Column c : model.currentColumns()) {
+            if (sel.contains(c.id())) {
+                disc(g, view, c.at(), 16);
+            }
+        }
+        g.setLineCap(StrokeLineCap.SQUARE);
+    }
+
+    private static void selectionLine(GraphicsContext g, ViewTransform view, Point a, Point b, double width) {
+        g.setLineWidth(width);
+        g.strokeLine(view.screenX(a.x()), view.screenY(a.y()), view.screenX(b.x()), view.screenY(b.y()));
+    }
+
+    private static void disc(GraphicsContext g, ViewTransform view, Point at, double r) {
+        g.fillOval(view.screenX(at.x()) - r, view.screenY(at.y()) - r, 2 * r, 2 * r);
+    }
+
+    /** The layer over the plan: problem markers (the one picked in the Problems panel larger) and the legend. */
+    static void over(GraphicsContext g, EditorModel model, ViewTransform view, double legendHeight) {
+        double w = g.getCanvas().getWidth();
+        double h = g.getCanvas().getHeight();
+        g.clearRect(0, 0, w, h);
+        if (model.plan() == null) {
+            return;
+        }
+        Problem shown = model.shownProblemProperty().get();
+        String here = model.currentFloorId();
+        g.setTextAlign(TextAlignment.CENTER);
+        for (Problem pr : model.problems()) {
+            if (pr.location().startsWith("floor ") && here != null && !pr.location().equals("floor " + here)
+                    && !pr.location().startsWith("floor " + here + " ")) {
+                continue; // drawn on the levels of its own floor layout
+            }
+            boolean hot = pr.equals(shown);
+            for (Point q : pr.where()) {
+                double x = view.screenX(q.x());
+                double y = view.screenY(q.y());
+                double r = hot ? 15 : 9;
+                g.setLineDashes(4, 3);
+                g.setStroke(PROBLEM);
+                g.setLineWidth(hot ? 3 : 1.8);
+                g.strokeOval(x - r, y - r, 2 * r, 2 * r);
+                g.setLineDashes();
+                g.setFill(PROBLEM);
+                g.setFont(Font.font(null, FontWeight.BOLD, hot ? 13 : 11));
+                g.fillText("!", x, y + 4);
+            }
+        }
+        legend(g, model, w, h, legendHeight);
+    }
+
+    private static void legend(GraphicsContext g, EditorModel model, double w, double h, double legendHeight) {
+        double y = h - legendHeight;
+        g.setFill(Color.web("#ecebe6"));
+        g.fillRect(0, y, w, legendHeight);
+        g.setStroke(Color.web("#c9c7bf"));
+        g.setLineWidth(1);
+        g.setLineDashes();
+        g.strokeLine(0, y + 0.5, w, y + 0.5);
+        double mid = y + legendHeight / 2;
+        double x = 12;
+        g.setTextBaseline(VPos.CENTER);
+        g.setTextAlign(TextAlignment.LEFT);
+        g.setFont(Font.font(null, FontWeight.BOLD, 11));
+        g.setFill(INK);
+        g.fillText("Demand / capacity", x, mid);
+        x += 118;
+        g.setFont(Font.font(11));
+        g.fillText("0", x, mid);
+        x += 12;
+        double barW = 150;
+        List<Stop> stops = new ArrayList<>();
+        for (int i = 0; i <= 15; i++) {
+            stops.add(new Stop(i / 15.0, FxRenderer.colour(Cividis.at(i / 15.0))));
+        }
+        g.setFill(new LinearGradient(x, 0, x + barW, 0, false, CycleMethod.NO_CYCLE, stops));
+        g.fillRect(x, mid - 6, barW, 12);
+        g.setStroke(INK);
+        g.strokeRect(x, mid - 6, barW, 12);
+        g.setFill(INK);
+        g.fillText("1.0", x + barW + 6, mid);
+        x += barW + 44;
+        Rgb top = Cividis.at(1);
+        g.setFill(FxRenderer.colour(top));
+        g.fillRect(x, mid - 4, 40, 8);
+        g.setLineDashes(9.6, 4.8);
+        g.setStroke(INK);
+        g.setLineWidth(2.5);
+        g.strokeRect(x, mid - 4, 40, 8);
+        g.setLineDashes();
+        g.setFill(INK);
+        g.fillText("over 1.0: overstressed", x + 48, mid);
+        x += 48 + 150;
+        g.setLineDashes(16, 4, 3.2, 4);
+        g.setLineWidth(1.3);
+        g.strokeLine(x, mid, x + 40, mid);
+        g.setLineDashes();
+        g.fillText("unsupported / not run", x + 48, mid);
+        if (model.showReactionsProperty().get()) {
+            g.setFill(REACTION);
+            g.fillText("end reactions R, service, unreduced: " + (model.units() == UnitSystem.SI ? "kN" : "kip"),
+                    x + 48 + 140, mid);
+        }
+        g.setTextBaseline(VPos.BASELINE);
+    }
+
+    /** [minX, minY, maxX, maxY] of the current level's grid, slab edge, members and columns, or null for an empty plan. */
+    static double[] bounds(EditorModel model) {
+        Plan p = model.plan();
+        if (p == null) {
+            return null;
+        }
+        List<Point> pts = new ArrayList<>();
+        model.currentFloor().ifPresent(f -> {
+            pts.addAll(f.slabEdge().vertices());
+            f.members().forEach(m -> {
+                pts.add(m.start());
+                pts.add(m.end());
+            });
+        });
+        p.columns().forEach(c -> pts.add(c.at()));
+        double minX = Double.POSITIVE_INFINITY;
+        double maxX = Double.NEGATIVE_INFINITY;
+        double minY = Double.POSITIVE_INFINITY;
+        double maxY = Double.NEGATIVE_INFINITY;
+        for (GridLine g : p.grid()) {
+            if (g.axis() == GridLine.Axis.X) {
+                minX = Math.min(minX, g.offset());
+                maxX = Math.max(maxX, g.offset());
+            } else {
+                minY = Math.min(minY, g.offset());
+                maxY = Math.max(maxY, g.offset());
+            }
+        }
+        for (Point q : pts) {
+            minX = Math.min(minX, q.x());
+            maxX = Math.max(maxX, q.x());
+            minY = Math.min(minY, q.y());
+            maxY = Math.max(maxY, q.y());
+        }
+        return Double.isFinite(minX) && Double.isFinite(minY) ? new double[] {minX, minY, maxX, maxY} : null;
+    }
+}

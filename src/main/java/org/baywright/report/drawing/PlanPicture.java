@@ -875,7 +875,7 @@ public final class PlanPicture {
     /** A ratio as written below a member: 0.87, or 1.12 over. */
     public static String ratioText(double ratio) {
         String r = String.format(Locale.ROOT, "%.2f", ratio);
-        return ratio > 1.0 + 1e-9 ? r + " over" : r;
+        return !org.baywright.design.Check.passes(ratio) ? r + " over" : r;
     }
 
     /** The colour of a demand/capacity ratio: cividis over 0–1, the top colour beyond. */

@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.Optional;
 import org.baywright.calc.Caution;
 import org.baywright.design.MemberStatus;
+import org.baywright.load.Combinations;
 import org.baywright.load.DesignMethod;
 import org.baywright.load.LoadCase;
 import org.baywright.load.LoadCombination;
@@ -72,11 +73,9 @@ final class SheetBuilder {
                         + "\" that the plan does not have"));
         this.members = run.takedown().members().getOrDefault(floorId, List.of());
         this.options = options;
-        UnitSystem u = options.units() != null ? options.units() : UnitSystem.parse(plan.units());
-        this.units = u == null ? UnitSystem.US : u;
+        this.units = options.units() != null ? options.units() : run.basis().units();
         this.paper = options.paper() != null ? options.paper() : this.units == UnitSystem.SI ? Paper.ISO_A1 : Paper.ARCH_D;
-        DesignMethod m = run.basis().method();
-        this.method = m == null ? DesignMethod.LRFD : m;
+        this.method = run.basis().method();
         this.t = paper.textSize();
     }
 

@@ -8,5 +8,11 @@
  * lengths, text heights, hatch spacing, circle radii) are paper millimetres in both spaces, so a
  * drawing reads the same at any scale. The {@link org.baywright.report.drawing.Viewport} maps the plan
  * onto the paper.
+ *
+ * <p>The plan's content (grid and bubbles, dimensions, slab, openings, area loads, members coloured by
+ * ratio with sizes, ratios and reactions, columns) is built once by {@link
+ * org.baywright.report.drawing.PlanPicture}: the sheet ({@code SheetBuilder}) lays it out in the sheet
+ * style, and the editor's canvas draws the same primitives in the screen style through its JavaFX
+ * renderer, so the canvas and the printed plan always show the same plan.
  */
 package org.baywright.report.drawing;

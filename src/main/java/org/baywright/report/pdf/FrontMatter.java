@@ -175,7 +175,8 @@ final class FrontMatter {
                 + " is checked under its own nominal weight)" + (b.liveLoad().partitionAsDead() ? ", and the partition allowance" : ""));
         lc.row("L", "Floor live load" + (b.liveLoad().partitionAsDead() ? "" : " including the partition allowance")
                 + ", reduced per member and column where §4.7 permits");
-        lc.row("Lr", "Roof live load, reduced by §4.8.2 (R1 from the tributary area, flat roof R2 = 1)");
+        lc.row("Lr", "Ordinary roof live load, reduced by §4.8.2 (R1 from the tributary area, flat roof R2 = 1); the load"
+                + " of a roof used for assembly, as a garden or another occupancy is L (§4.8.3)");
         lc.row("S", "Snow load as given in the plan (not reduced)");
         lc.draw(f);
         f.paragraph(f.small, "Wind, earthquake, rain, ponding, vibration, fire and connection design are outside the scope"
@@ -212,6 +213,10 @@ final class FrontMatter {
                     : "; for girders at least half the bay on each side (plan setting)."));
             f.bullet(f.body, "A_T of a column accumulates the delivered areas of every floor above it; roof live load"
                     + " uses the roof area alone (§4.8.2, Lr between 12 psf and L0).");
+            f.bullet(f.body, "Roofs used for assembly, as gardens or for another occupancy (roof live load given with a use"
+                    + " other than ordinary) are reduced as floors (§4.8.3): their load is floor live load L of that use,"
+                    + " reduced by §4.7 (assembly loads of 100 psf or less not at all), and such a roof counts as a floor"
+                    + " in a column's A_T.");
             f.bullet(f.body, "Partition allowance (§4.3.2): carried as " + (b.liveLoad().partitionAsDead() ? "dead load."
                     : "reducible live load."));
             f.bullet(f.body, "Reactions passed from member to member are always unreduced; each member reduces what it receives.");

@@ -110,7 +110,7 @@ public final class FloorDesigner {
         MemberLoads.Reactions rx = loads.reactions(span, d.section());
         MemberTributary mt = trib.members().get(m.id());
         MemberResult r = new MemberResult(m.id(), floor.id(), m.kind(), m.start(), m.end(), span, d.status(), d,
-                loads.ownArea(), reduction.area(), reduction.kll(), reduction.ordinaryLive(), rx.start(), rx.end(),
+                loads.ownArea(), reduction.area(), reduction.kll(), reduction.ordinaryLive(), reduction.roofLive(), rx.start(), rx.end(),
                 ends.start().describe(), ends.end().describe(), mt == null ? List.of() : mt.polygons(), sized.loads(), criteria);
         return new Designed(r, new Handoff(loads.l0(), loads.startShare(), loads.deliveredArea()));
     }
@@ -172,7 +172,7 @@ public final class FloorDesigner {
 
     private MemberResult notDesigned(Member m, Ends ends) {
         return new MemberResult(m.id(), floor.id(), m.kind(), m.start(), m.end(), m.length(), MemberStatus.UNSUPPORTED, null,
-                0, 0, 0, 1, new double[NC], new double[NC], ends.start().describe(), ends.end().describe(), List.of(), null,
+                0, 0, 0, 1, 1, new double[NC], new double[NC], ends.start().describe(), ends.end().describe(), List.of(), null,
                 null);
     }
 

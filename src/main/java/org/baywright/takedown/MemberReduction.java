@@ -55,4 +55,9 @@ record MemberReduction(double area, double kll, double[] factor) {
     double ordinaryLive() {
         return factor[Component.L_ORDINARY.ordinal()];
     }
+
+    /** The factor of roof live load (§4.8.2). */
+    double roofLive() {
+        return factor[Component.LR.ordinal()];
+    }
 }

@@ -100,7 +100,7 @@ final class MemberGroups {
     static boolean same(MemberResult a, MemberResult b) {
         return a.kind() == b.kind() && a.status() == b.status() && a.section().equals(b.section())
                 && near(a.length(), b.length()) && a.criteria().equals(b.criteria())
-                && near(a.kll(), b.kll()) && near(a.liveFactor(), b.liveFactor())
+                && near(a.kll(), b.kll()) && near(a.liveFactor(), b.liveFactor()) && near(a.roofLiveFactor(), b.roofLiveFactor())
                 && near(a.tributaryArea(), b.tributaryArea()) && near(a.reductionArea(), b.reductionArea())
                 && near(a.startReaction(), b.startReaction()) && near(a.endReaction(), b.endReaction())
                 && sameLoads(a.loads(), b.loads());

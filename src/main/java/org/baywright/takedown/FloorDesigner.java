@@ -121,16 +121,19 @@ public final class FloorDesigner {
         Optional<String> fixed = m.fixedSection();
         Optional<Section> fixedSection = fixed.flatMap(searches.catalog()::find);
         Map<LoadCase, List<SpanLoad>> caseLoads = reduction.apply(loads);
+        // serviceability under unreduced live load (settings.deflectionLiveLoad "unreduced", common practice)
+        Map<LoadCase, List<SpanLoad>> deflectionLoads = rules.liveLoad().deflectionUnreduced()
+                ? MemberReduction.none(reduction).apply(loads) : null;
         Searches.Sized sized;
         if (fixedSection.isPresent()) {
-            sized = searches.check(fixedSection.get(), span, caseLoads, criteria);
+            sized = searches.check(fixedSection.get(), span, caseLoads, deflectionLoads, criteria);
         } else {
             if (fixed.isPresent()) {
                 problems.add(new Problem(Problem.Severity.ERROR, "unknown-section", "floor " + floor.id(), m.id(),
                         "member " + m.id() + ": section " + fixed.get() + " is not in the catalog " + searches.catalog().name()
                                 + "; the member was sized instead", List.of(m.start(), m.end())));
             }
-            sized = searches.search(span, caseLoads, criteria,
+            sized = searches.search(span, caseLoads, deflectionLoads, criteria,
                     m.kind() == MemberKind.GIRDER ? rules.girders() : rules.beams());
         }
         BeamDesign d = sized.design();

@@ -133,7 +133,16 @@ final class FrontMatter {
 
     static String deflection(DesignBasis b) {
         return "live load: " + limit(b.deflection().live()) + "; dead + live (with own weight): " + limit(b.deflection().total())
-                + "; bare steel E·Ix";
+                + "; bare steel E·Ix; " + deflectionLiveLoad(b);
+    }
+
+    /** Which live load the deflection checks take: unreduced (the default, common practice) or as reduced for strength. */
+    static String deflectionLiveLoad(DesignBasis b) {
+        if (!b.liveLoad().reduce()) {
+            return "live load not reduced (reduction off)";
+        }
+        return b.liveLoad().deflectionReduced() ? "live load reduced as for strength (plan setting)"
+                : "live load unreduced (common practice for serviceability)";
     }
 
     static String deflectionSource(DesignBasis b) {
@@ -226,7 +235,10 @@ final class FrontMatter {
         f.paragraph(f.body, "Live load: " + limit(b.deflection().live()) + ". Dead plus live load, with the member's own weight: "
                 + limit(b.deflection().total()) + ". Source: " + deflectionSource(b) + ". These are serviceability criteria of the"
                 + " project, not clauses of " + AISC + ". Deflections are those of the bare steel section (E·Ix), simply"
-                + " supported, under service loads.");
+                + " supported, under service loads, with the " + (b.liveLoad().reduce() && b.liveLoad().deflectionReduced()
+                        ? "live load reduced as for strength (ASCE 7-16 §4.7, §4.8; plan setting deflectionLiveLoad \"reduced\")."
+                        : "live load unreduced (common practice: serviceability is checked under the full live load; plan"
+                                + " setting deflectionLiveLoad \"unreduced\", the default)."));
 
         f.heading2("How members and columns are designed", 40);
         f.bullet(f.body, "Every beam and girder is a simple span. Its statics (reactions, shear, moment, deflection) are"

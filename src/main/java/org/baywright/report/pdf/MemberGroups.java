@@ -110,16 +110,25 @@ final class MemberGroups {
         if (!near(a.span(), b.span())) {
             return false;
         }
+        if (a.separateDeflectionLoads() != b.separateDeflectionLoads()) {
+            return false;
+        }
         for (LoadCase c : LoadCase.values()) {
-            List<double[]> x = canonical(a.of(c).loads());
-            List<double[]> y = canonical(b.of(c).loads());
-            if (x.size() != y.size()) {
+            if (!sameList(canonical(a.of(c).loads()), canonical(b.of(c).loads()))
+                    || !sameList(canonical(a.forDeflection(c).loads()), canonical(b.forDeflection(c).loads()))) {
                 return false;
             }
-            for (int i = 0; i < x.size(); i++) {
-                if (!near(x.get(i), y.get(i))) {
-                    return false;
-                }
+        }
+        return true;
+    }
+
+    private static boolean sameList(List<double[]> x, List<double[]> y) {
+        if (x.size() != y.size()) {
+            return false;
+        }
+        for (int i = 0; i < x.size(); i++) {
+            if (!near(x.get(i), y.get(i))) {
+                return false;
             }
         }
         return true;

@@ -211,6 +211,8 @@ public final class FloorDesigner {
 
     /** K_LL of a beam or girder (ASCE 7-16 Table 4.7-1): 1 for an edge member with a cantilever slab beyond it, else 2. */
     private double kll(Member m) {
-        return SlabEdges.isEdgeWithCantilever(floor, in.members(), m, Takedown.CANTILEVER_SLAB, Takedown.TOLERANCE) ? 1 : 2;
+        MemberTributary mt = trib.members().get(m.id());
+        return SlabEdges.isEdgeWithCantilever(floor, in.members(), m, mt == null ? List.of() : mt.polygons(),
+                Takedown.CANTILEVER_SLAB, Takedown.TOLERANCE) ? 1 : 2;
     }
 }

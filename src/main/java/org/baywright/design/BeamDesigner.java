@@ -104,8 +104,13 @@ public final class BeamDesigner {
         for (int i = 0; i < fr.length; i++) {
             bounds[i] = fr[i] * span;
         }
-        SimpleSpan liveSpan = SimpleSpan.combine(new double[] {0, 1, 1, 1}, caseSpans);
-        this.totalSpan = SimpleSpan.combine(new double[] {1, 1, 1, 1}, caseSpans);
+        // the deflection checks take the service loads meant for them (the live load unreduced, when given)
+        SimpleSpan[] deflectionSpans = new SimpleSpan[cases.length];
+        for (int i = 0; i < cases.length; i++) {
+            deflectionSpans[i] = loads.forDeflection(cases[i]);
+        }
+        SimpleSpan liveSpan = SimpleSpan.combine(new double[] {0, 1, 1, 1}, deflectionSpans);
+        this.totalSpan = SimpleSpan.combine(new double[] {1, 1, 1, 1}, deflectionSpans);
         org.baywright.analysis.Extreme ld = liveSpan.maxDeflection(1.0);
         this.liveDeflectionEi = ld.value();
         this.totalDeflectionEi = totalSpan.maxDeflection(1.0).value();
@@ -126,8 +131,9 @@ public final class BeamDesigner {
         this.totalCombination = new LoadCombination(serviceName(total), total, Combinations.SERVICE_REFERENCE);
         this.totalCombinationSw = new LoadCombination(totalCombination.name() + " + self-weight", total,
                 Combinations.SERVICE_REFERENCE);
-        this.liveNote = limitNote(criteria.deflection().live());
-        this.totalNote = limitNote(criteria.deflection().total());
+        String which = loads.separateDeflectionLoads() ? ", live load unreduced" : "";
+        this.liveNote = limitNote(criteria.deflection().live()) + which;
+        this.totalNote = limitNote(criteria.deflection().total()) + which;
         this.segments = new UnbracedSegment[bounds.length - 1];
         for (int i = 0; i < segments.length; i++) {
             segments[i] = new UnbracedSegment(i, segments.length, bounds[i], bounds[i + 1]);

@@ -11,14 +11,20 @@ import org.baywright.load.LoadCase;
 /**
  * The service loads on a simple-span member, by load case, without the member's own weight (the
  * designer adds that per candidate). All loads act downward.
+ *
+ * <p>The strength checks use these loads (live loads reduced where the standard permits). The
+ * deflection checks use them too, unless {@link #withDeflectionLoads} gives other service loads for
+ * serviceability: the unreduced live load, which common practice checks deflection under.
  */
 public final class BeamLoads {
     private final double span;
     private final Map<LoadCase, SimpleSpan> cases;
+    private final Map<LoadCase, SimpleSpan> deflectionCases;
 
-    private BeamLoads(double span, Map<LoadCase, SimpleSpan> cases) {
+    private BeamLoads(double span, Map<LoadCase, SimpleSpan> cases, Map<LoadCase, SimpleSpan> deflectionCases) {
         this.span = span;
         this.cases = cases;
+        this.deflectionCases = deflectionCases;
     }
 
     /** Loads per case on a span of {@code span} metres; missing cases carry nothing. */
@@ -26,6 +32,29 @@ public final class BeamLoads {
         if (!(span > 0) || !Double.isFinite(span)) {
             throw new IllegalArgumentException("span must be a positive length, got " + span);
         }
+        Map<LoadCase, SimpleSpan> m = spans(span, loads);
+        return new BeamLoads(span, m, m);
+    }
+
+    /**
+     * The same strength loads with other service loads for the deflection checks (e.g. the live load
+     * unreduced); the cases present must be the same.
+     */
+    public BeamLoads withDeflectionLoads(Map<LoadCase, ? extends List<? extends SpanLoad>> loads) {
+        return new BeamLoads(span, cases, spans(span, loads));
+    }
+
+    /** True when the deflection checks use loads of their own ({@link #withDeflectionLoads}). */
+    public boolean separateDeflectionLoads() {
+        return deflectionCases != cases;
+    }
+
+    /** The statics of one case as the deflection checks take it (an empty span when the case has no load). */
+    public SimpleSpan forDeflection(LoadCase c) {
+        return deflectionCases.get(c);
+    }
+
+    private static Map<LoadCase, SimpleSpan> spans(double span, Map<LoadCase, ? extends List<? extends SpanLoad>> loads) {
         EnumMap<LoadCase, SimpleSpan> m = new EnumMap<>(LoadCase.class);
         for (LoadCase c : LoadCase.values()) {
             List<? extends SpanLoad> l = loads.get(c);
@@ -37,7 +66,7 @@ public final class BeamLoads {
             }
             m.put(c, s);
         }
-        return new BeamLoads(span, Collections.unmodifiableMap(m));
+        return Collections.unmodifiableMap(m);
     }
 
     public double span() {

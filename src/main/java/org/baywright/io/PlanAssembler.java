@@ -73,6 +73,7 @@ final class PlanAssembler {
     private static final Map<String, GridLine.Axis> AXES = ordered("x", GridLine.Axis.X, "y", GridLine.Axis.Y);
     private static final Map<String, Boolean> PARTITION_AS_DEAD = ordered("live", false, "dead", true);
     private static final Map<String, Boolean> GIRDER_AREA_DELIVERED = ordered("delivered", true, "half-bay", false);
+    private static final Map<String, Boolean> DEFLECTION_LIVE_REDUCED = ordered("unreduced", false, "reduced", true);
     private static final Map<String, LiveLoadUse> USES = ordered("ordinary", LiveLoadUse.ORDINARY, "assembly",
             LiveLoadUse.ASSEMBLY, "garage", LiveLoadUse.GARAGE, "not-reducible", LiveLoadUse.NOT_REDUCIBLE);
 
@@ -133,6 +134,8 @@ final class PlanAssembler {
             live = ratio(defl.live(), p + "/deflection/live", "deflection live", live);
             total = ratio(defl.total(), p + "/deflection/total", "deflection total", total);
         }
+        boolean deflectionReduced = choice(s.deflectionLiveLoad(), p + "/deflectionLiveLoad", "", "deflectionLiveLoad",
+                DEFLECTION_LIVE_REDUCED, def.deflectionLiveReduced());
         List<String> beamSeries = series(s.beamSeries(), p + "/beamSeries", "beamSeries", def.beamSeries());
         List<String> girderSeries = series(s.girderSeries(), p + "/girderSeries", "girderSeries", def.girderSeries());
         List<String> columnSeries = series(s.columnSeries(), p + "/columnSeries", "columnSeries", def.columnSeries());
@@ -168,7 +171,7 @@ final class PlanAssembler {
             }
         }
         return new DesignSettings(method, fy, live, total, beamSeries, girderSeries, columnSeries, maxDepth, spliceEvery,
-                reduction, partitionAsDead, delivered, catalog);
+                reduction, partitionAsDead, delivered, catalog, deflectionReduced);
     }
 
     private double ratio(Double value, String pointer, String label, double def) {

@@ -40,7 +40,7 @@ final class PlanDocument {
     }
 
     /** The design basis; every key is optional and defaults to {@code DesignSettings.defaults()}. */
-    record SettingsDoc(String method, @QuantityOf(Dimension.STRESS) String fy, DeflectionDoc deflection,
+    record SettingsDoc(String method, @QuantityOf(Dimension.STRESS) String fy, DeflectionDoc deflection, String deflectionLiveLoad,
             List<String> beamSeries, List<String> girderSeries, List<String> columnSeries,
             @JsonInclude(JsonInclude.Include.ALWAYS) @QuantityOf(Dimension.LENGTH) String maxBeamDepth,
             Integer spliceEvery, Boolean liveLoadReduction, String partition, String girderArea, String catalog) {

@@ -67,7 +67,8 @@ final class PlanWriter {
 
     private SettingsDoc settings(DesignSettings s) {
         return new SettingsDoc(s.method().toLowerCase(Locale.ROOT), q(s.fy(), units.stress()),
-                new DeflectionDoc(finite(s.liveDeflection()), finite(s.totalDeflection())), s.beamSeries(), s.girderSeries(),
+                new DeflectionDoc(finite(s.liveDeflection()), finite(s.totalDeflection())),
+                s.deflectionLiveReduced() ? "reduced" : "unreduced", s.beamSeries(), s.girderSeries(),
                 s.columnSeries(), s.maxBeamDepth() == 0 ? null : q(s.maxBeamDepth(), units.smallLength()), s.spliceEvery(),
                 s.liveLoadReduction(), s.partitionAsDead() ? "dead" : "live", s.girderAreaDelivered() ? "delivered" : "half-bay",
                 s.catalog());

@@ -19,15 +19,25 @@ import java.util.List;
  * @param girderAreaDelivered for a girder's A_T use the area whose load it actually receives (true,
  *     the default and conservative) or half the bay on each side (false)
  * @param catalog catalog file, or empty for the built-in W shapes
+ * @param deflectionLiveReduced check deflection under the live load as reduced for strength (true) or
+ *     unreduced (false, the default: common practice checks serviceability under unreduced live load)
  */
 public record DesignSettings(String method, double fy, double liveDeflection, double totalDeflection,
         List<String> beamSeries, List<String> girderSeries, List<String> columnSeries, double maxBeamDepth,
         int spliceEvery, boolean liveLoadReduction, boolean partitionAsDead, boolean girderAreaDelivered,
-        String catalog) {
+        String catalog, boolean deflectionLiveReduced) {
     public DesignSettings {
         beamSeries = List.copyOf(beamSeries);
         girderSeries = List.copyOf(girderSeries);
         columnSeries = List.copyOf(columnSeries);
+    }
+
+    /** The settings with deflection checked under unreduced live load (the default). */
+    public DesignSettings(String method, double fy, double liveDeflection, double totalDeflection, List<String> beamSeries,
+            List<String> girderSeries, List<String> columnSeries, double maxBeamDepth, int spliceEvery,
+            boolean liveLoadReduction, boolean partitionAsDead, boolean girderAreaDelivered, String catalog) {
+        this(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries, maxBeamDepth, spliceEvery,
+                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, false);
     }
 
     /** LRFD, 50 ksi, L/360 and L/240, any beam series, W14 columns spliced every two levels, reduction on. */
@@ -39,43 +49,43 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
     /** The same settings with another design method ("lrfd" or "asd"). */
     public DesignSettings withMethod(String newMethod) {
         return new DesignSettings(newMethod, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
     }
 
     /** The same settings with another yield stress, Pa. */
     public DesignSettings withFy(double newFy) {
         return new DesignSettings(method, newFy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
     }
 
     /** The same settings with other deflection limits (span ratios, 0 = off). */
     public DesignSettings withDeflection(double live, double total) {
         return new DesignSettings(method, fy, live, total, beamSeries, girderSeries, columnSeries, maxBeamDepth, spliceEvery,
-                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog);
+                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
     }
 
     /** The same settings with other series allowed for beams and for girders (empty = all). */
     public DesignSettings withBeamSeries(List<String> beams, List<String> girders) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beams, girders, columnSeries, maxBeamDepth,
-                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog);
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
     }
 
     /** The same settings with other series allowed for columns. */
     public DesignSettings withColumnSeries(List<String> series) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, series, maxBeamDepth,
-                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog);
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
     }
 
     /** The same settings with another depth limit for beams and girders, m (0 = none). */
     public DesignSettings withMaxBeamDepth(double depth) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries, depth,
-                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog);
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
     }
 
     /** The same settings with column splices every {@code levels} levels. */
     public DesignSettings withSpliceEvery(int levels) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, levels, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog);
+                maxBeamDepth, levels, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
     }
 
     /**
@@ -87,12 +97,20 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
      */
     public DesignSettings withLiveLoad(boolean reduce, boolean partitionsAsDead, boolean girderDelivered) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, reduce, partitionsAsDead, girderDelivered, catalog);
+                maxBeamDepth, spliceEvery, reduce, partitionsAsDead, girderDelivered, catalog, deflectionLiveReduced);
+    }
+
+    /**
+     * The same settings with deflection checked under reduced (true) or unreduced (false) live load.
+     */
+    public DesignSettings withDeflectionLiveReduced(boolean reduced) {
+        return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, reduced);
     }
 
     /** The same settings with another catalog file (empty: the built-in W shapes). */
     public DesignSettings withCatalog(String file) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, file);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, file, deflectionLiveReduced);
     }
 }

@@ -8,7 +8,8 @@ import java.util.Optional;
  * a typical floor is drawn once and repeats.
  *
  * @param slabEdge the slab outline (may overhang the grid or be notched)
- * @param roof true for a roof: live load is roof live load and reduces by §4.8
+ * @param roof true for a roof: its ordinary roof live load reduces by ASCE 7-16 §4.8.2; occupancy loads on it
+ *     (floor live, or roof live with a use other than ordinary) are floor live load reduced by §4.7 (§4.8.3)
  */
 public record Floor(String id, String name, boolean roof, Polygon slabEdge, List<Deck> decks, List<Member> members,
         List<Infill> infills, List<Opening> openings, List<AreaLoad> areaLoads, List<LineLoad> lineLoads,

@@ -190,6 +190,7 @@ public final class RunSummary {
         j.put("reductionArea", us.floorArea().fromSi(m.reductionArea()));
         j.put("kll", m.kll());
         j.put("liveReductionFactor", m.liveFactor());
+        j.put("roofLiveReductionFactor", m.roofLiveFactor());
         Map<String, Object> ratios = new LinkedHashMap<>();
         if (m.design() != null) {
             for (Check c : m.design().checks()) {

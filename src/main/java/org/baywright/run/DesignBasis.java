@@ -65,7 +65,8 @@ public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, Str
     public static DesignBasis of(Plan plan, Catalog catalog) {
         DesignSettings s = plan.settings();
         return new DesignBasis(methodOf(plan), steel(s.fy()), catalog, s.catalog(), unitsOf(plan),
-                new DeflectionLimits(s.liveDeflection(), s.totalDeflection()), new LiveLoadRules(s.liveLoadReduction(), s.partitionAsDead(), s.girderAreaDelivered()),
+                new DeflectionLimits(s.liveDeflection(), s.totalDeflection()), new LiveLoadRules(s.liveLoadReduction(), s.partitionAsDead(), s.girderAreaDelivered(),
+                        s.deflectionLiveReduced()),
                 filter(s.beamSeries(), s.maxBeamDepth()), filter(s.girderSeries(), s.maxBeamDepth()), s.columnSeries(),
                 s.spliceEvery());
     }

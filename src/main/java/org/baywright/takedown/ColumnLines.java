@@ -117,14 +117,17 @@ public record ColumnLines(List<Line> lines, List<Problem> problems) {
                     run[k] += d[k];
                 }
                 double a = fd.columnArea().getOrDefault(c.id(), 0.0);
-                if (levels.get(i).floor().roof()) {
+                boolean live = false;
+                for (Component comp : Component.values()) {
+                    live |= comp.isLive() && d[comp.ordinal()] != 0;
+                }
+                // a roof carrying occupancy live load L (assembly, garden…) is reduced as a floor (ASCE 7-16
+                // §4.8.3): its area counts in the §4.7 A_T and it counts as a floor supported. Its area is then
+                // not in the roof A_T, so roof live load beside it is reduced by a smaller R1 (conservative).
+                if (levels.get(i).floor().roof() && !live) {
                     roofArea += a;
                 } else {
                     floorArea += a;
-                    boolean live = false;
-                    for (Component comp : Component.values()) {
-                        live |= comp.isLive() && d[comp.ordinal()] != 0;
-                    }
                     if (live) {
                         floors++;
                     }

@@ -110,7 +110,7 @@ public final class FloorDesigner {
         MemberLoads.Reactions rx = loads.reactions(span, d.section());
         MemberTributary mt = trib.members().get(m.id());
         MemberResult r = new MemberResult(m.id(), floor.id(), m.kind(), m.start(), m.end(), span, d.status(), d,
-                loads.ownArea(), reduction.area(), reduction.kll(), reduction.ordinaryLive(), rx.start(), rx.end(),
+                loads.ownArea(), reduction.area(), reduction.kll(), reduction.ordinaryLive(), reduction.roofLive(), rx.start(), rx.end(),
                 ends.start().describe(), ends.end().describe(), mt == null ? List.of() : mt.polygons(), sized.loads(), criteria);
         return new Designed(r, new Handoff(loads.l0(), loads.startShare(), loads.deliveredArea()));
     }
@@ -121,16 +121,19 @@ public final class FloorDesigner {
         Optional<String> fixed = m.fixedSection();
         Optional<Section> fixedSection = fixed.flatMap(searches.catalog()::find);
         Map<LoadCase, List<SpanLoad>> caseLoads = reduction.apply(loads);
+        // serviceability under unreduced live load (settings.deflectionLiveLoad "unreduced", common practice)
+        Map<LoadCase, List<SpanLoad>> deflectionLoads = rules.liveLoad().deflectionUnreduced()
+                ? MemberReduction.none(reduction).apply(loads) : null;
         Searches.Sized sized;
         if (fixedSection.isPresent()) {
-            sized = searches.check(fixedSection.get(), span, caseLoads, criteria);
+            sized = searches.check(fixedSection.get(), span, caseLoads, deflectionLoads, criteria);
         } else {
             if (fixed.isPresent()) {
                 problems.add(new Problem(Problem.Severity.ERROR, "unknown-section", "floor " + floor.id(), m.id(),
                         "member " + m.id() + ": section " + fixed.get() + " is not in the catalog " + searches.catalog().name()
                                 + "; the member was sized instead", List.of(m.start(), m.end())));
             }
-            sized = searches.search(span, caseLoads, criteria,
+            sized = searches.search(span, caseLoads, deflectionLoads, criteria,
                     m.kind() == MemberKind.GIRDER ? rules.girders() : rules.beams());
         }
         BeamDesign d = sized.design();
@@ -172,7 +175,7 @@ public final class FloorDesigner {
 
     private MemberResult notDesigned(Member m, Ends ends) {
         return new MemberResult(m.id(), floor.id(), m.kind(), m.start(), m.end(), m.length(), MemberStatus.UNSUPPORTED, null,
-                0, 0, 0, 1, new double[NC], new double[NC], ends.start().describe(), ends.end().describe(), List.of(), null,
+                0, 0, 0, 1, 1, new double[NC], new double[NC], ends.start().describe(), ends.end().describe(), List.of(), null,
                 null);
     }
 
@@ -208,6 +211,8 @@ public final class FloorDesigner {
 
     /** K_LL of a beam or girder (ASCE 7-16 Table 4.7-1): 1 for an edge member with a cantilever slab beyond it, else 2. */
     private double kll(Member m) {
-        return SlabEdges.isEdgeWithCantilever(floor, in.members(), m, Takedown.CANTILEVER_SLAB, Takedown.TOLERANCE) ? 1 : 2;
+        MemberTributary mt = trib.members().get(m.id());
+        return SlabEdges.isEdgeWithCantilever(floor, in.members(), m, mt == null ? List.of() : mt.polygons(),
+                Takedown.CANTILEVER_SLAB, Takedown.TOLERANCE) ? 1 : 2;
     }
 }

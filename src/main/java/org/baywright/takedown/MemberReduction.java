@@ -38,6 +38,13 @@ record MemberReduction(double area, double kll, double[] factor) {
         return new MemberReduction(area, kll, factor);
     }
 
+    /** The same member with nothing reduced (every factor 1). */
+    static MemberReduction none(MemberReduction r) {
+        double[] one = new double[r.factor.length];
+        Arrays.fill(one, 1.0);
+        return new MemberReduction(r.area, r.kll, one);
+    }
+
     /** The member's service loads by load case, each component scaled by its factor. */
     Map<LoadCase, List<SpanLoad>> apply(MemberLoads loads) {
         Map<LoadCase, List<SpanLoad>> caseLoads = new EnumMap<>(LoadCase.class);
@@ -54,5 +61,10 @@ record MemberReduction(double area, double kll, double[] factor) {
     /** The factor of ordinary floor live load. */
     double ordinaryLive() {
         return factor[Component.L_ORDINARY.ordinal()];
+    }
+
+    /** The factor of roof live load (§4.8.2). */
+    double roofLive() {
+        return factor[Component.LR.ordinal()];
     }
 }

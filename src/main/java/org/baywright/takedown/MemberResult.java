@@ -14,7 +14,9 @@ import org.baywright.plan.Point;
  * @param tributaryArea the deck area it carries directly, m²
  * @param reductionArea A_T for live-load reduction: the area whose load it receives, m²
  * @param kll live-load element factor used (ASCE 7-16 Table 4.7-1)
- * @param liveFactor reduction factor applied to its ordinary live load (1 = none)
+ * @param liveFactor reduction factor applied to its ordinary floor live load L, ASCE 7-16 §4.7 (1 = none)
+ * @param roofLiveFactor reduction factor applied to its roof live load Lr, ASCE 7-16 §4.8.2: R1·R2, or
+ *     12 psf / L0 where that minimum governed (1 = none, or no roof live load)
  * @param startReaction reactions at the start end by component, unreduced, self-weight in D, N
  * @param endReaction reactions at the end, N
  * @param startSupport id of what supports the start ("column C-A1", "member G-1"), or empty
@@ -26,7 +28,7 @@ import org.baywright.plan.Point;
  */
 public record MemberResult(String id, String floor, MemberKind kind, Point start, Point end, double length,
         MemberStatus status, BeamDesign design, double tributaryArea, double reductionArea, double kll,
-        double liveFactor, double[] startReaction, double[] endReaction, String startSupport, String endSupport,
+        double liveFactor, double roofLiveFactor, double[] startReaction, double[] endReaction, String startSupport, String endSupport,
         List<org.baywright.plan.Polygon> tributary, org.baywright.design.BeamLoads loads,
         org.baywright.design.BeamCriteria criteria) {
 

@@ -27,7 +27,8 @@ public final class Searches {
      * The inputs that fix the outcome of a search: span, service loads by load case, criteria and filter
      * (the catalog is the run's). Equal keys give equal designs.
      */
-    private record Key(double span, List<List<SpanLoad>> loads, BeamCriteria criteria, SearchFilter filter) {
+    private record Key(double span, List<List<SpanLoad>> loads, List<List<SpanLoad>> deflectionLoads, BeamCriteria criteria,
+            SearchFilter filter) {
     }
 
     private final Catalog catalog;
@@ -42,16 +43,16 @@ public final class Searches {
         return catalog;
     }
 
-    /** The lightest section of the catalog allowed by {@code filter} for these loads. */
-    Sized search(double span, Map<LoadCase, List<SpanLoad>> caseLoads, BeamCriteria criteria, SearchFilter filter) {
-        List<List<SpanLoad>> byCase = new ArrayList<>();
-        for (LoadCase c : LoadCase.values()) {
-            byCase.add(List.copyOf(caseLoads.getOrDefault(c, List.of())));
-        }
-        Key key = new Key(span, byCase, criteria, filter);
+    /**
+     * The lightest section of the catalog allowed by {@code filter} for these loads; {@code deflectionLoads}
+     * are the service loads of the deflection checks when they differ (live load unreduced), else null.
+     */
+    Sized search(double span, Map<LoadCase, List<SpanLoad>> caseLoads, Map<LoadCase, List<SpanLoad>> deflectionLoads,
+            BeamCriteria criteria, SearchFilter filter) {
+        Key key = new Key(span, byCase(caseLoads), deflectionLoads == null ? null : byCase(deflectionLoads), criteria, filter);
         Sized sized = done.get(key);
         if (sized == null) {
-            BeamLoads bl = BeamLoads.of(span, caseLoads);
+            BeamLoads bl = loads(span, caseLoads, deflectionLoads);
             sized = new Sized(bl, new BeamDesigner(bl, criteria).search(catalog, filter));
             Sized raced = done.putIfAbsent(key, sized);
             sized = raced != null ? raced : sized;
@@ -59,9 +60,24 @@ public final class Searches {
         return sized;
     }
 
-    /** The check of a fixed section for these loads. */
-    Sized check(Section fixed, double span, Map<LoadCase, List<SpanLoad>> caseLoads, BeamCriteria criteria) {
+    private static List<List<SpanLoad>> byCase(Map<LoadCase, List<SpanLoad>> caseLoads) {
+        List<List<SpanLoad>> byCase = new ArrayList<>();
+        for (LoadCase c : LoadCase.values()) {
+            byCase.add(List.copyOf(caseLoads.getOrDefault(c, List.of())));
+        }
+        return byCase;
+    }
+
+    private static BeamLoads loads(double span, Map<LoadCase, List<SpanLoad>> caseLoads,
+            Map<LoadCase, List<SpanLoad>> deflectionLoads) {
         BeamLoads bl = BeamLoads.of(span, caseLoads);
+        return deflectionLoads == null ? bl : bl.withDeflectionLoads(deflectionLoads);
+    }
+
+    /** The check of a fixed section for these loads (deflection loads as for {@link #search}). */
+    Sized check(Section fixed, double span, Map<LoadCase, List<SpanLoad>> caseLoads,
+            Map<LoadCase, List<SpanLoad>> deflectionLoads, BeamCriteria criteria) {
+        BeamLoads bl = loads(span, caseLoads, deflectionLoads);
         return new Sized(bl, new BeamDesigner(bl, criteria).checkFixed(fixed));
     }
 }

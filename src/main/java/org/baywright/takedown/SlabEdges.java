@@ -13,48 +13,91 @@ import org.baywright.plan.Polygon;
  * Classifies members and columns for the live-load element factor K_LL of ASCE 7-16 Table 4.7-1 from
  * the plan's geometry: interior or edge, and whether a cantilever slab extends beyond an edge.
  *
- * <p>Method: rays from the member's midpoint along the deck span (both ways), or from the column along
- * the grid directions where no other column stands; a side with no supporting member (or column)
- * before the slab edge is an exterior side, and the slab is a cantilever slab on that side when its
- * edge lies more than the given distance beyond.
+ * <p>Method: for a member, each side of it on which its own tributary area lies (probed just off the
+ * member at stations along it) is followed along the span of the deck region there, away from the
+ * member; a side whose deck spans along the member delivers no load to it and is skipped. For a column,
+ * rays along the grid directions where no other column stands. A side with no supporting member (or
+ * column) before the slab edge is an exterior side, and the slab is a cantilever slab on that side when
+ * its edge lies more than the given distance beyond. Probing the member's own tributary, not its
+ * midpoint alone, matters where two deck regions meet along the member (a balcony deck spanning onto a
+ * girder that the main deck runs parallel to): the midpoint lies on their common boundary and could be
+ * taken for either.
  */
 public final class SlabEdges {
     private SlabEdges() {
     }
 
-    /** True for an edge beam or girder with a cantilever slab beyond it (K_LL = 1). */
-    public static boolean isEdgeWithCantilever(Floor floor, List<Member> members, Member m, double cantilever, double tol) {
-        Point mid = new Point((m.start().x() + m.end().x()) / 2, (m.start().y() + m.end().y()) / 2);
-        double angle = spanAngle(floor, mid);
-        double dx = Math.cos(Math.toRadians(angle));
-        double dy = Math.sin(Math.toRadians(angle));
-        double mx = m.end().x() - m.start().x();
-        double my = m.end().y() - m.start().y();
-        double cross = Math.abs(mx * dy - my * dx) / m.length();
-        if (cross < Math.sin(Math.toRadians(1))) {
-            return false; // parallel to the span: carries no deck, so no slab beyond it either
+    /** Stations along a member where its sides are probed, as fractions of its length. */
+    private static final double[] STATIONS = {0.1, 0.3, 0.5, 0.7, 0.9};
+
+    /** How far off the member's line a side is probed, m: well inside any tributary strip, beyond the tolerance. */
+    private static final double PROBE = 0.05;
+
+    /**
+     * True for an edge beam or girder with a cantilever slab beyond it (K_LL = 1): on a side where the
+     * member's own tributary area lies, the deck there spans away from the member and reaches the slab
+     * edge, more than {@code cantilever} beyond, with no other member in between.
+     *
+     * @param tributary the member's tributary polygons (empty when it carries no deck: then false)
+     */
+    public static boolean isEdgeWithCantilever(Floor floor, List<Member> members, Member m, List<Polygon> tributary,
+            double cantilever, double tol) {
+        double len = m.length();
+        if (tributary.isEmpty() || !(len > tol)) {
+            return false;
         }
-        for (int sign = -1; sign <= 1; sign += 2) {
-            double ux = sign * dx;
-            double uy = sign * dy;
-            double edge = rayToPolygon(mid, ux, uy, floor.slabEdge());
-            double nearest = Double.POSITIVE_INFINITY;
-            for (Member o : members) {
-                if (o == m) {
-                    continue;
+        double mx = (m.end().x() - m.start().x()) / len;
+        double my = (m.end().y() - m.start().y()) / len;
+        for (double f : STATIONS) {
+            Point at = new Point(m.start().x() + f * (m.end().x() - m.start().x()), m.start().y() + f * (m.end().y() - m.start().y()));
+            for (int side = -1; side <= 1; side += 2) {
+                // normal (−my, mx) times side: the probe just off the member on that side
+                Point probe = new Point(at.x() - side * my * PROBE, at.y() + side * mx * PROBE);
+                if (!inAny(tributary, probe)) {
+                    continue; // no load reaches the member from this side here
                 }
-                double t = rayToSegment(mid, ux, uy, o.start(), o.end());
-                if (t > tol && t < nearest) {
-                    nearest = t;
+                double angle = spanAngle(floor, probe);
+                double dx = Math.cos(Math.toRadians(angle));
+                double dy = Math.sin(Math.toRadians(angle));
+                double cross = dx * -my + dy * mx; // span direction · normal
+                if (Math.abs(cross) < Math.sin(Math.toRadians(1))) {
+                    continue; // the deck here spans along the member
+                }
+                double sign = Math.signum(cross) * side; // the span direction pointing to this side
+                if (cantileverBeyond(floor, members, m, at, sign * dx, sign * dy, cantilever, tol)) {
+                    return true;
                 }
             }
-            // a member on the slab edge itself (within the tolerance) supports the slab up to the edge:
-            // no cantilever beyond it, whichever way rounding puts the two crossings
-            if (nearest > edge + tol && edge > cantilever) {
+        }
+        return false;
+    }
+
+    private static boolean inAny(List<Polygon> polygons, Point p) {
+        for (Polygon poly : polygons) {
+            if (contains(poly, p)) {
                 return true;
             }
         }
         return false;
+    }
+
+    /** Along the ray from {@code from}, the slab edge lies more than {@code cantilever} away with no other member before it. */
+    private static boolean cantileverBeyond(Floor floor, List<Member> members, Member m, Point from, double ux, double uy,
+            double cantilever, double tol) {
+        double edge = rayToPolygon(from, ux, uy, floor.slabEdge());
+        double nearest = Double.POSITIVE_INFINITY;
+        for (Member o : members) {
+            if (o == m) {
+                continue;
+            }
+            double t = rayToSegment(from, ux, uy, o.start(), o.end());
+            if (t > tol && t < nearest) {
+                nearest = t;
+            }
+        }
+        // a member on the slab edge itself (within the tolerance) supports the slab up to the edge:
+        // no cantilever beyond it, whichever way rounding puts the two crossings
+        return nearest > edge + tol && edge > cantilever;
     }
 
     /**

@@ -7,9 +7,11 @@ package org.baywright.takedown;
  * @param unreduced axial force by {@link org.baywright.load.LoadCase} ordinal (D, L, Lr, S), N, with
  *     live loads unreduced; D includes all self-weight above the storey's base
  * @param reduced the same with live and roof live reduced (ASCE 7-16 §4.7, §4.8)
- * @param reductionArea cumulative A_T of the floors above (roofs excluded: roof live load reduces by
- *     its own area, §4.8), m²
- * @param roofArea cumulative area of the roofs above, m² (the A_T of roof live load)
+ * @param reductionArea cumulative A_T of the floors above, with roofs carrying occupancy live load L
+ *     (reduced as floors, ASCE 7-16 §4.8.3); other roofs excluded (roof live load reduces by its own
+ *     area, §4.8.2), m²
+ * @param roofArea cumulative area of the roofs above that carry no occupancy live load, m² (the A_T of
+ *     roof live load)
  * @param floorsSupported floors with live load supported
  * @param required required strength (Pu or Pa), N
  * @param available available strength of the tier's section, N

@@ -191,7 +191,7 @@ class CliContractTest {
                 wrong + ": error: /grid/1/x (B): x: a quantity is text with its unit, not the bare number 30; use a number with "
                         + "ft, in, m, mm or cm, e.g. 35ft, 30'-6\", 420in, 10.5m, 250mm",
                 wrong + ": error: /settings/colour: unknown field \"colour\" in the settings; the fields of the settings are method, "
-                        + "fy, deflection, beamSeries, girderSeries, columnSeries, maxBeamDepth, spliceEvery, liveLoadReduction, "
+                        + "fy, deflection, deflectionLiveLoad, beamSeries, girderSeries, columnSeries, maxBeamDepth, spliceEvery, liveLoadReduction, "
                         + "partition, girderArea, catalog",
                 wrong + ": error: /units: units: \"yards\" is not a unit system; use \"us\" (feet, kips, psf) or \"si\" (metres, "
                         + "kN, kPa)"),

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Set;
 import org.baywright.calc.Quantity;
 import org.baywright.load.DesignMethod;
+import org.baywright.load.LiveLoadRules;
 import org.baywright.load.LoadCase;
 import org.baywright.load.Combinations;
 import org.baywright.plan.DesignSettings;
@@ -47,10 +48,13 @@ final class CheckerPages {
                 + " storey height as unbraced length about both axes.");
         f.bullet(f.body, "Beams and girders are simple spans of bare steel: no composite action with the slab is counted"
                 + " (conservative for strength and stiffness), and no continuity or end restraint.");
-        f.bullet(f.body, "Deflections are computed on the bare steel section under service loads, with the live load as"
-                + " reduced for the member's strength design (" + (st.liveLoadReduction() ? "live-load reduction on"
-                        : "live-load reduction off: full live load") + "). Limits: live load "
-                + FrontMatter.limit(st.liveDeflection()) + ", total " + FrontMatter.limit(st.totalDeflection()) + ".");
+        LiveLoadRules ll = cx.basis().liveLoad();
+        f.bullet(f.body, "Deflections are computed on the bare steel section under service loads, with the live load "
+                + (!ll.reduce() ? "unreduced (live-load reduction is off)"
+                        : ll.deflectionReduced() ? "as reduced for the member's strength design (plan setting)"
+                                : "unreduced (common practice for serviceability; the strength checks use the reduced live load)")
+                + ". Limits: live load " + FrontMatter.limit(st.liveDeflection()) + ", total "
+                + FrontMatter.limit(st.totalDeflection()) + ".");
         f.bullet(f.body, "Deck: its span direction is taken from the plan; the deck itself (its span between the members"
                 + " that carry it, overhangs, and its strength as a form and as a floor) is chosen and checked by the"
                 + " engineer of record from the deck maker's published tables.");

@@ -133,7 +133,16 @@ final class FrontMatter {
 
     static String deflection(DesignBasis b) {
         return "live load: " + limit(b.deflection().live()) + "; dead + live (with own weight): " + limit(b.deflection().total())
-                + "; bare steel E·Ix";
+                + "; bare steel E·Ix; " + deflectionLiveLoad(b);
+    }
+
+    /** Which live load the deflection checks take: unreduced (the default, common practice) or as reduced for strength. */
+    static String deflectionLiveLoad(DesignBasis b) {
+        if (!b.liveLoad().reduce()) {
+            return "live load not reduced (reduction off)";
+        }
+        return b.liveLoad().deflectionReduced() ? "live load reduced as for strength (plan setting)"
+                : "live load unreduced (common practice for serviceability)";
     }
 
     static String deflectionSource(DesignBasis b) {
@@ -175,7 +184,8 @@ final class FrontMatter {
                 + " is checked under its own nominal weight)" + (b.liveLoad().partitionAsDead() ? ", and the partition allowance" : ""));
         lc.row("L", "Floor live load" + (b.liveLoad().partitionAsDead() ? "" : " including the partition allowance")
                 + ", reduced per member and column where §4.7 permits");
-        lc.row("Lr", "Roof live load, reduced by §4.8.2 (R1 from the tributary area, flat roof R2 = 1)");
+        lc.row("Lr", "Ordinary roof live load, reduced by §4.8.2 (R1 from the tributary area, flat roof R2 = 1); the load"
+                + " of a roof used for assembly, as a garden or another occupancy is L (§4.8.3)");
         lc.row("S", "Snow load as given in the plan (not reduced)");
         lc.draw(f);
         f.paragraph(f.small, "Wind, earthquake, rain, ponding, vibration, fire and connection design are outside the scope"
@@ -212,6 +222,10 @@ final class FrontMatter {
                     : "; for girders at least half the bay on each side (plan setting)."));
             f.bullet(f.body, "A_T of a column accumulates the delivered areas of every floor above it; roof live load"
                     + " uses the roof area alone (§4.8.2, Lr between 12 psf and L0).");
+            f.bullet(f.body, "Roofs used for assembly, as gardens or for another occupancy (roof live load given with a use"
+                    + " other than ordinary) are reduced as floors (§4.8.3): their load is floor live load L of that use,"
+                    + " reduced by §4.7 (assembly loads of 100 psf or less not at all), and such a roof counts as a floor"
+                    + " in a column's A_T.");
             f.bullet(f.body, "Partition allowance (§4.3.2): carried as " + (b.liveLoad().partitionAsDead() ? "dead load."
                     : "reducible live load."));
             f.bullet(f.body, "Reactions passed from member to member are always unreduced; each member reduces what it receives.");
@@ -221,7 +235,10 @@ final class FrontMatter {
         f.paragraph(f.body, "Live load: " + limit(b.deflection().live()) + ". Dead plus live load, with the member's own weight: "
                 + limit(b.deflection().total()) + ". Source: " + deflectionSource(b) + ". These are serviceability criteria of the"
                 + " project, not clauses of " + AISC + ". Deflections are those of the bare steel section (E·Ix), simply"
-                + " supported, under service loads.");
+                + " supported, under service loads, with the " + (b.liveLoad().reduce() && b.liveLoad().deflectionReduced()
+                        ? "live load reduced as for strength (ASCE 7-16 §4.7, §4.8; plan setting deflectionLiveLoad \"reduced\")."
+                        : "live load unreduced (common practice: serviceability is checked under the full live load; plan"
+                                + " setting deflectionLiveLoad \"unreduced\", the default)."));
 
         f.heading2("How members and columns are designed", 40);
         f.bullet(f.body, "Every beam and girder is a simple span. Its statics (reactions, shear, moment, deflection) are"

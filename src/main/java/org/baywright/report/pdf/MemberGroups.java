@@ -103,7 +103,7 @@ final class MemberGroups {
     static boolean same(MemberResult a, MemberResult b) {
         return a.kind() == b.kind() && a.status() == b.status() && a.section().equals(b.section())
                 && near(a.length(), b.length()) && a.criteria().equals(b.criteria())
-                && near(a.kll(), b.kll()) && near(a.liveFactor(), b.liveFactor())
+                && near(a.kll(), b.kll()) && near(a.liveFactor(), b.liveFactor()) && near(a.roofLiveFactor(), b.roofLiveFactor())
                 && near(a.tributaryArea(), b.tributaryArea()) && near(a.reductionArea(), b.reductionArea())
                 && near(a.startReaction(), b.startReaction()) && near(a.endReaction(), b.endReaction())
                 && sameLoads(a.loads(), b.loads());
@@ -113,16 +113,25 @@ final class MemberGroups {
         if (!near(a.span(), b.span())) {
             return false;
         }
+        if (a.separateDeflectionLoads() != b.separateDeflectionLoads()) {
+            return false;
+        }
         for (LoadCase c : LoadCase.values()) {
-            List<double[]> x = canonical(a.of(c).loads());
-            List<double[]> y = canonical(b.of(c).loads());
-            if (x.size() != y.size()) {
+            if (!sameList(canonical(a.of(c).loads()), canonical(b.of(c).loads()))
+                    || !sameList(canonical(a.forDeflection(c).loads()), canonical(b.forDeflection(c).loads()))) {
                 return false;
             }
-            for (int i = 0; i < x.size(); i++) {
-                if (!near(x.get(i), y.get(i))) {
-                    return false;
-                }
+        }
+        return true;
+    }
+
+    private static boolean sameList(List<double[]> x, List<double[]> y) {
+        if (x.size() != y.size()) {
+            return false;
+        }
+        for (int i = 0; i < x.size(); i++) {
+            if (!near(x.get(i), y.get(i))) {
+                return false;
             }
         }
         return true;

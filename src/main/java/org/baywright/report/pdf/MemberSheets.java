@@ -125,9 +125,7 @@ final class MemberSheets {
         facts.add(new String[] {"Method", cr.method() + ", " + cr.steel().name() + ", Fy = " + Fmt.v(cr.steel().fy(), Quantity.STRESS, us)});
         facts.add(new String[] {"Bracing", cr.bracing().describe()});
         facts.add(new String[] {"Tributary area", Fmt.v(m.tributaryArea(), Quantity.FLOOR_AREA, us) + " of deck carried directly"});
-        facts.add(new String[] {"Live reduction", "A_T = " + Fmt.v(m.reductionArea(), Quantity.FLOOR_AREA, us) + ", K_LL = "
-                + CalcFormat.sig(m.kll()) + ", L = " + String.format(Locale.ROOT, "%.3f", m.liveFactor()) + "·L0"
-                + (m.liveFactor() >= 1 ? " (not reduced)" : "")});
+        facts.add(new String[] {"Live reduction", liveReduction(m, us)});
         facts.add(new String[] {"Deflection limits", FrontMatter.limit(cr.deflection().live()) + " live, "
                 + FrontMatter.limit(cr.deflection().total()) + " total"});
         facts.add(new String[] {"Own weight", cr.selfWeight() ? "added to D by the check (line wsw)" : "not added (taken as included in D)"});
@@ -375,5 +373,26 @@ final class MemberSheets {
             }
             f.paragraph(f.small, b.append('.').toString());
         }
+    }
+
+    /**
+     * The live-load reduction the member was designed with, per load case it carries: floor live L by
+     * ASCE 7-16 §4.7 (A_T, K_LL, L/L0) and roof live Lr by §4.8.2 (A_T, Lr/L0 = R1·R2 or the 12 psf minimum).
+     */
+    static String liveReduction(MemberResult m, UnitSystem us) {
+        java.util.Set<LoadCase> present = m.loads() == null ? java.util.Set.of() : m.loads().present();
+        boolean l = present.contains(LoadCase.L);
+        boolean lr = present.contains(LoadCase.LR);
+        StringBuilder s = new StringBuilder("A_T = " + Fmt.v(m.reductionArea(), Quantity.FLOOR_AREA, us));
+        if (l || !lr) {
+            s.append(", K_LL = ").append(CalcFormat.sig(m.kll())).append(", L = ")
+                    .append(String.format(Locale.ROOT, "%.3f", m.liveFactor())).append("·L0")
+                    .append(m.liveFactor() >= 1 ? " (not reduced)" : "").append(" (§4.7)");
+        }
+        if (lr) {
+            s.append(l ? "; " : ", ").append("Lr = ").append(String.format(Locale.ROOT, "%.3f", m.roofLiveFactor())).append("·L0")
+                    .append(m.roofLiveFactor() >= 1 ? " (not reduced)" : "").append(" (§4.8.2)");
+        }
+        return s.toString();
     }
 }

@@ -54,7 +54,7 @@ final class Summaries {
         String w = Fmt.unit(Quantity.LINE_LOAD, us);
         String p = Fmt.unit(Quantity.FORCE, us);
         for (Floor fl : cx.run.plan().floors()) {
-            f.heading2("Floor layout " + floorLabel(cx, fl.id()) + (fl.roof() ? " (roof: live load is roof live load)" : ""), 60);
+            f.heading2("Floor layout " + floorLabel(cx, fl.id()) + (fl.roof() ? " (roof: roof live load Lr reduces by §4.8.2)" : ""), 60);
             Table t = new Table().left("Area load", 16).left("Use", 12).right("Area [" + Fmt.unit(Quantity.FLOOR_AREA, us) + "]", 10)
                     .right("D", 7).right("SD", 7).right("Partition", 9).right("L", 7).right("Lr", 7).right("S", 7)
                     .right("D carried", 9).right("L carried", 9);

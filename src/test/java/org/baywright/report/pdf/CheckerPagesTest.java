@@ -84,6 +84,8 @@ class CheckerPagesTest {
                 () -> assertTrue(text.contains("lateral force-resisting system"), "lateral system by others"),
                 () -> assertTrue(text.contains("leaning columns in a braced frame"), "columns as leaning columns"),
                 () -> assertTrue(text.contains("Floor vibration from walking"), "what is not checked"),
+                () -> assertTrue(text.contains("with the live load unreduced (common practice for serviceability"),
+                        "which live load the deflections use (the demo's default)"),
                 () -> assertTrue(text.contains("Engineer of record") && text.contains("Signature and seal"), "the block"));
     }
 }

@@ -50,7 +50,7 @@ final class OneMemberRun {
         r[Component.D.ordinal()] = Units.KLF.toSi(deadKlf) * span / 2;
         r[Component.L_ORDINARY.ordinal()] = Units.KLF.toSi(liveKlf) * span / 2;
         return new MemberResult(id, "f1", MemberKind.BEAM, new Point(0, 0), new Point(span, 0), span, design.status(), design,
-                0, 0, 2, 1, r.clone(), r.clone(), "column C-1", "column C-2", List.of(), loads, criteria);
+                0, 0, 2, 1, 1, r.clone(), r.clone(), "column C-1", "column C-2", List.of(), loads, criteria);
     }
 
     static RunResult run(List<MemberResult> members) {

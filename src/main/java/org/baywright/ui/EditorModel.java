@@ -450,10 +450,35 @@ public final class EditorModel {
                 .withProject(org.baywright.report.pdf.ProjectInfo.named(r.plan().name(), java.time.LocalDate.now())));
     }
 
-    /** Writes the steel takeoff (CSV) with a connection allowance in percent. */
-    public void exportTakeoff(Path out, double allowancePercent) throws java.io.IOException {
-        java.nio.file.Files.writeString(out, org.baywright.report.Takeoff.of(requireRun(), allowancePercent).csv(units()),
-                java.nio.charset.StandardCharsets.UTF_8);
+    /**
+     * Writes the steel takeoff with a connection allowance in percent, as the command line's
+     * {@code design --takeoff} does: a name ending in {@code .xlsx} gets a workbook (one sheet per
+     * table); any other name gets the tidy size × level × kind table as CSV and the totals beside it in
+     * {@code NAME-totals.csv}. Returns the files written.
+     */
+    public List<Path> exportTakeoff(Path out, double allowancePercent) throws java.io.IOException {
+        RunResult r = requireRun();
+        org.baywright.report.Takeoff t = org.baywright.report.Takeoff.of(r, allowancePercent);
+        if (takeoffWorkbook(out)) {
+            org.baywright.report.workbook.TakeoffWorkbook.write(t, units(), r.plan().name(), out);
+            return List.of(out);
+        }
+        Path totals = takeoffTotalsFile(out);
+        java.nio.file.Files.writeString(out, t.csv(units()), java.nio.charset.StandardCharsets.UTF_8);
+        java.nio.file.Files.writeString(totals, t.totalsCsv(units()), java.nio.charset.StandardCharsets.UTF_8);
+        return List.of(out, totals);
+    }
+
+    /** True for a takeoff file name that asks for a workbook ({@code .xlsx}). */
+    static boolean takeoffWorkbook(Path file) {
+        return file.getFileName() != null && file.getFileName().toString().toLowerCase(java.util.Locale.ROOT).endsWith(".xlsx");
+    }
+
+    /** Where the totals go beside a CSV takeoff: {@code takeoff.csv} → {@code takeoff-totals.csv}. */
+    static Path takeoffTotalsFile(Path csv) {
+        String name = csv.getFileName().toString();
+        String stem = name.toLowerCase(java.util.Locale.ROOT).endsWith(".csv") ? name.substring(0, name.length() - 4) : name;
+        return csv.resolveSibling(stem + "-totals.csv");
     }
 
     /** Writes the column schedule (CSV). */

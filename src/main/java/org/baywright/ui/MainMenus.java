@@ -54,8 +54,7 @@ final class MainMenus {
                         new String[] {"*.pdf", "*.svg", "*.png"}, model::exportDrawing)),
                 item("Calculation package…", null, () -> files.export("Export the calculation package", "calculations.pdf",
                         new String[] {"*.pdf"}, model::exportPackage)),
-                item("Takeoff…", null, () -> files.export("Export the takeoff", "takeoff.csv", new String[] {"*.csv"},
-                        p -> model.exportTakeoff(p, 0))),
+                item("Takeoff…", null, files::exportTakeoff),
                 item("Column schedule…", null, () -> files.export("Export the column schedule", "columns.csv",
                         new String[] {"*.csv"}, model::exportSchedule)));
         export.setId("menu-export");

@@ -46,7 +46,7 @@ public final class MainWindow {
     public MainWindow(EditorModel model, Runnable exit, RecentFiles recent) {
         this.model = model;
         this.canvas = new PlanCanvas(model);
-        this.files = new FileActions(model, recent, this::window, exit);
+        this.files = new FileActions(model, recent, UserSettings.standard(), this::window, exit);
         this.properties = new PropertiesViewModel(model);
         root.setId("baywright-main");
         root.getStylesheets().add(Styles.sheet());

@@ -152,18 +152,63 @@ public final class Readouts {
         }
         return String.join(" ", parts);
     }
-    /** The takeoff's totals under its table: tons and tonnes, the weight per floor area and a note. */
+    /** The takeoff's totals under its table: short tons and tonnes, the weight per floor area and a note. */
     public static String takeoffTotals(org.baywright.report.Takeoff t, RunResult run, UnitSystem us) {
-        return "Total " + String.format(Locale.ROOT, "%.2f short tons (%.2f t)", org.baywright.report.Takeoff.shortTons(t.total()),
-                org.baywright.report.Takeoff.tonnes(t.total())) + "\n" + weightPerArea(run, us)
-                + "\nSections first, then by kind (beams, girders, columns). File › Export › Takeoff writes the CSV with"
-                + " levels and an allowance.";
+        double tons = org.baywright.report.Takeoff.shortTons(t.total());
+        double tonnes = org.baywright.report.Takeoff.tonnes(t.total());
+        String total = us == UnitSystem.US ? String.format(Locale.ROOT, "%.2f short tons (%.2f tonnes)", tons, tonnes)
+                : String.format(Locale.ROOT, "%.2f tonnes (%.2f short tons)", tonnes, tons);
+        return "Total " + total + ", " + t.pieces() + " pieces\n" + weightPerArea(run, us)
+                + "\nWithout a connection allowance. File › Export › Takeoff writes a workbook or CSV by size,"
+                + " level and kind, with the allowance you choose.";
     }
 
-    /** A takeoff row's weight: short tons in a US plan, tonnes in an SI plan. */
+    /** The Takeoff tab's views of its table. */
+    public enum TakeoffView {
+        SIZE("By size", "Size"), KIND("By kind", "Kind"), LEVEL("By level", "Level");
+
+        private final String label;
+        private final String heading;
+
+        TakeoffView(String label, String heading) {
+            this.label = label;
+            this.heading = heading;
+        }
+
+        /** The choice's text, e.g. "By level". */
+        public String label() {
+            return label;
+        }
+
+        /** The heading of the table's first column, e.g. "Level". */
+        public String heading() {
+            return heading;
+        }
+
+        @Override
+        public String toString() {
+            return label;
+        }
+    }
+
+    /** The rows of a takeoff in one view: by section size, by kind of member, or by level (bottom first). */
+    public static List<org.baywright.report.Takeoff.Row> takeoffRows(org.baywright.report.Takeoff t, TakeoffView view) {
+        return switch (view) {
+            case SIZE -> t.bySection();
+            case KIND -> t.byKind();
+            case LEVEL -> t.byLevel();
+        };
+    }
+
+    /** The heading of the takeoff's weight column: "Short tons" in a US plan, "Tonnes" in an SI plan. */
+    public static String takeoffWeightHeading(UnitSystem us) {
+        return us == UnitSystem.US ? "Short tons" : "Tonnes";
+    }
+
+    /** A takeoff row's weight as a number in the unit of {@link #takeoffWeightHeading}: short tons (US) or tonnes (SI). */
     public static String takeoffWeight(double newtons, UnitSystem us) {
-        return us == UnitSystem.US ? String.format(Locale.ROOT, "%.2f tons", org.baywright.report.Takeoff.shortTons(newtons))
-                : String.format(Locale.ROOT, "%.2f t", org.baywright.report.Takeoff.tonnes(newtons));
+        return String.format(Locale.ROOT, "%.2f", us == UnitSystem.US ? org.baywright.report.Takeoff.shortTons(newtons)
+                : org.baywright.report.Takeoff.tonnes(newtons));
     }
 
     /**

@@ -1,17 +1,19 @@
 package org.baywright.ui;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.Function;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.collections.FXCollections;
 import javafx.geometry.Insets;
+import javafx.geometry.Pos;
 import javafx.scene.Node;
+import javafx.scene.control.ChoiceBox;
 import javafx.scene.control.Label;
 import javafx.scene.control.TableColumn;
 import javafx.scene.control.TableView;
 import javafx.scene.control.TextArea;
+import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 import org.baywright.report.Takeoff;
@@ -21,7 +23,7 @@ import org.baywright.units.UnitSystem;
 
 /**
  * The result tabs beside the plan: Members (the level's members; picking a row selects the member and
- * the other way round), Takeoff (by section and by kind, with totals) and Calculation (the selected
+ * the other way round), Takeoff (by size, by kind or by level, with totals) and Calculation (the selected
  * member's sheet). The texts come from {@link Readouts}.
  */
 final class ResultTabs {
@@ -29,6 +31,9 @@ final class ResultTabs {
     private final TableView<MemberResult> membersTable = new TableView<>();
     private final TableView<Takeoff.Row> takeoffTable = new TableView<>();
     private final Label takeoffTotals = new Label();
+    private final ChoiceBox<Readouts.TakeoffView> takeoffView = new ChoiceBox<>();
+    private final TableColumn<Takeoff.Row, String> takeoffFirst = new TableColumn<>("Size");
+    private final TableColumn<Takeoff.Row, String> takeoffWeight = new TableColumn<>("Short tons");
     private final TextArea calculation = new TextArea();
     private final Node members;
     private final Node takeoff;
@@ -96,17 +101,32 @@ final class ResultTabs {
     private Node takeoffPanel() {
         takeoffTable.setId("takeoff-table");
         takeoffTable.setPlaceholder(new Label("No run yet."));
-        takeoffTable.getColumns().setAll(List.of(
-                column("Size / kind", 120, Takeoff.Row::item),
-                column("Pieces", 55, r -> Integer.toString(r.count())),
-                column("Length", 80, r -> UnitSystem.format(r.length(), model.units().length(), 0)),
-                column("Weight", 90, r -> Readouts.takeoffWeight(r.weight(), model.units()))));
+        takeoffFirst.setCellValueFactory(d -> new ReadOnlyStringWrapper(d.getValue().item()));
+        takeoffFirst.setPrefWidth(110);
+        takeoffWeight.setCellValueFactory(d -> new ReadOnlyStringWrapper(Readouts.takeoffWeight(d.getValue().weight(), model.units())));
+        takeoffWeight.setPrefWidth(90);
+        takeoffTable.getColumns().setAll(List.of(takeoffFirst,
+                column("Pieces", 60, r -> Integer.toString(r.count())),
+                column("Length", 90, r -> UnitSystem.format(r.length(), model.units().length(), 0)),
+                takeoffWeight));
+        takeoffView.setId("takeoff-view");
+        takeoffView.getItems().setAll(Readouts.TakeoffView.values());
+        takeoffView.getSelectionModel().select(Readouts.TakeoffView.SIZE);
+        takeoffView.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> refreshTakeoff());
         takeoffTotals.setId("takeoff-totals");
         takeoffTotals.setWrapText(true);
         takeoffTotals.setPadding(new Insets(6));
-        VBox box = new VBox(4, takeoffTable, takeoffTotals);
+        HBox choice = new HBox(6, new Label("Show"), takeoffView);
+        choice.setAlignment(Pos.CENTER_LEFT);
+        choice.setPadding(new Insets(4, 4, 0, 4));
+        VBox box = new VBox(4, choice, takeoffTable, takeoffTotals);
         VBox.setVgrow(takeoffTable, Priority.ALWAYS);
         return box;
+    }
+
+    /** The Takeoff tab's view choice (by size, by kind, by level). */
+    ChoiceBox<Readouts.TakeoffView> takeoffView() {
+        return takeoffView;
     }
 
     private Node calculationPanel() {
@@ -127,6 +147,13 @@ final class ResultTabs {
             syncing = false;
         }
         syncTableSelection();
+        refreshTakeoff();
+    }
+
+    private void refreshTakeoff() {
+        Readouts.TakeoffView view = takeoffView.getValue() == null ? Readouts.TakeoffView.SIZE : takeoffView.getValue();
+        takeoffFirst.setText(view.heading());
+        takeoffWeight.setText(Readouts.takeoffWeightHeading(model.units()));
         RunResult r = model.run();
         if (r == null || r.takedown() == null) {
             takeoffTable.setItems(FXCollections.observableArrayList());
@@ -134,9 +161,7 @@ final class ResultTabs {
             return;
         }
         Takeoff t = Takeoff.of(r, 0);
-        List<Takeoff.Row> rows = new ArrayList<>(t.bySection());
-        rows.addAll(t.byKind());
-        takeoffTable.setItems(FXCollections.observableArrayList(rows));
+        takeoffTable.setItems(FXCollections.observableArrayList(Readouts.takeoffRows(t, view)));
         takeoffTotals.setText(Readouts.takeoffTotals(t, r, model.units()));
     }
 

@@ -78,9 +78,10 @@ final class ResultTabs {
                 column("Member", 110, MemberResult::id),
                 column("Kind", 60, m -> m.kind().name().toLowerCase(Locale.ROOT)),
                 column("Section", 80, m -> m.section().isEmpty() ? "—" : m.section()),
-                column("Length", 80, m -> UnitSystem.format(m.length(), model.units().length(), 2)),
-                column("Ratio", 50, m -> Readouts.ratio(m.maxRatio())),
-                column("Status", 90, m -> m.status().label())));
+                column("Length", 85, m -> UnitSystem.format(m.length(), model.units().length(), 2)),
+                column("Ratio", 55, m -> Readouts.ratio(m.maxRatio())),
+                column("Status", 95, m -> m.status().label())));
+        fitColumns(membersTable);
         membersTable.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
             if (b != null && !syncing) {
                 model.select(b.id());
@@ -94,8 +95,33 @@ final class ResultTabs {
     private static <S> TableColumn<S, String> column(String name, double width, Function<S, String> value) {
         TableColumn<S, String> c = new TableColumn<>(name);
         c.setPrefWidth(width);
+        c.setMinWidth(headerWidth(name));
         c.setCellValueFactory(d -> new ReadOnlyStringWrapper(value.apply(d.getValue())));
         return c;
+    }
+
+    /** The width a column needs to show its heading whole, px. */
+    static double headerWidth(String name) {
+        javafx.scene.text.Text t = new javafx.scene.text.Text(name);
+        t.setFont(javafx.scene.text.Font.getDefault());
+        return Math.ceil(t.getLayoutBounds().getWidth()) + 22;
+    }
+
+    /**
+     * Columns that always fit the table's width (no column hides behind a horizontal scroll bar): each
+     * at least its heading's width, the last one taking what is left.
+     */
+    private static void fitColumns(TableView<?> table) {
+        table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
+    }
+
+    /** The side panel width that shows every column of the Members table at its preferred width, px. */
+    double neededWidth() {
+        double sum = 0;
+        for (TableColumn<MemberResult, ?> c : membersTable.getColumns()) {
+            sum += Math.max(c.getPrefWidth(), c.getMinWidth());
+        }
+        return sum + 36; // the vertical scroll bar, borders and the tab's padding
     }
 
     private Node takeoffPanel() {
@@ -105,6 +131,9 @@ final class ResultTabs {
         takeoffFirst.setPrefWidth(110);
         takeoffWeight.setCellValueFactory(d -> new ReadOnlyStringWrapper(Readouts.takeoffWeight(d.getValue().weight(), model.units())));
         takeoffWeight.setPrefWidth(90);
+        takeoffFirst.setMinWidth(headerWidth("Size / kind"));
+        takeoffWeight.setMinWidth(headerWidth("Short tons"));
+        fitColumns(takeoffTable);
         takeoffTable.getColumns().setAll(List.of(takeoffFirst,
                 column("Pieces", 60, r -> Integer.toString(r.count())),
                 column("Length", 90, r -> UnitSystem.format(r.length(), model.units().length(), 0)),
@@ -132,7 +161,8 @@ final class ResultTabs {
     private Node calculationPanel() {
         calculation.setId("calculation");
         calculation.setEditable(false);
-        calculation.setWrapText(false);
+        // wrapped, so no line is cut at any width; the sheet's lines are short and read well wrapped
+        calculation.setWrapText(true);
         Styles.with(calculation, Styles.CALCULATION);
         VBox box = new VBox(calculation);
         VBox.setVgrow(calculation, Priority.ALWAYS);

@@ -407,6 +407,15 @@ public final class EditorModel {
         });
     }
 
+    /**
+     * Does work off the window's thread (an export being written) with the runner the runs use, then
+     * reports on the window's thread; in tests the runner does it at once.
+     */
+    public <T> void background(java.util.function.Supplier<T> work, java.util.function.Consumer<T> done,
+            java.util.function.Consumer<Throwable> failed) {
+        runner.submit(work, done, failed);
+    }
+
     /** Writes the plan to its file. */
     public void save() throws IOException {
         Path f = file.get();
@@ -438,7 +447,8 @@ public final class EditorModel {
     /** Writes the framing plan of the current level; the format follows the extension (.svg, .png, .pdf). */
     public void exportDrawing(Path out) throws java.io.IOException {
         RunResult r = requireRun();
-        org.baywright.report.drawing.DrawingExport.write(r, levelProperty().get(), out,
+        String lv = levelProperty().get();
+        org.baywright.report.drawing.DrawingExport.write(r, lv, out,
                 org.baywright.report.drawing.DrawingOptions.defaults().withUnits(units())
                         .withDate(java.time.LocalDate.now().toString()));
     }

@@ -59,7 +59,9 @@ public final class MainWindow {
         root.setId("baywright-main");
         root.getStylesheets().add(Styles.sheet());
         MainMenus menus = new MainMenus(model, files, canvas, this::showTab, this::window);
-        root.setTop(new VBox(menus.bar(), new ToolBarView(model, canvas).node(), new ToolOptionsBar(model).node()));
+        Node toolBar = new ToolBarView(model, canvas).node();
+        Node toolOptions = new ToolOptionsBar(model).node();
+        root.setTop(new VBox(menus.bar(), toolBar, toolOptions));
         ResultTabs results = new ResultTabs(model);
         sideTabs.setId("side-tabs");
         sideTabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
@@ -76,6 +78,14 @@ public final class MainWindow {
         centreTabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         centreTabs.getTabs().addAll(tab("Plan", down), tab("Study", study));
         root.setCenter(centreTabs);
+        // the plan's tools act on the plan: they are away while the Study tab is shown
+        centreTabs.getSelectionModel().selectedIndexProperty().addListener((o, a, i) -> {
+            boolean plan = i.intValue() == 0;
+            for (Node n : List.of(toolBar, toolOptions)) {
+                n.setVisible(plan);
+                n.setManaged(plan);
+            }
+        });
         root.setBottom(new StatusBar(model).node());
     }
 

@@ -513,8 +513,8 @@ public final class StudyPanel extends BorderPane {
             return;
         }
         UnitSystem us = setup.units();
-        depthX.setLabel("Depth d of the deepest beam and of the deepest girder (" + us.smallLength().symbol() + ")"
-                + (setup.depthLimit() > 0 ? String.format(Locale.ROOT, "; limit %.1f %s",
+        depthX.setLabel("Depth d of the deepest beam and girder (" + us.smallLength().symbol() + ")"
+                + (setup.depthLimit() > 0 ? String.format(Locale.ROOT, ", limit %.1f %s",
                         StudyPanelModel.depth(setup.depthLimit(), us), us.smallLength().symbol()) : ""));
         depthY.setLabel("Steel per floor area (" + StudyPanelModel.perAreaUnit(us) + ")");
         Set<Integer> front = StudyPanelModel.depthFront(result);

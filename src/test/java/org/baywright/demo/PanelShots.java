@@ -62,12 +62,29 @@ public final class PanelShots {
             steps.add(() -> shoot(scene, out.resolve("takeoff.png")));
             steps.add(() -> window.showTab("Calculation"));
             steps.add(() -> shoot(scene, out.resolve("calculation.png")));
-            steps.add(Platform::exit);
+            steps.add(() -> window.showTab("Study"));
+            steps.add(() -> {
+                ((javafx.scene.control.TextField) scene.lookup("#study-field-beam-spacing")).setText("6ft..12ft:2ft");
+                ((javafx.scene.control.TextField) scene.lookup("#study-field-beam-direction")).setText("x,y");
+                ((javafx.scene.control.TextField) scene.lookup("#study-field-depth-limit")).setText("21in");
+                ((javafx.scene.control.Button) scene.lookup("#study-run")).fire();
+            });
             Timeline t = new Timeline();
             for (int i = 0; i < steps.size(); i++) {
                 Runnable r = steps.get(i);
                 t.getKeyFrames().add(new KeyFrame(Duration.millis(800 * (i + 1)), e -> r.run()));
             }
+            t.setOnFinished(e -> {
+                // the study shot once its run is over
+                Timeline wait = new Timeline(new KeyFrame(Duration.millis(500), x -> {
+                    if (window.study().result() != null && !window.study().runningProperty().get()) {
+                        shoot(scene, out.resolve("study.png"));
+                        Platform.exit();
+                    }
+                }));
+                wait.setCycleCount(Timeline.INDEFINITE);
+                wait.play();
+            });
             t.play();
         }
 

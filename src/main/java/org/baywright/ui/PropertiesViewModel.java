@@ -125,8 +125,14 @@ public final class PropertiesViewModel {
     }
 
     private void member(MemberResult m, UnitSystem us, List<Item> out) {
+        boolean infill = m.id().contains("/");
         for (Readouts.Row r : Readouts.member(m, us, method())) {
             out.add(new Row(r.label(), r.value()));
+            if (r.label().equals("Status") && !infill) {
+                // the size field beside the size, not below the loads and reactions
+                String fixed = model.currentFloor().flatMap(f -> f.member(m.id())).flatMap(x -> x.fixedSection()).orElse("");
+                out.add(new FixedSize(model.currentFloorId(), m.id(), fixed));
+            }
         }
         if (m.design() != null && !m.design().rejected().isEmpty()) {
             // the heaviest rejected sections are the informative ones: the last before the one chosen
@@ -138,12 +144,9 @@ public final class PropertiesViewModel {
                     .collect(Collectors.joining("\n"))
                     + (rejected.size() > REJECTED_SHOWN ? "\n(" + (rejected.size() - REJECTED_SHOWN) + " lighter)" : "")));
         }
-        if (m.id().contains("/")) {
+        if (infill) {
             out.add(new Note(null, "An infill beam: its spacing and direction belong to its bay (Infill tool). Delete"
                     + " removes the whole infill."));
-        } else {
-            String fixed = model.currentFloor().flatMap(f -> f.member(m.id())).flatMap(x -> x.fixedSection()).orElse("");
-            out.add(new FixedSize(model.currentFloorId(), m.id(), fixed));
         }
     }
 

@@ -263,7 +263,9 @@ public final class TributaryAnalysis {
 
         private void layDecks() {
             Geometry slab = null;
-            if (floor.slabEdge() != null) {
+            // a slab edge with no vertices is one not drawn yet (a new plan before its grid): nothing to check
+            boolean noSlab = floor.slabEdge() == null || floor.slabEdge().vertices().isEmpty();
+            if (!noSlab) {
                 slab = shapes.polygon(floor.slabEdge(), floor.id(), "slab edge of floor", problems);
             }
             List<Geometry> openings = new ArrayList<>();
@@ -277,7 +279,7 @@ public final class TributaryAnalysis {
             if (floor.decks().isEmpty()) {
                 if (slab != null) {
                     inputs.add(new DeckInput(floor.id(), slab, 0.0));
-                } else if (floor.slabEdge() == null) {
+                } else if (noSlab && !(floor.members().isEmpty() && floor.infills().isEmpty())) {
                     problems.add(new GeometryProblem(GeometryProblem.DEGENERATE_POLYGON, floor.id(),
                             "floor " + floor.id() + " has neither a slab edge nor decks; nothing is loaded", List.of()));
                 }

@@ -180,6 +180,10 @@ public final class BaywrightApp extends Application {
         });
         w.setNewWindowOpener(this::openInNewWindow);
         s.setScene(new Scene(w.root(), stage.getScene().getWidth(), stage.getScene().getHeight()));
+        // beside the first window, not hidden exactly on top of it; each further one a step further
+        double step = 36 * (others.size() + 1);
+        s.setX(stage.getX() + step);
+        s.setY(stage.getY() + step);
         s.titleProperty().bind(javafx.beans.binding.Bindings.createStringBinding(w::title, m.planProperty(), m.fileProperty()));
         s.setOnCloseRequest(e -> {
             if (w.confirmDiscard()) {

@@ -407,6 +407,15 @@ public final class EditorModel {
         });
     }
 
+    /**
+     * Does work off the window's thread (an export being written) with the runner the runs use, then
+     * reports on the window's thread; in tests the runner does it at once.
+     */
+    public <T> void background(java.util.function.Supplier<T> work, java.util.function.Consumer<T> done,
+            java.util.function.Consumer<Throwable> failed) {
+        runner.submit(work, done, failed);
+    }
+
     /** Writes the plan to its file. */
     public void save() throws IOException {
         Path f = file.get();
@@ -438,7 +447,8 @@ public final class EditorModel {
     /** Writes the framing plan of the current level; the format follows the extension (.svg, .png, .pdf). */
     public void exportDrawing(Path out) throws java.io.IOException {
         RunResult r = requireRun();
-        org.baywright.report.drawing.DrawingExport.write(r, levelProperty().get(), out,
+        String lv = levelProperty().get();
+        org.baywright.report.drawing.DrawingExport.write(r, lv, out,
                 org.baywright.report.drawing.DrawingOptions.defaults().withUnits(units())
                         .withDate(java.time.LocalDate.now().toString()));
     }
@@ -451,13 +461,17 @@ public final class EditorModel {
     }
 
     /**
-     * Writes the steel takeoff with a connection allowance in percent: a workbook for a name ending in
-     * .xlsx, else the CSV table with its totals beside it (the same files as {@code design --takeoff}).
+     * Writes the steel takeoff with a connection allowance in percent, as the command line's
+     * {@code design --takeoff} does ({@link org.baywright.report.workbook.TakeoffFiles}): a name ending in
+     * {@code .xlsx} gets a workbook (one sheet per table); any other name gets the tidy size × level ×
+     * kind table as CSV and the totals beside it in {@code NAME-totals.csv}. Returns the files written.
      */
-    public java.util.List<String> exportTakeoff(Path out, double allowancePercent) throws java.io.IOException {
+    public List<Path> exportTakeoff(Path out, double allowancePercent) throws java.io.IOException {
         RunResult r = requireRun();
-        return org.baywright.report.workbook.TakeoffFiles.write(org.baywright.report.Takeoff.of(r, allowancePercent), units(),
+        org.baywright.report.workbook.TakeoffFiles.write(org.baywright.report.Takeoff.of(r, allowancePercent), units(),
                 r.plan().name(), out);
+        return org.baywright.report.workbook.TakeoffFiles.workbook(out) ? List.of(out)
+                : List.of(out, org.baywright.report.workbook.TakeoffFiles.totalsFile(out));
     }
 
     /** Writes the column schedule (CSV). */

@@ -9,10 +9,13 @@ import java.util.stream.Collectors;
 import javafx.scene.control.Alert;
 import javafx.scene.control.ButtonBar;
 import javafx.scene.control.ButtonType;
+import javafx.scene.control.Dialog;
 import javafx.scene.control.Label;
 import javafx.scene.control.Menu;
 import javafx.scene.control.MenuItem;
 import javafx.scene.control.TextArea;
+import javafx.scene.control.TextField;
+import javafx.scene.layout.HBox;
 import javafx.scene.layout.VBox;
 import javafx.stage.FileChooser;
 import javafx.stage.Window;
@@ -35,13 +38,17 @@ final class FileActions {
     private final RecentFiles recent;
     private final Supplier<Window> owner;
     private final Runnable exit;
+    private final TakeoffExport takeoff;
+    private final UserSettings settings;
 
     /**
      * @param owner the window dialogs belong to (null while the window is not shown)
      * @param exit what Exit does once unsaved changes are answered for
      */
-    FileActions(EditorModel model, RecentFiles recent, Supplier<Window> owner, Runnable exit) {
+    FileActions(EditorModel model, RecentFiles recent, UserSettings settings, Supplier<Window> owner, Runnable exit) {
         this.model = model;
+        this.takeoff = new TakeoffExport(model, settings);
+        this.settings = settings;
         this.recent = recent;
         this.owner = owner;
         this.exit = exit;
@@ -198,22 +205,119 @@ final class FileActions {
         }
     }
 
-    /** File › Export › …: asks for the file (with its usual name and types), then writes it. */
-    void export(String title, String name, String[] patterns, Exporter exporter) {
-        FileChooser chooser = new FileChooser();
-        chooser.setTitle(title);
-        chooser.setInitialFileName(name);
+    /**
+     * File › Export › …: asks for the file, starting in the plan's folder (else the last export's)
+     * with a name from the plan and, for a level's export, the level; then writes it off the window's
+     * thread, so the window (the plan behind the dialog) stays drawn while a long export is written.
+     *
+     * @param level the level the export is of, or null
+     * @param what the name's last word ("calculations"), or null
+     * @param extension the offered name's extension
+     */
+    void export(String title, String level, String what, String extension, String[] patterns, Exporter exporter) {
+        FileChooser chooser = chooser(title, level, what, extension);
         chooser.getExtensionFilters().add(new FileChooser.ExtensionFilter(String.join(", ", patterns), patterns));
         File chosen = chooser.showSaveDialog(owner.get());
         if (chosen == null) {
             return;
         }
-        try {
+        write(chosen.toPath(), () -> {
             exporter.write(chosen.toPath());
-            model.messageProperty().set("Wrote " + chosen.getName());
-        } catch (IOException | RuntimeException e) {
-            error("Nothing was exported", e);
+            return "Wrote " + chosen.getName();
+        });
+    }
+
+    /** A save dialog in the export folder with the offered name. */
+    private FileChooser chooser(String title, String level, String what, String extension) {
+        FileChooser chooser = new FileChooser();
+        chooser.setTitle(title);
+        Path planFile = model.fileProperty().get();
+        String planName = model.plan() == null ? "" : model.plan().name();
+        chooser.setInitialFileName(ExportNames.name(planName, planFile, level, what, extension));
+        ExportNames.folder(planFile, settings.get(UserSettings.EXPORT_FOLDER).orElse(null))
+                .ifPresent(d -> chooser.setInitialDirectory(d.toFile()));
+        return chooser;
+    }
+
+    /** What an export does once its file is chosen; returns the status message. */
+    @FunctionalInterface
+    private interface Write {
+        String run() throws IOException;
+    }
+
+    /** Writes in the background, remembers the folder, and reports in the status bar or an error dialog. */
+    private void write(Path out, Write w) {
+        Path folder = out.toAbsolutePath().getParent();
+        if (folder != null) {
+            settings.put(UserSettings.EXPORT_FOLDER, folder.toString());
         }
+        model.messageProperty().set("Writing " + out.getFileName() + "…");
+        model.background(() -> {
+            try {
+                return w.run();
+            } catch (IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+        }, done -> model.messageProperty().set(done), e -> {
+            model.messageProperty().set("Nothing was exported.");
+            error("Nothing was exported", e instanceof java.io.UncheckedIOException u ? u.getCause()
+                    : e instanceof Exception x ? x : new RuntimeException(e));
+        });
+    }
+
+    /**
+     * File › Export › Takeoff: asks for the connection allowance (the last one used is offered), then
+     * for the file: a workbook (.xlsx, one sheet per table) or CSV (the size × level × kind table, with
+     * the totals beside it in NAME-totals.csv).
+     */
+    void exportTakeoff() {
+        Dialog<String> ask = new Dialog<>();
+        ask.initOwner(owner.get());
+        ask.setTitle("Export the takeoff");
+        ask.setHeaderText("Connection and miscellaneous steel allowance");
+        TextField percent = new TextField(takeoff.offeredAllowance());
+        percent.setId("takeoff-allowance");
+        percent.setPrefColumnCount(6);
+        Label error = Styles.with(new Label(), Styles.FIELD_ERROR);
+        error.setWrapText(true);
+        Label note = Styles.with(new Label("Added to the member and column weight and shown on its own line; 0 for none."),
+                Styles.QUIET);
+        note.setWrapText(true);
+        VBox content = new VBox(8, new HBox(6, new Label("Allowance"), percent, new Label("%")), note, error);
+        content.setPrefWidth(380);
+        ask.getDialogPane().setContent(content);
+        ask.getDialogPane().getStylesheets().add(Styles.sheet());
+        ask.getDialogPane().getButtonTypes().addAll(ButtonType.OK, ButtonType.CANCEL);
+        ask.getDialogPane().lookupButton(ButtonType.OK).addEventFilter(javafx.event.ActionEvent.ACTION, e -> {
+            try {
+                TakeoffExport.allowance(percent.getText());
+            } catch (IllegalArgumentException x) {
+                error.setText(x.getMessage() + ".");
+                e.consume();
+            }
+        });
+        ask.setResultConverter(b -> b == ButtonType.OK ? percent.getText() : null);
+        javafx.application.Platform.runLater(percent::requestFocus);
+        String typed = ask.showAndWait().orElse(null);
+        if (typed == null) {
+            return;
+        }
+        FileChooser chooser = chooser("Export the takeoff", null, "takeoff", ".xlsx");
+        FileChooser.ExtensionFilter xlsx = new FileChooser.ExtensionFilter("Workbook, one sheet per table (*.xlsx)", "*.xlsx");
+        FileChooser.ExtensionFilter csv = new FileChooser.ExtensionFilter("CSV table, totals in NAME-totals.csv (*.csv)", "*.csv");
+        chooser.getExtensionFilters().addAll(xlsx, csv);
+        File chosen = chooser.showSaveDialog(owner.get());
+        if (chosen == null) {
+            return;
+        }
+        Path out = withExtension(chosen.toPath(), chooser.getSelectedExtensionFilter() == csv ? ".csv" : ".xlsx");
+        write(out, () -> TakeoffExport.written(takeoff.write(out, typed), typed));
+    }
+
+    /** The chosen name, with {@code ext} added when it has neither .csv nor .xlsx. */
+    static Path withExtension(Path p, String ext) {
+        String n = p.getFileName().toString().toLowerCase(java.util.Locale.ROOT);
+        return n.endsWith(".csv") || n.endsWith(".xlsx") ? p : p.resolveSibling(p.getFileName() + ext);
     }
 
     private void error(String header, Exception e) {

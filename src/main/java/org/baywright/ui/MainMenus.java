@@ -50,13 +50,12 @@ final class MainMenus {
         save.disableProperty().bind(model.planProperty().isNull());
         saveAs.disableProperty().bind(model.planProperty().isNull());
         Menu export = new Menu("Export", null,
-                item("Framing plan of this level…", null, () -> files.export("Export the framing plan", "level.pdf",
-                        new String[] {"*.pdf", "*.svg", "*.png"}, model::exportDrawing)),
-                item("Calculation package…", null, () -> files.export("Export the calculation package", "calculations.pdf",
-                        new String[] {"*.pdf"}, model::exportPackage)),
-                item("Takeoff…", null, () -> files.export("Export the takeoff", "takeoff.csv", new String[] {"*.csv"},
-                        p -> model.exportTakeoff(p, 0))),
-                item("Column schedule…", null, () -> files.export("Export the column schedule", "columns.csv",
+                item("Framing plan of this level…", null, () -> files.export("Export the framing plan",
+                        model.levelProperty().get(), null, ".pdf", new String[] {"*.pdf", "*.svg", "*.png"}, model::exportDrawing)),
+                item("Calculation package…", null, () -> files.export("Export the calculation package", null, "calculations",
+                        ".pdf", new String[] {"*.pdf"}, model::exportPackage)),
+                item("Takeoff…", null, files::exportTakeoff),
+                item("Column schedule…", null, () -> files.export("Export the column schedule", null, "columns", ".csv",
                         new String[] {"*.csv"}, model::exportSchedule)));
         export.setId("menu-export");
         export.disableProperty().bind(model.runProperty().isNull());

@@ -36,6 +36,8 @@ public final class MainWindow {
     private final TabPane sideTabs = new TabPane();
     private final TabPane centreTabs = new TabPane();
     private final StudyPanel study;
+    private final UserSettings settings;
+    private final SplitPane across;
     /** Opens a plan in a new window (set by the application; by default the plan replaces this one). */
     private Consumer<Plan> newWindow;
 
@@ -44,22 +46,29 @@ public final class MainWindow {
     }
 
     public MainWindow(EditorModel model, Runnable exit, RecentFiles recent) {
+        this(model, exit, recent, UserSettings.standard());
+    }
+
+    /** A window whose per-user choices (side panel width, export folder, allowance) are kept in {@code settings}. */
+    public MainWindow(EditorModel model, Runnable exit, RecentFiles recent, UserSettings settings) {
         this.model = model;
+        this.settings = settings;
         this.canvas = new PlanCanvas(model);
-        this.files = new FileActions(model, recent, this::window, exit);
+        this.files = new FileActions(model, recent, settings, this::window, exit);
         this.properties = new PropertiesViewModel(model);
         root.setId("baywright-main");
         root.getStylesheets().add(Styles.sheet());
         MainMenus menus = new MainMenus(model, files, canvas, this::showTab, this::window);
-        root.setTop(new VBox(menus.bar(), new ToolBarView(model, canvas).node(), new ToolOptionsBar(model).node()));
+        Node toolBar = new ToolBarView(model, canvas).node();
+        Node toolOptions = new ToolOptionsBar(model).node();
+        root.setTop(new VBox(menus.bar(), toolBar, toolOptions));
         ResultTabs results = new ResultTabs(model);
         sideTabs.setId("side-tabs");
         sideTabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         sideTabs.getTabs().addAll(tab("Properties", new PropertiesPanel(properties).node()), tab("Members", results.members()),
                 tab("Takeoff", results.takeoff()), tab("Calculation", results.calculation()));
-        SplitPane across = new SplitPane(canvas, sideTabs);
-        across.setDividerPositions(0.77);
-        SplitPane.setResizableWithParent(across.getItems().get(1), false);
+        across = new SplitPane(canvas, sideTabs);
+        sideWidth(results);
         SplitPane down = new SplitPane(across, new ProblemsPanel(model).node());
         down.setOrientation(Orientation.VERTICAL);
         down.setDividerPositions(0.84);
@@ -69,7 +78,55 @@ public final class MainWindow {
         centreTabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         centreTabs.getTabs().addAll(tab("Plan", down), tab("Study", study));
         root.setCenter(centreTabs);
+        // the plan's tools act on the plan: they are away while the Study tab is shown
+        centreTabs.getSelectionModel().selectedIndexProperty().addListener((o, a, i) -> {
+            boolean plan = i.intValue() == 0;
+            for (Node n : List.of(toolBar, toolOptions)) {
+                n.setVisible(plan);
+                n.setManaged(plan);
+            }
+        });
         root.setBottom(new StatusBar(model).node());
+    }
+
+    /** The side panel's narrowest and widest start, px. */
+    static final double SIDE_MIN = 360;
+    static final double SIDE_MAX = 900;
+
+    /**
+     * Sizes the side panel on start: the width the user last left it at, or else the width its tables
+     * need to show every column; it keeps its width when the window is resized, and the width it has
+     * when the window closes is remembered.
+     */
+    private void sideWidth(ResultTabs results) {
+        double wanted = Math.max(SIDE_MIN, Math.min(SIDE_MAX, settings.number(UserSettings.SIDE_WIDTH, results.neededWidth())));
+        sideTabs.setMinWidth(280);
+        SplitPane.setResizableWithParent(sideTabs, false);
+        across.setDividerPositions(0.7);
+        boolean[] placed = {false};
+        across.widthProperty().addListener((o, a, w) -> {
+            if (!placed[0] && w.doubleValue() > 0) {
+                placed[0] = true;
+                across.setDividerPositions(Math.max(0.3, 1 - wanted / w.doubleValue()));
+            }
+        });
+        root.sceneProperty().addListener((o, a, scene) -> {
+            if (scene != null) {
+                scene.windowProperty().addListener((o2, a2, win) -> {
+                    if (win != null) {
+                        win.addEventHandler(javafx.stage.WindowEvent.WINDOW_HIDING, e -> rememberSideWidth());
+                    }
+                });
+            }
+        });
+    }
+
+    /** Remembers the side panel's width for the next start. */
+    void rememberSideWidth() {
+        double w = sideTabs.getWidth();
+        if (w > 0) {
+            settings.put(UserSettings.SIDE_WIDTH, Long.toString(Math.round(w)));
+        }
     }
 
     private static Tab tab(String name, Node content) {

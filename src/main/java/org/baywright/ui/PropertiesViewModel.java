@@ -37,9 +37,9 @@ public final class PropertiesViewModel {
 
     /** A labelled value. */
     public record Row(String label, String value) implements Item {
-        /** The value's node id: {@code prop-} and the label in lower case with dashes ("prop-start-reaction"). */
+        /** The value's node id: {@code prop-} and the label in lower case with dashes ("prop-start-reaction-service"). */
         public String id() {
-            return "prop-" + label.trim().toLowerCase(Locale.ROOT).replace(' ', '-');
+            return "prop-" + label.trim().toLowerCase(Locale.ROOT).replaceAll("[^\\p{L}0-9]+", "-").replaceAll("-$", "");
         }
     }
 
@@ -125,8 +125,14 @@ public final class PropertiesViewModel {
     }
 
     private void member(MemberResult m, UnitSystem us, List<Item> out) {
-        for (Readouts.Row r : Readouts.member(m, us)) {
+        boolean infill = m.id().contains("/");
+        for (Readouts.Row r : Readouts.member(m, us, method())) {
             out.add(new Row(r.label(), r.value()));
+            if (r.label().equals("Status") && !infill) {
+                // the size field beside the size, not below the loads and reactions
+                String fixed = model.currentFloor().flatMap(f -> f.member(m.id())).flatMap(x -> x.fixedSection()).orElse("");
+                out.add(new FixedSize(model.currentFloorId(), m.id(), fixed));
+            }
         }
         if (m.design() != null && !m.design().rejected().isEmpty()) {
             // the heaviest rejected sections are the informative ones: the last before the one chosen
@@ -138,12 +144,9 @@ public final class PropertiesViewModel {
                     .collect(Collectors.joining("\n"))
                     + (rejected.size() > REJECTED_SHOWN ? "\n(" + (rejected.size() - REJECTED_SHOWN) + " lighter)" : "")));
         }
-        if (m.id().contains("/")) {
+        if (infill) {
             out.add(new Note(null, "An infill beam: its spacing and direction belong to its bay (Infill tool). Delete"
                     + " removes the whole infill."));
-        } else {
-            String fixed = model.currentFloor().flatMap(f -> f.member(m.id())).flatMap(x -> x.fixedSection()).orElse("");
-            out.add(new FixedSize(model.currentFloorId(), m.id(), fixed));
         }
     }
 
@@ -160,9 +163,24 @@ public final class PropertiesViewModel {
                 out.add(new Row("Tier " + levels.get(0) + (levels.size() > 1 ? "–" + levels.get(levels.size() - 1) : ""),
                         t.section() + "  " + Readouts.ratio(t.maxRatio())));
             }
-            out.add(new Row("Foundation", Readouts.byCase(result.get().foundation(), us)));
+            ColumnResult r = result.get();
+            out.add(new Row("Foundation, service", Readouts.byCase(r.foundation(), us) + Readouts.LIVE_UNREDUCED));
+            out.add(new Row("Foundation, service, live reduced", Readouts.byCase(r.foundationReduced(), us)));
+            out.add(new Row("Foundation, " + Readouts.factoredWord(method()), Readouts.factored(r.foundationReduced(), method(), us)
+                    + "\n(live load reduced)"));
         }
         out.add(new FixedSize(model.currentFloorId(), c.id(), c.fixedSection().orElse("")));
+    }
+
+    /** The plan's design method (LRFD when there is none). */
+    private org.baywright.load.DesignMethod method() {
+        try {
+            org.baywright.load.DesignMethod m = model.plan() == null ? null
+                    : org.baywright.load.DesignMethod.parse(model.plan().settings().method());
+            return m == null ? org.baywright.load.DesignMethod.LRFD : m;
+        } catch (RuntimeException e) {
+            return org.baywright.load.DesignMethod.LRFD;
+        }
     }
 
     /** A load area, opening, line load or point load of the floor shown. */

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.baywright.design.Check;
+import org.baywright.load.DesignMethod;
 import org.baywright.load.LoadCase;
 import org.baywright.report.RunSummary;
 import org.baywright.run.RunResult;
@@ -59,8 +60,20 @@ public final class Readouts {
         return us == UnitSystem.US ? newtons / Units.NEWTONS_PER_POUND : newtons / Units.STANDARD_GRAVITY;
     }
 
-    /** The Properties rows of a member: identity, size, status, ratios and reactions. */
+    /** The Properties rows of a member, with the reactions factored by LRFD. */
     public static List<Row> member(MemberResult m, UnitSystem us) {
+        return member(m, us, DesignMethod.LRFD);
+    }
+
+    /**
+     * The Properties rows of a member: identity, size, status, ratios, the loads on its span and its
+     * end reactions. Every force says what it is: the span's loads are service loads with the live
+     * load shown both unreduced (L0) and reduced (L, with the member's factor, ASCE 7-16 §4.7) as the
+     * design took it; the end reactions are service loads by case with the live load unreduced (what
+     * passes on to the support), then the largest factored reaction of {@code method}'s combinations
+     * with the combination that gives it.
+     */
+    public static List<Row> member(MemberResult m, UnitSystem us, DesignMethod method) {
         List<Row> rows = new ArrayList<>();
         rows.add(new Row("Member", m.id()));
         rows.add(new Row("Kind", m.kind().name().toLowerCase(Locale.ROOT)));
@@ -71,14 +84,7 @@ public final class Readouts {
         rows.add(new Row("Reduction area", UnitSystem.format(m.reductionArea(), us.floorArea(), 0)
                 + String.format(java.util.Locale.ROOT, "  (live × %.2f)", m.liveFactor())));
         if (m.loads() != null) {
-            List<String> parts = new ArrayList<>();
-            for (LoadCase lc : m.loads().present()) {
-                var span = m.loads().of(lc);
-                parts.add(lc.symbol() + " " + UnitSystem.format(span.totalLoad(), us.force(), 1)
-                        + (span.loads().size() > 1 ? " (" + span.loads().size() + " loads)" : ""));
-            }
-            rows.add(new Row("Loads on span", parts.isEmpty() ? "none" : String.join(", ", parts)
-                    + "; self-weight added by the design"));
+            rows.add(new Row("Span loads, service", spanLoads(m, us)));
         }
         rows.add(new Row("Highest ratio", ratio(m.maxRatio())));
         if (m.design() != null) {
@@ -86,11 +92,78 @@ public final class Readouts {
                 rows.add(new Row("  " + c.name(), ratio(c.ratio()) + (c.combination().isEmpty() ? "" : "  (" + c.combination() + ")")));
             }
         }
-        rows.add(new Row("Start reaction", reactions(m.startReaction(), us)));
-        rows.add(new Row("End reaction", reactions(m.endReaction(), us)));
+        rows.add(new Row("Start reaction, service", reactions(m.startReaction(), us) + LIVE_UNREDUCED));
+        rows.add(new Row("Start reaction, " + factoredWord(method), factored(Component.byCase(m.startReaction()), method, us)
+                + LIVE_UNREDUCED));
+        rows.add(new Row("End reaction, service", reactions(m.endReaction(), us) + LIVE_UNREDUCED));
+        rows.add(new Row("End reaction, " + factoredWord(method), factored(Component.byCase(m.endReaction()), method, us)
+                + LIVE_UNREDUCED));
         rows.add(new Row("Start support", m.startSupport().isEmpty() ? "none" : m.startSupport()));
         rows.add(new Row("End support", m.endSupport().isEmpty() ? "none" : m.endSupport()));
         return rows;
+    }
+
+    /** Said after reactions whose live load is not reduced. */
+    static final String LIVE_UNREDUCED = "\n(live load unreduced)";
+
+    /** "factored" (LRFD) or "ASD" (ASD's combinations are not factored up). */
+    static String factoredWord(DesignMethod method) {
+        return method == DesignMethod.LRFD ? "factored" : "ASD";
+    }
+
+    /**
+     * The member's service loads on its span by case, a line each: dead load (self-weight is added by
+     * the design), live load unreduced as L0 and reduced as L with the factor, roof live, snow.
+     * The unreduced live load is the sum of the end reactions' live load (the takedown passes live
+     * load on unreduced), which for a simple span is the live load on it.
+     */
+    static String spanLoads(MemberResult m, UnitSystem us) {
+        List<String> lines = new ArrayList<>();
+        double[] unreduced = Component.byCase(m.startReaction());
+        double[] end = Component.byCase(m.endReaction());
+        for (int i = 0; i < unreduced.length; i++) {
+            unreduced[i] += end[i];
+        }
+        for (LoadCase lc : m.loads().present()) {
+            var span = m.loads().of(lc);
+            String n = span.loads().size() > 1 ? ", " + span.loads().size() + " loads" : "";
+            String v = UnitSystem.format(span.totalLoad(), us.force(), 1);
+            if (lc == LoadCase.D) {
+                lines.add("D " + v + " + self-weight" + n);
+            } else if (lc == LoadCase.L) {
+                lines.add("L0 " + UnitSystem.format(unreduced[LoadCase.L.ordinal()], us.force(), 1) + " unreduced");
+                lines.add("L " + v + String.format(Locale.ROOT, " reduced (× %.2f)", m.liveFactor()) + n);
+            } else {
+                lines.add(lc.symbol() + " " + v + n);
+            }
+        }
+        return lines.isEmpty() ? "none" : String.join("\n", lines);
+    }
+
+    /**
+     * The largest reaction of the method's gravity combinations for forces by case, with the
+     * combination that gives it: "28.4 kip (1.2D + 1.6L)".
+     */
+    static String factored(double[] byCase, DesignMethod method, UnitSystem us) {
+        java.util.Set<LoadCase> present = java.util.EnumSet.of(LoadCase.D);
+        for (LoadCase c : LoadCase.values()) {
+            if (byCase[c.ordinal()] != 0) {
+                present.add(c);
+            }
+        }
+        double best = Double.NEGATIVE_INFINITY;
+        String name = "";
+        for (org.baywright.load.LoadCombination combo : org.baywright.load.Combinations.gravity(method, present)) {
+            double v = 0;
+            for (LoadCase c : LoadCase.values()) {
+                v += combo.factor(c) * byCase[c.ordinal()];
+            }
+            if (v > best) {
+                best = v;
+                name = combo.name();
+            }
+        }
+        return UnitSystem.format(best, us.force(), 1) + " (" + name + ")";
     }
 
     /** Unreduced reactions by load case, non-zero cases only: "D 12.3 kip, L 10.1 kip". */
@@ -152,18 +225,63 @@ public final class Readouts {
         }
         return String.join(" ", parts);
     }
-    /** The takeoff's totals under its table: tons and tonnes, the weight per floor area and a note. */
+    /** The takeoff's totals under its table: short tons and tonnes, the weight per floor area and a note. */
     public static String takeoffTotals(org.baywright.report.Takeoff t, RunResult run, UnitSystem us) {
-        return "Total " + String.format(Locale.ROOT, "%.2f short tons (%.2f t)", org.baywright.report.Takeoff.shortTons(t.total()),
-                org.baywright.report.Takeoff.tonnes(t.total())) + "\n" + weightPerArea(run, us)
-                + "\nSections first, then by kind (beams, girders, columns). File › Export › Takeoff writes the CSV with"
-                + " levels and an allowance.";
+        double tons = org.baywright.report.Takeoff.shortTons(t.total());
+        double tonnes = org.baywright.report.Takeoff.tonnes(t.total());
+        String total = us == UnitSystem.US ? String.format(Locale.ROOT, "%.2f short tons (%.2f tonnes)", tons, tonnes)
+                : String.format(Locale.ROOT, "%.2f tonnes (%.2f short tons)", tonnes, tons);
+        return "Total " + total + ", " + t.pieces() + " pieces\n" + weightPerArea(run, us)
+                + "\nWithout a connection allowance. File › Export › Takeoff writes a workbook or CSV by size,"
+                + " level and kind, with the allowance you choose.";
     }
 
-    /** A takeoff row's weight: short tons in a US plan, tonnes in an SI plan. */
+    /** The Takeoff tab's views of its table. */
+    public enum TakeoffView {
+        SIZE("By size", "Size"), KIND("By kind", "Kind"), LEVEL("By level", "Level");
+
+        private final String label;
+        private final String heading;
+
+        TakeoffView(String label, String heading) {
+            this.label = label;
+            this.heading = heading;
+        }
+
+        /** The choice's text, e.g. "By level". */
+        public String label() {
+            return label;
+        }
+
+        /** The heading of the table's first column, e.g. "Level". */
+        public String heading() {
+            return heading;
+        }
+
+        @Override
+        public String toString() {
+            return label;
+        }
+    }
+
+    /** The rows of a takeoff in one view: by section size, by kind of member, or by level (bottom first). */
+    public static List<org.baywright.report.Takeoff.Row> takeoffRows(org.baywright.report.Takeoff t, TakeoffView view) {
+        return switch (view) {
+            case SIZE -> t.bySection();
+            case KIND -> t.byKind();
+            case LEVEL -> t.byLevel();
+        };
+    }
+
+    /** The heading of the takeoff's weight column: "Short tons" in a US plan, "Tonnes" in an SI plan. */
+    public static String takeoffWeightHeading(UnitSystem us) {
+        return us == UnitSystem.US ? "Short tons" : "Tonnes";
+    }
+
+    /** A takeoff row's weight as a number in the unit of {@link #takeoffWeightHeading}: short tons (US) or tonnes (SI). */
     public static String takeoffWeight(double newtons, UnitSystem us) {
-        return us == UnitSystem.US ? String.format(Locale.ROOT, "%.2f tons", org.baywright.report.Takeoff.shortTons(newtons))
-                : String.format(Locale.ROOT, "%.2f t", org.baywright.report.Takeoff.tonnes(newtons));
+        return String.format(Locale.ROOT, "%.2f", us == UnitSystem.US ? org.baywright.report.Takeoff.shortTons(newtons)
+                : org.baywright.report.Takeoff.tonnes(newtons));
     }
 
     /**

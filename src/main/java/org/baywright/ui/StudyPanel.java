@@ -96,6 +96,8 @@ public final class StudyPanel extends BorderPane {
     private final NumberAxis depthY = new NumberAxis();
     private final ScatterChart<Number, Number> depthChart = new ScatterChart<>(depthX, depthY);
     private final TableView<VariantResult> table = new TableView<>();
+    private final Label frontNote = new Label("Each variant is drawn twice: at its deepest beam and at its deepest girder."
+            + " Pareto front: no other variant is both lighter and shallower.");
     private final Button open = new Button("Open as new plan");
     private final ReadOnlyBooleanWrapper running = new ReadOnlyBooleanWrapper(false);
 
@@ -156,7 +158,7 @@ public final class StudyPanel extends BorderPane {
             Label label = new Label(f.label());
             TextField text = new TextField();
             text.setId("study-field-" + f.key());
-            text.setPromptText(f.usExample());
+            text.setPromptText(f.prompt(UnitSystem.US));
             Tooltip.install(text, new Tooltip(f.label() + ": " + f.accepted()));
             text.setOnAction(e -> start());
             Label error = new Label();
@@ -231,8 +233,9 @@ public final class StudyPanel extends BorderPane {
         depthChart.setTitle("Steel per floor area against structural depth");
         depthX.setForceZeroInRange(false);
         depthY.setForceZeroInRange(false);
-        Label frontNote = new Label("Pareto front: no other variant is both lighter and shallower.");
+        frontNote.setId("study-front-note");
         frontNote.setStyle("-fx-font-size: 11px;");
+        frontNote.setWrapText(true);
         VBox right = new VBox(4, frontNote, depthChart);
         VBox.setVgrow(depthChart, Priority.ALWAYS);
 
@@ -319,7 +322,7 @@ public final class StudyPanel extends BorderPane {
         StudyPanelModel.Setup s = checked.setup();
         UnitSystem us = s.units();
         for (StudyPanelModel.Field f : StudyPanelModel.FIELDS) {
-            fields.get(f.key()).setPromptText(f.example(us));
+            fields.get(f.key()).setPromptText(f.prompt(us));
         }
         CancelToken t = new CancelToken();
         token = t;
@@ -501,36 +504,56 @@ public final class StudyPanel extends BorderPane {
 
     private void drawDepth() {
         depthChart.getData().clear();
+        // the note says what the chart shows: nothing before a run
+        frontNote.setVisible(result != null);
+        frontNote.setManaged(result != null);
         if (result == null) {
             depthX.setLabel("");
             depthY.setLabel("");
             return;
         }
         UnitSystem us = setup.units();
-        depthX.setLabel("Structural depth: deepest beam or girder d (" + us.smallLength().symbol() + ")");
+        depthX.setLabel("Depth d of the deepest beam and girder (" + us.smallLength().symbol() + ")"
+                + (setup.depthLimit() > 0 ? String.format(Locale.ROOT, ", limit %.1f %s",
+                        StudyPanelModel.depth(setup.depthLimit(), us), us.smallLength().symbol()) : ""));
         depthY.setLabel("Steel per floor area (" + StudyPanelModel.perAreaUnit(us) + ")");
         Set<Integer> front = StudyPanelModel.depthFront(result);
-        XYChart.Series<Number, Number> others = new XYChart.Series<>();
-        others.setName("Sound variants");
-        XYChart.Series<Number, Number> onFront = new XYChart.Series<>();
-        onFront.setName("Pareto front");
-        XYChart.Series<Number, Number> unsound = new XYChart.Series<>();
-        unsound.setName("With problems");
-        for (VariantResult v : result.variants()) {
-            if (!StudyPanelModel.plotted(v)) {
-                continue;
+        for (Map.Entry<StudyPanelModel.DepthSeries, List<StudyPanelModel.DepthPoint>> e
+                : StudyPanelModel.depthSeries(setup, result).entrySet()) {
+            XYChart.Series<Number, Number> series = new XYChart.Series<>();
+            series.setName(e.getKey().label());
+            String style = "study-depth-" + e.getKey().name().toLowerCase(Locale.ROOT).replace('_', '-');
+            for (StudyPanelModel.DepthPoint p : e.getValue()) {
+                XYChart.Data<Number, Number> d = new XYChart.Data<>(p.depth(), p.perArea());
+                d.setExtraValue(p.variant());
+                // the point's node made here, with its style, so that the legend's marker copies it
+                javafx.scene.layout.StackPane node = new javafx.scene.layout.StackPane();
+                node.getStyleClass().addAll("study-point", style);
+                d.setNode(node);
+                series.getData().add(d);
             }
-            XYChart.Data<Number, Number> d = new XYChart.Data<>(StudyPanelModel.depth(v.structuralDepth(), us),
-                    StudyPanelModel.perArea(v.weightPerArea(), us));
-            d.setExtraValue(v);
-            (front.contains(v.index()) ? onFront : v.sound() ? others : unsound).getData().add(d);
+            depthChart.getData().add(series);
+            decorate(series, front, style);
         }
-        depthChart.getData().add(others);
-        depthChart.getData().add(onFront);
-        depthChart.getData().add(unsound);
-        decorate(others, front, "study-other-point");
-        decorate(onFront, front, "study-front-point");
-        decorate(unsound, front, "study-unsound-point");
+        styleLegend();
+        Platform.runLater(this::styleLegend);
+    }
+
+    /**
+     * Gives each legend marker of the depth chart its series' style (the chart copies only its own
+     * classes), so every entry shows the marker its points have.
+     */
+    private void styleLegend() {
+        Map<String, String> styles = new LinkedHashMap<>();
+        for (StudyPanelModel.DepthSeries k : StudyPanelModel.DepthSeries.values()) {
+            styles.put(k.label(), "study-depth-" + k.name().toLowerCase(Locale.ROOT).replace('_', '-'));
+        }
+        for (Node n : depthChart.lookupAll(".chart-legend-item")) {
+            if (n instanceof Label item && item.getGraphic() != null && styles.containsKey(item.getText())
+                    && !item.getGraphic().getStyleClass().contains(styles.get(item.getText()))) {
+                item.getGraphic().getStyleClass().add(styles.get(item.getText()));
+            }
+        }
     }
 
     /** Tooltips, clicks and style classes on the points of a series already in its chart. */
@@ -591,6 +614,9 @@ public final class StudyPanel extends BorderPane {
         table.getColumns().add(column("Problems", v -> v.message().isEmpty() ? (Object) v.problems() : "not run"));
         table.getColumns().add(column("Front", v -> (depthFront.contains(v.index()) ? "D" : "")
                 + (piecesFront.contains(v.index()) ? "P" : "")));
+        if (setup.depthLimit() > 0) {
+            table.getColumns().add(column("Depth limit", v -> StudyPanelModel.tooDeep(setup, v) ? "exceeded" : "within"));
+        }
         List<VariantResult> rows = new ArrayList<>(result.variants());
         rows.sort(java.util.Comparator.comparingDouble((VariantResult v) -> Double.isNaN(v.weightPerArea())
                 ? Double.POSITIVE_INFINITY : v.weightPerArea()).thenComparingInt(VariantResult::index));
@@ -645,7 +671,7 @@ public final class StudyPanel extends BorderPane {
             show(generalError, "Variant " + (v.index() + 1) + " cannot be opened: " + e.getMessage());
             return;
         }
-        openAsNewDocument.accept(plan);
+        openAsNewDocument.accept(StudyPanelModel.named(plan, setup.spec().base(), v));
         summary.setText(String.format(Locale.ROOT, "Opened variant %d (%s) as a new plan. %s", v.index() + 1,
                 StudyPanelModel.values(v), result == null ? "" : StudyPanelModel.summary(setup, result)));
     }

@@ -60,6 +60,14 @@ public final class StudyPanelModel {
         public String example(UnitSystem us) {
             return us == UnitSystem.SI ? siExample : usExample;
         }
+
+        /**
+         * The field's prompt text: the example, said as one ("e.g. 24in"), so that an empty field does
+         * not look set; an empty field is not used.
+         */
+        public String prompt(UnitSystem us) {
+            return "e.g. " + example(us);
+        }
     }
 
     private static final String LENGTHS = "lengths with their unit, as a range A..B:STEP or a list a,b,c";
@@ -344,6 +352,91 @@ public final class StudyPanelModel {
         }
         out.values().removeIf(List::isEmpty);
         return out;
+    }
+
+    // ---- the chart against depth ----------------------------------------------------------------
+
+    /** The series of the chart against depth, in drawing order (later ones are drawn over earlier ones). */
+    public enum DepthSeries {
+        /** Every variant at the depth of its deepest beam. */
+        BEAM("Deepest beam"),
+        /** Every variant at the depth of its deepest girder. */
+        GIRDER("Deepest girder"),
+        /** The weight–depth front, at the structural depth (the deeper of the two). */
+        FRONT("Pareto front"),
+        /** Variants deeper than the structural depth limit, at the structural depth. */
+        TOO_DEEP("Deeper than the limit"),
+        /** Variants that ran with problems, at the structural depth. */
+        PROBLEMS("With problems");
+
+        private final String label;
+
+        DepthSeries(String label) {
+            this.label = label;
+        }
+
+        /** The legend's text. */
+        public String label() {
+            return label;
+        }
+    }
+
+    /** One point of the chart against depth: depth in in or mm, steel per floor area in lb/ft² or kg/m². */
+    public record DepthPoint(double depth, double perArea, VariantResult variant) {
+    }
+
+    /** True when a depth limit is set and the variant's structural depth is over it. */
+    public static boolean tooDeep(Setup setup, VariantResult v) {
+        return setup.depthLimit() > 0 && Double.isFinite(v.structuralDepth()) && v.structuralDepth() > setup.depthLimit() + 1e-9;
+    }
+
+    /**
+     * The points of the chart against depth by series, only the series that have points: beams and
+     * girders apart (a sweep of beam spacing changes the beams, not the girders, and shows it), then the
+     * front, the variants deeper than the limit and those with problems, each at its structural depth.
+     */
+    public static Map<DepthSeries, List<DepthPoint>> depthSeries(Setup setup, StudyResult r) {
+        UnitSystem us = setup.units();
+        Map<DepthSeries, List<DepthPoint>> out = new LinkedHashMap<>();
+        for (DepthSeries k : DepthSeries.values()) {
+            out.put(k, new ArrayList<>());
+        }
+        Set<Integer> front = depthFront(r);
+        for (VariantResult v : r.variants()) {
+            if (!plotted(v)) {
+                continue;
+            }
+            double y = perArea(v.weightPerArea(), us);
+            if (Double.isFinite(v.beamDepth()) && v.beamDepth() > 0) {
+                out.get(DepthSeries.BEAM).add(new DepthPoint(depth(v.beamDepth(), us), y, v));
+            }
+            if (Double.isFinite(v.girderDepth()) && v.girderDepth() > 0) {
+                out.get(DepthSeries.GIRDER).add(new DepthPoint(depth(v.girderDepth(), us), y, v));
+            }
+            DepthPoint at = new DepthPoint(depth(v.structuralDepth(), us), y, v);
+            if (front.contains(v.index())) {
+                out.get(DepthSeries.FRONT).add(at);
+            }
+            if (tooDeep(setup, v)) {
+                out.get(DepthSeries.TOO_DEEP).add(at);
+            }
+            if (!v.sound()) {
+                out.get(DepthSeries.PROBLEMS).add(at);
+            }
+        }
+        out.values().removeIf(List::isEmpty);
+        return out;
+    }
+
+    /** The name a variant's plan opens under: the plan's name, the variant's number and its values. */
+    public static String variantName(Plan base, VariantResult v) {
+        return base.name() + " — variant " + (v.index() + 1) + " (" + values(v) + ")";
+    }
+
+    /** A variant's plan, named as {@link #variantName} says, to open as a new document. */
+    public static Plan named(Plan variant, Plan base, VariantResult v) {
+        return new Plan(variantName(base, v), variant.units(), variant.settings(), variant.grid(), variant.levels(),
+                variant.floors(), variant.columns());
     }
 
     // ---- texts ------------------------------------------------------------------------------------

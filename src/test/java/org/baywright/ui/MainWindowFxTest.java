@@ -53,6 +53,26 @@ class MainWindowFxTest {
     }
 
     @Test
+    void thePlanToolsAreAwayOnTheStudyTab(FxRobot robot) {
+        Node select = robot.lookup("#tool-select").query();
+        assertTrue(shown(select), "the tools are on the Plan tab");
+        robot.interact(() -> window.showTab("Study"));
+        assertFalse(shown(select), "no plan tools on the Study tab");
+        robot.interact(() -> window.showTab("Plan"));
+        assertTrue(shown(select));
+    }
+
+    /** Shown: the node and every node above it visible. */
+    private static boolean shown(Node n) {
+        for (Node p = n; p != null; p = p.getParent()) {
+            if (!p.isVisible()) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    @Test
     void everyToolIsOnTheToolBarAndItsKeyPicksIt(FxRobot robot) {
         for (Tool t : Tool.values()) {
             ToggleButton b = robot.lookup("#" + t.buttonId()).queryAs(ToggleButton.class);

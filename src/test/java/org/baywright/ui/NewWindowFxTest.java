@@ -11,6 +11,7 @@ import java.util.List;
 import javafx.stage.Stage;
 import org.baywright.plan.Plan;
 import org.junit.jupiter.api.AfterEach;
+import org.baywright.study.VariantResult;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
@@ -25,9 +26,11 @@ class NewWindowFxTest {
     Path dir;
 
     private BaywrightApp app;
+    private Stage first;
 
     @Start
     void start(Stage stage) {
+        first = stage;
         app = new BaywrightApp(new RecoveryStore(dir.resolve("recovery")), Duration.ofMillis(200), List.of(BaywrightApp.DEMO),
                 TaskRunner.direct());
         app.start(stage);
@@ -49,6 +52,9 @@ class NewWindowFxTest {
         Stage second = app.others.get(0);
         assertTrue(second.isShowing());
         assertTrue(second.getTitle().contains("(not saved)"), second.getTitle());
+        assertTrue(second.getX() > first.getX() && second.getY() > first.getY(),
+                "the new window is offset from the first: " + second.getX() + "," + second.getY() + " vs " + first.getX() + ","
+                        + first.getY());
         assertTrue(!app.model().dirtyProperty().get(), "the first window's plan is untouched");
         // its own autosave copy appears in the recovery folder
         org.testfx.util.WaitForAsyncUtils.waitFor(60, java.util.concurrent.TimeUnit.SECONDS, () -> {
@@ -78,6 +84,10 @@ class NewWindowFxTest {
         robot.clickOn(point);
         org.testfx.util.WaitForAsyncUtils.waitForFxEvents();
         assertEquals(1, app.others.size(), "the variant opened in a window of its own");
-        assertTrue(app.others.get(0).getTitle().contains("(not saved)"), app.others.get(0).getTitle());
+        String title = app.others.get(0).getTitle();
+        assertTrue(title.contains("(not saved)"), title);
+        VariantResult v = (VariantResult) point.getUserData();
+        assertTrue(title.contains(StudyPanelModel.variantName(app.model().plan(), v)), "the title names the variant: " + title);
+        assertTrue(title.contains("variant " + (v.index() + 1) + " (beam-spacing "), title);
     }
 }

@@ -95,8 +95,8 @@ class PropertiesViewModelTest {
                 () -> assertEquals(Units.FT_.fromSi(Units.FT_.fromSi(g.tributaryArea())),
                         Double.parseDouble(row("Tributary area").replace(" ft²", "")), 0.5),
                 () -> assertEquals(g.maxRatio(), Double.parseDouble(row("Highest ratio")), 0.005),
-                () -> assertSameKips(kips(g.startReaction()), kips(row("Start reaction")), "start reaction"),
-                () -> assertSameKips(kips(g.endReaction()), kips(row("End reaction")), "end reaction"),
+                () -> assertSameKips(kips(g.startReaction()), kips(row("Start reaction, service")), "start reaction"),
+                () -> assertSameKips(kips(g.endReaction()), kips(row("End reaction, service")), "end reaction"),
                 () -> assertEquals(g.startSupport().isEmpty() ? "none" : g.startSupport(), row("Start support")),
                 () -> assertEquals(g.endSupport().isEmpty() ? "none" : g.endSupport(), row("End support")));
         assertFalse(checks.isEmpty());
@@ -105,12 +105,38 @@ class PropertiesViewModelTest {
             assertEquals(c.ratio(), Double.parseDouble(shown.split(" ")[0]), 0.005, c.name());
             assertEquals(c.combination().isEmpty(), !shown.contains("("), c.name() + ": the combination is named");
         }
-        // the member's loads by case, as the design took them
-        String loads = row("Loads on span");
+        // the member's service loads by case, as the design took them: live load reduced, and unreduced beside it
+        String loads = row("Span loads, service");
         for (LoadCase lc : g.loads().present()) {
-            Matcher m = Pattern.compile("(^|, )" + Pattern.quote(lc.symbol()) + " ([0-9.]+) kip").matcher(loads);
+            Matcher m = Pattern.compile("(^|\n)" + Pattern.quote(lc.symbol()) + " ([0-9.]+) kip").matcher(loads);
             assertTrue(m.find(), lc + " in " + loads);
             assertEquals(Units.KIPS.fromSi(g.loads().of(lc).totalLoad()), Double.parseDouble(m.group(2)), 0.05, lc.symbol());
+        }
+        assertTrue(g.loads().present().contains(LoadCase.L), "a girder of the demo carries live load");
+        Matcher reduced = Pattern.compile("\nL [0-9.]+ kip reduced \\(× ([0-9.]+)\\)").matcher(loads);
+        assertTrue(reduced.find(), loads);
+        assertEquals(g.liveFactor(), Double.parseDouble(reduced.group(1)), 0.005);
+        // unreduced: the live load both ends pass on (equilibrium of a simple span)
+        Matcher l0 = Pattern.compile("\nL0 ([0-9.]+) kip unreduced").matcher(loads);
+        assertTrue(l0.find(), loads);
+        double unreduced = Units.KIPS.fromSi(Component.byCase(g.startReaction())[LoadCase.L.ordinal()]
+                + Component.byCase(g.endReaction())[LoadCase.L.ordinal()]);
+        assertEquals(unreduced, Double.parseDouble(l0.group(1)), 0.05);
+        assertTrue(g.liveFactor() < 1, "the demo's girders have reduced live load");
+        assertTrue(Double.parseDouble(l0.group(1)) > Units.KIPS.fromSi(g.loads().of(LoadCase.L).totalLoad()),
+                "reduced live load is less than unreduced");
+        for (String end : List.of("Start", "End")) {
+            String service = row(end + " reaction, service");
+            assertTrue(service.endsWith("(live load unreduced)"), service);
+            // the governing LRFD reaction: max(1.4D, 1.2D + 1.6L) of the service reactions (ASCE 7-16 §2.3.1)
+            Map<String, Double> by = kips(end.equals("Start") ? g.startReaction() : g.endReaction());
+            double d = by.getOrDefault("D", 0.0);
+            double l = by.getOrDefault("L", 0.0);
+            String factored = row(end + " reaction, factored");
+            Matcher f = Pattern.compile("^([0-9.]+) kip \\((.+)\\)\n\\(live load unreduced\\)$").matcher(factored);
+            assertTrue(f.find(), factored);
+            assertEquals(Math.max(1.4 * d, 1.2 * d + 1.6 * l), Double.parseDouble(f.group(1)), 0.1, end);
+            assertEquals(1.4 * d > 1.2 * d + 1.6 * l ? "1.4D" : "1.2D + 1.6L", f.group(2), end);
         }
         // the heaviest rejected sections first, each with its governing check
         var rejected = g.design().rejected();
@@ -140,7 +166,10 @@ class PropertiesViewModelTest {
         long tierRows = vm.items().stream().filter(i -> i instanceof PropertiesViewModel.Row r && r.label().startsWith("Tier "))
                 .count();
         assertEquals(c.tiers().size(), tierRows, "one row per tier");
-        assertSameKips(kipsByCase(c.foundation()), kips(row("Foundation")), "foundation");
+        assertSameKips(kipsByCase(c.foundation()), kips(row("Foundation, service")), "foundation");
+        assertTrue(row("Foundation, service").endsWith("(live load unreduced)"));
+        assertSameKips(kipsByCase(c.foundationReduced()), kips(row("Foundation, service, live reduced")), "foundation, reduced");
+        assertTrue(row("Foundation, factored").endsWith("(live load reduced)"));
         assertTrue(vm.items().get(vm.items().size() - 1) instanceof PropertiesViewModel.FixedSize f && f.objectId().equals(c.id()));
     }
 

@@ -37,7 +37,31 @@ class ReadoutsTest {
                 () -> assertEquals(g.section(), value(rows, "Section")),
                 () -> assertEquals(g.status().label(), value(rows, "Status")),
                 () -> assertTrue(labels.contains("  flexure"), labels.toString()),
-                () -> assertTrue(value(rows, "Start reaction").matches("D [0-9.]+ kip.*"), value(rows, "Start reaction")));
+                () -> assertTrue(value(rows, "Start reaction, service").matches("(?s)D [0-9.]+ kip.*"),
+                        value(rows, "Start reaction, service")));
+    }
+
+    @Test
+    void theTakeoffSaysShortTonsOrTonnesAndHasAViewPerLevel() {
+        EditorModel m = new EditorModel(TaskRunner.direct());
+        m.open(EditorModelTest.DEMO);
+        org.baywright.report.Takeoff t = org.baywright.report.Takeoff.of(m.run(), 0);
+        String us = Readouts.takeoffTotals(t, m.run(), UnitSystem.US);
+        String si = Readouts.takeoffTotals(t, m.run(), UnitSystem.SI);
+        // 1 short ton = 2,000 lb; 1 tonne = 1,000 kg (common practice)
+        double tons = t.total() / org.baywright.units.Units.NEWTONS_PER_POUND / 2000;
+        assertAll(
+                () -> assertEquals("Short tons", Readouts.takeoffWeightHeading(UnitSystem.US)),
+                () -> assertEquals("Tonnes", Readouts.takeoffWeightHeading(UnitSystem.SI)),
+                () -> assertEquals(tons, Double.parseDouble(Readouts.takeoffWeight(t.total(), UnitSystem.US)), 0.005),
+                () -> assertTrue(us.startsWith(String.format(java.util.Locale.ROOT, "Total %.2f short tons (", tons)), us),
+                () -> assertTrue(si.contains(" tonnes ("), si),
+                () -> assertTrue(!us.matches("(?s).*\\d tons.*"), "no bare tons: " + us),
+                () -> assertEquals(t.byLevel(), Readouts.takeoffRows(t, Readouts.TakeoffView.LEVEL)),
+                () -> assertEquals(m.plan().levels().stream().map(org.baywright.plan.Level::name).toList(),
+                        Readouts.takeoffRows(t, Readouts.TakeoffView.LEVEL).stream().map(r -> r.item()).toList()),
+                () -> assertEquals(t.bySection(), Readouts.takeoffRows(t, Readouts.TakeoffView.SIZE)),
+                () -> assertEquals(t.byKind(), Readouts.takeoffRows(t, Readouts.TakeoffView.KIND)));
     }
 
     private static String value(List<Readouts.Row> rows, String label) {

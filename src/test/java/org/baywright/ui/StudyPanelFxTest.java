@@ -30,6 +30,7 @@ import org.baywright.plan.Plan;
 import org.baywright.study.Pareto;
 import org.baywright.study.StudyResult;
 import org.baywright.study.VariantResult;
+import org.baywright.units.UnitSystem;
 import org.baywright.units.Units;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
@@ -78,6 +79,11 @@ class StudyPanelFxTest {
         return chart.getData().stream().mapToInt(s -> s.getData().size()).sum();
     }
 
+    private static XYChart.Series<Number, Number> series(ScatterChart<Number, Number> chart, String name) {
+        return chart.getData().stream().filter(x -> x.getName().equals(name)).findFirst()
+                .orElseThrow(() -> new AssertionError("no series " + name));
+    }
+
     private static String text(FxRobot robot, String id) {
         return robot.lookup(id).queryAs(Label.class).getText();
     }
@@ -96,32 +102,50 @@ class StudyPanelFxTest {
 
         ScatterChart<Number, Number> depth = chart(robot, "#study-chart-depth");
         ScatterChart<Number, Number> across = chart(robot, "#study-chart-across");
-        XYChart.Series<Number, Number> front = depth.getData().get(1);
+        XYChart.Series<Number, Number> beams = series(depth, "Deepest beam");
+        XYChart.Series<Number, Number> girders = series(depth, "Deepest girder");
+        XYChart.Series<Number, Number> front = series(depth, "Pareto front");
+        UnitSystem us = UnitSystem.US;
         assertAll(
-                () -> assertEquals(8, points(depth), "one point per variant against depth"),
+                () -> assertEquals(8, beams.getData().size(), "every variant at its deepest beam"),
+                () -> assertEquals(8, girders.getData().size(), "every variant at its deepest girder"),
                 () -> assertEquals(8, points(across), "one point per variant across the spacing"),
-                () -> assertEquals("Pareto front", front.getName()),
                 () -> assertFalse(front.getData().isEmpty(), "the front has points"),
-                () -> assertEquals(front.getData().size(), robot.lookup(".study-front-point").queryAll().size()),
                 () -> assertEquals(8, ((TableView<?>) robot.lookup("#study-table").query()).getItems().size()),
+                () -> assertTrue(robot.lookup("#study-front-note").query().isVisible(), "the note comes with the results"),
                 () -> assertEquals(Caution.TEXT, text(robot, "#study-caution")));
-        // the front as drawn, over the sound variants (the front's ground; those with problems are a series of
-        // their own): no sound point is both lighter and shallower than a front point, and every other sound
-        // point is beaten by some front point (checked on the plotted numbers)
-        assertEquals(r.sound().size(), depth.getData().get(0).getData().size() + front.getData().size());
-        assertEquals(r.variants().size() - r.sound().size(), depth.getData().get(2).getData().size());
-        List<XYChart.Data<Number, Number>> all = new ArrayList<>();
-        all.addAll(depth.getData().get(0).getData());
-        all.addAll(front.getData());
-        for (XYChart.Data<Number, Number> f : front.getData()) {
-            for (XYChart.Data<Number, Number> o : all) {
-                assertFalse(Pareto.dominates(o, f, d -> d.getYValue().doubleValue(), d -> d.getXValue().doubleValue()),
+        for (XYChart.Data<Number, Number> d : beams.getData()) {
+            VariantResult v = (VariantResult) d.getExtraValue();
+            assertEquals(StudyPanelModel.depth(v.beamDepth(), us), d.getXValue().doubleValue(), 1e-9, "beam depth");
+        }
+        for (XYChart.Data<Number, Number> d : girders.getData()) {
+            VariantResult v = (VariantResult) d.getExtraValue();
+            assertEquals(StudyPanelModel.depth(v.girderDepth(), us), d.getXValue().doubleValue(), 1e-9, "girder depth");
+        }
+        // every legend entry has a marker, styled as its series' points
+        for (XYChart.Series<Number, Number> sr : depth.getData()) {
+            Label item = depth.lookupAll(".chart-legend-item").stream().map(n -> (Label) n)
+                    .filter(l -> l.getText().equals(sr.getName())).findFirst().orElseThrow();
+            Node marker = item.getGraphic();
+            assertNotNull(marker, sr.getName() + " has a marker");
+            String style = sr.getData().get(0).getNode().getStyleClass().stream().filter(c -> c.startsWith("study-depth-"))
+                    .findFirst().orElseThrow();
+            assertTrue(marker.getStyleClass().contains(style), sr.getName() + ": " + marker.getStyleClass());
+        }
+        // the front as drawn, at the structural depth: no sound variant is both lighter and shallower than a
+        // front point, and every other sound variant is beaten by some front variant
+        List<VariantResult> onFront = front.getData().stream().map(d -> (VariantResult) d.getExtraValue()).toList();
+        for (XYChart.Data<Number, Number> d : front.getData()) {
+            VariantResult f = (VariantResult) d.getExtraValue();
+            assertEquals(StudyPanelModel.depth(f.structuralDepth(), us), d.getXValue().doubleValue(), 1e-9);
+            for (VariantResult o : r.sound()) {
+                assertFalse(Pareto.dominates(o, f, VariantResult::weightPerArea, VariantResult::structuralDepth),
                         "a front point is dominated");
             }
         }
-        for (XYChart.Data<Number, Number> o : depth.getData().get(0).getData()) {
-            assertTrue(front.getData().stream().anyMatch(f -> Pareto.dominates(f, o, d -> d.getYValue().doubleValue(),
-                    d -> d.getXValue().doubleValue())), "a point off the front is beaten by the front");
+        for (VariantResult o : r.sound()) {
+            assertTrue(onFront.contains(o) || onFront.stream().anyMatch(f -> Pareto.dominates(f, o, VariantResult::weightPerArea,
+                    VariantResult::structuralDepth)), "a point off the front is beaten by the front");
         }
 
         // hovering a front point shows its figures in a tooltip
@@ -139,7 +163,7 @@ class StudyPanelFxTest {
         WaitForAsyncUtils.waitForFxEvents();
         assertEquals(1, opened.size());
         Plan p = opened.get(0);
-        assertEquals(panel.setup().spec().plan(v.index()), p);
+        assertEquals(StudyPanelModel.named(panel.setup().spec().plan(v.index()), plan, v), p, "the variant's plan, named after it");
         double spacing = v.settings().get(0).number();
         GridLine.Axis direction = v.settings().get(1).label().equals("x") ? GridLine.Axis.X : GridLine.Axis.Y;
         for (Infill inf : p.floors().get(0).infills()) {
@@ -154,6 +178,16 @@ class StudyPanelFxTest {
         robot.interact(() -> acrossBox.setValue("Beam direction"));
         assertEquals(8, points(across));
         assertEquals("Beam direction", across.getXAxis().getLabel());
+    }
+
+    @Test
+    void beforeARunNothingLooksSet(FxRobot robot) {
+        assertFalse(robot.lookup("#study-front-note").query().isVisible(), "no note about a chart with nothing in it");
+        for (StudyPanelModel.Field f : StudyPanelModel.FIELDS) {
+            TextField t = robot.lookup("#study-field-" + f.key()).queryAs(TextField.class);
+            assertEquals("", t.getText(), f.key() + " starts empty");
+            assertTrue(t.getPromptText().startsWith("e.g. "), f.key() + ": " + t.getPromptText());
+        }
     }
 
     @Test
@@ -200,7 +234,8 @@ class StudyPanelFxTest {
         assertTrue(r.variants().size() >= 1 && r.variants().size() < r.total(), r.variants().size() + " of " + r.total());
         String progress = text(robot, "#study-progress-text");
         assertEquals(StudyPanelModel.progress(r.variants().size(), r.total()) + " (cancelled)", progress);
-        assertEquals(r.variants().size(), points(chart(robot, "#study-chart-depth")), "the finished variants are drawn");
+        assertEquals(r.variants().size(), chart(robot, "#study-chart-depth").getData().stream().flatMap(x -> x.getData().stream())
+                .map(XYChart.Data::getExtraValue).distinct().count(), "the finished variants are drawn");
         assertFalse(robot.lookup("#study-error").queryAs(Label.class).isVisible(), "no error");
     }
 }

@@ -137,6 +137,55 @@ class StudyPanelModelTest {
     }
 
     @Test
+    void theDepthChartShowsBeamsAndGirdersApartAndMarksVariantsOverTheLimit() {
+        StudyPanelModel.Setup s = check(Map.of("beam-spacing", "6ft..12ft:2ft", "depth-limit", "18in")).setup();
+        // a spacing sweep: the beams change (deeper at wider spacing), the girder stays; the last is over 18 in
+        List<VariantResult> vs = new java.util.ArrayList<>();
+        double in = Units.IN.toSi(1);
+        double[] beams = {12 * in, 14 * in, 16 * in, 18.5 * in};
+        for (int i = 0; i < 4; i++) {
+            vs.add(new VariantResult(i, s.spec().variant(i), 1000 * (4 - i), 100, 10 * (4 - i), beams[i], 17 * in, 40 - i, 0.9,
+                    i == 2 ? 1 : 0, i == 2 ? 1 : 0, 0, ""));
+        }
+        StudyResult r = new StudyResult(vs, 4, false);
+        Map<StudyPanelModel.DepthSeries, List<StudyPanelModel.DepthPoint>> series = StudyPanelModel.depthSeries(s, r);
+        List<Double> beamX = series.get(StudyPanelModel.DepthSeries.BEAM).stream().map(StudyPanelModel.DepthPoint::depth).toList();
+        List<Double> girderX = series.get(StudyPanelModel.DepthSeries.GIRDER).stream().map(StudyPanelModel.DepthPoint::depth)
+                .toList();
+        assertAll(
+                () -> assertEquals(12, beamX.get(0), 1e-9),
+                () -> assertEquals(18.5, beamX.get(3), 1e-9),
+                () -> assertEquals(4, new java.util.HashSet<>(beamX).size(), "the sweep shows in the beams' depths"),
+                () -> assertEquals(List.of(17.0, 17.0, 17.0, 17.0), girderX.stream().map(x -> Math.rint(x * 1e9) / 1e9).toList()),
+                () -> assertTrue(StudyPanelModel.tooDeep(s, vs.get(3))),
+                () -> assertFalse(StudyPanelModel.tooDeep(s, vs.get(2)), "17 in is within 18 in"),
+                () -> assertEquals(List.of(vs.get(3)), series.get(StudyPanelModel.DepthSeries.TOO_DEEP).stream()
+                        .map(StudyPanelModel.DepthPoint::variant).toList()),
+                () -> assertEquals(18.5, series.get(StudyPanelModel.DepthSeries.TOO_DEEP).get(0).depth(), 1e-9,
+                        "at the structural depth"),
+                () -> assertEquals(List.of(vs.get(2)), series.get(StudyPanelModel.DepthSeries.PROBLEMS).stream()
+                        .map(StudyPanelModel.DepthPoint::variant).toList()),
+                () -> assertTrue(series.values().stream().noneMatch(List::isEmpty), "only series with points"));
+        // without a limit nothing is over it, and the series is not there
+        StudyPanelModel.Setup free = check(Map.of("beam-spacing", "6ft..12ft:2ft")).setup();
+        assertFalse(StudyPanelModel.depthSeries(free, r).containsKey(StudyPanelModel.DepthSeries.TOO_DEEP));
+        assertEquals("Two bay — variant 4 (beam-spacing 12ft)".replace("Two bay", TWO_BAY.name()),
+                StudyPanelModel.variantName(TWO_BAY, vs.get(3)));
+        assertEquals(StudyPanelModel.variantName(TWO_BAY, vs.get(3)), StudyPanelModel.named(TWO_BAY, TWO_BAY, vs.get(3)).name());
+    }
+
+    @Test
+    void anEmptyFieldIsNotUsedAndItsPromptReadsAsAnExample() {
+        for (StudyPanelModel.Field f : StudyPanelModel.FIELDS) {
+            assertTrue(f.prompt(UnitSystem.US).startsWith("e.g. "), f.prompt(UnitSystem.US));
+            assertTrue(f.prompt(UnitSystem.SI).startsWith("e.g. "), f.prompt(UnitSystem.SI));
+        }
+        StudyPanelModel.Setup s = check(Map.of("beam-spacing", "8ft", "depth-limit", "", "objective", " ")).setup();
+        assertEquals(0, s.depthLimit(), "no depth limit when its field is empty");
+        assertEquals(Objective.weight(), s.objective(), "weight alone when the objective is empty");
+    }
+
+    @Test
     void theTooltipAndTheSummaryGiveTheVariantsFigures() {
         StudyPanelModel.Setup s = check(Map.of("beam-spacing", "6ft..12ft:2ft", "beam-direction", "x,y")).setup();
         StudyResult r = made(s);

@@ -29,15 +29,6 @@ public final class TakeoffWorkbook {
     /** The sheet names, in order. */
     public static final List<String> SHEETS = List.of("Items", "By size", "By level", "By kind", "Totals");
 
-    static {
-        // Apache POI logs through the Log4j API. With no Log4j implementation shipped (none is needed),
-        // the API prints "could not find a logging provider" on the user's console; its own simple
-        // logger (errors only, to standard error) keeps real errors visible and that notice away.
-        if (System.getProperty("log4j2.loggerContextFactory") == null && System.getProperty("log4j.provider") == null) {
-            System.setProperty("log4j2.loggerContextFactory", "org.apache.logging.log4j.simple.SimpleLoggerContextFactory");
-        }
-    }
-
     private TakeoffWorkbook() {
     }
 

@@ -508,17 +508,7 @@ public final class PlanEdits {
 
     /** Point in polygon by the even–odd rule (boundary points may fall either way). */
     public static boolean contains(Polygon poly, Point q) {
-        boolean in = false;
-        List<Point> v = poly.vertices();
-        for (int i = 0, j = v.size() - 1; i < v.size(); j = i++) {
-            Point a = v.get(i);
-            Point b = v.get(j);
-            if ((a.y() > q.y()) != (b.y() > q.y())
-                    && q.x() < (b.x() - a.x()) * (q.y() - a.y()) / (b.y() - a.y()) + a.x()) {
-                in = !in;
-            }
-        }
-        return in;
+        return poly.contains(q.x(), q.y());
     }
 
     // ------------------------------------------------------------------ openings and loads

@@ -18,6 +18,22 @@ public record Polygon(List<Point> vertices) {
     }
 
     /** Signed area by the shoelace formula, m² (positive when counter-clockwise). */
+    /**
+     * Whether the point (x, y) lies inside, by the even–odd rule (points on the boundary may fall either
+     * way). The one point-in-polygon test of the program: the editor, the takedown and the drawing call it.
+     */
+    public boolean contains(double x, double y) {
+        boolean in = false;
+        for (int i = 0, j = vertices.size() - 1; i < vertices.size(); j = i++) {
+            Point a = vertices.get(i);
+            Point b = vertices.get(j);
+            if ((a.y() > y) != (b.y() > y) && x < (b.x() - a.x()) * (y - a.y()) / (b.y() - a.y()) + a.x()) {
+                in = !in;
+            }
+        }
+        return in;
+    }
+
     public double signedArea() {
         double a = 0;
         int n = vertices.size();

@@ -159,17 +159,7 @@ public final class SlabEdges {
 
     /** Even-odd point in polygon (points on the boundary may go either way). */
     static boolean contains(Polygon poly, Point p) {
-        List<Point> v = poly.vertices();
-        boolean in = false;
-        for (int i = 0, j = v.size() - 1; i < v.size(); j = i++) {
-            Point a = v.get(i);
-            Point b = v.get(j);
-            if ((a.y() > p.y()) != (b.y() > p.y())
-                    && p.x() < (b.x() - a.x()) * (p.y() - a.y()) / (b.y() - a.y()) + a.x()) {
-                in = !in;
-            }
-        }
-        return in;
+        return poly.contains(p.x(), p.y());
     }
 
     /** Distance along the ray to the farthest crossing of the polygon boundary in front (0 if none). */

@@ -676,17 +676,7 @@ public final class PlanPicture {
 
     /** Even–odd point-in-polygon test. */
     static boolean contains(Polygon poly, Pt p) {
-        boolean in = false;
-        List<Point> v = poly.vertices();
-        for (int i = 0, j = v.size() - 1; i < v.size(); j = i++) {
-            Point a = v.get(i);
-            Point b = v.get(j);
-            if ((a.y() > p.y()) != (b.y() > p.y())
-                    && p.x() < (b.x() - a.x()) * (p.y() - a.y()) / (b.y() - a.y()) + a.x()) {
-                in = !in;
-            }
-        }
-        return in;
+        return poly.contains(p.x(), p.y());
     }
 
     private static List<Pt> pts(Polygon p) {

@@ -182,8 +182,12 @@ public final class StudyCommand implements Callable<Integer> {
         Set<Integer> piecesFront = indices(r.weightPiecesFront());
         List<String> header = new ArrayList<>(List.of("#"));
         sweeps.forEach(s -> header.add(s.parameter().key()));
+        boolean infill = r.variants().stream().anyMatch(v -> v.infill().present());
+        if (infill) {
+            header.addAll(List.of("spacing " + us.length().symbol(), "beams/bay"));
+        }
         header.addAll(List.of("weight " + weightUnit(us), perAreaUnit(us), "beam d " + us.smallLength().symbol(),
-                "girder d " + us.smallLength().symbol(), "pieces", "ratio", "problems", "front"));
+                "girder d " + us.smallLength().symbol(), "pieces", "ratio", "problems", "front", "same as"));
         boolean[] right = new boolean[header.size()];
         for (int i = 1 + sweeps.size(); i < right.length - 1; i++) {
             right[i] = true;
@@ -194,6 +198,10 @@ public final class StudyCommand implements Callable<Integer> {
             List<String> row = new ArrayList<>();
             row.add(Integer.toString(v.index() + 1));
             v.settings().forEach(s -> row.add(s.label()));
+            if (infill) {
+                row.add(num(us.length().fromSi(v.infill().largestSpacing()), 2));
+                row.add(v.infill().present() ? v.infill().beamsPerBay() : "-");
+            }
             row.add(num(weight(v.steelWeight(), us), 0));
             row.add(num(perArea(v.weightPerArea(), us), 2));
             row.add(num(us.smallLength().fromSi(v.beamDepth()), 1));
@@ -202,6 +210,7 @@ public final class StudyCommand implements Callable<Integer> {
             row.add(num(v.maxRatio(), 3));
             row.add(v.message().isEmpty() ? Integer.toString(v.problems()) : "not run");
             row.add((depthFront.contains(v.index()) ? "D" : "") + (piecesFront.contains(v.index()) ? "P" : ""));
+            row.add(sameAs(r, v));
             t.row(row.toArray(String[]::new));
         }
         StringBuilder b = new StringBuilder();
@@ -209,6 +218,13 @@ public final class StudyCommand implements Callable<Integer> {
                 .append(r.total()).append(" variants, each a full run").append(r.cancelled() ? "; cancelled" : "").append(")\n");
         b.append(t.render("  "));
         b.append("front: D = Pareto front of weight per area and structural depth; P = of weight per area and pieces\n");
+        if (infill) {
+            b.append("spacing: the largest actual distance between infill beams (a typed spacing is a maximum, rounded to"
+                    + " whole beams per bay)\n");
+        }
+        if (r.variants().stream().anyMatch(v -> r.sameFloorAs(v).isPresent())) {
+            b.append("same as: the variant designs the same floor (members, positions and sizes) as the one named\n");
+        }
         for (VariantResult v : r.variants()) {
             if (!v.message().isEmpty()) {
                 b.append("  variant ").append(v.index() + 1).append(": ").append(v.message()).append('\n');
@@ -229,6 +245,12 @@ public final class StudyCommand implements Callable<Integer> {
         }
         b.append(Caution.TEXT).append('\n');
         return b.toString();
+    }
+
+    /** "#3" when the variant designs the same floor as variant 3, else empty. */
+    static String sameAs(StudyResult r, VariantResult v) {
+        var same = r.sameFloorAs(v);
+        return same.isPresent() ? "#" + (same.getAsInt() + 1) : "";
     }
 
     private static String describe(Objective obj, UnitSystem us) {
@@ -258,15 +280,18 @@ public final class StudyCommand implements Callable<Integer> {
         List<String> header = new ArrayList<>(List.of("variant"));
         sweeps.forEach(s -> header.add(s.parameter().key()));
         String small = us.smallLength().symbol();
-        header.addAll(List.of("steel weight (" + weightUnit(us) + ")", "weight per area (" + perAreaUnit(us) + ")",
+        header.addAll(List.of("actual beam spacing (" + us.length().symbol() + ")", "beams per bay",
+                "steel weight (" + weightUnit(us) + ")", "weight per area (" + perAreaUnit(us) + ")",
                 "deepest beam d (" + small + ")", "deepest girder d (" + small + ")", "structural depth (" + small + ")",
                 "pieces", "max ratio", "problems", "sound", "weight-depth front", "weight-pieces front",
-                "score (" + perAreaUnit(us) + ")", "message"));
+                "score (" + perAreaUnit(us) + ")", "same floor as variant", "message"));
         b.append(String.join(",", header.stream().map(StudyCommand::cell).toList())).append('\n');
         for (VariantResult v : r.variants()) {
             List<String> row = new ArrayList<>();
             row.add(Integer.toString(v.index() + 1));
             v.settings().forEach(s -> row.add(cell(s.label())));
+            row.add(plain(us.length().fromSi(v.infill().largestSpacing())));
+            row.add(v.infill().beamsPerBay());
             row.add(plain(weight(v.steelWeight(), us)));
             row.add(plain(perArea(v.weightPerArea(), us)));
             row.add(plain(us.smallLength().fromSi(v.beamDepth())));
@@ -279,6 +304,7 @@ public final class StudyCommand implements Callable<Integer> {
             row.add(Boolean.toString(depthFront.contains(v.index())));
             row.add(Boolean.toString(piecesFront.contains(v.index())));
             row.add(plain(perArea(obj.score(v), us)));
+            row.add(sameAs(r, v).replace("#", ""));
             row.add(cell(v.message()));
             b.append(String.join(",", row)).append('\n');
         }
@@ -306,7 +332,7 @@ public final class StudyCommand implements Callable<Integer> {
         o.put("version", 1);
         o.put("plan", plan.name());
         o.put("units", org.baywright.report.RunSummary.ordered("system", us.name().toLowerCase(Locale.ROOT), "weight", weightUnit(us), "weightPerArea",
-                perAreaUnit(us), "depth", us.smallLength().symbol()));
+                perAreaUnit(us), "depth", us.smallLength().symbol(), "spacing", us.length().symbol()));
         o.put("parameters", sweeps.stream().map(s -> s.parameter().key()).toList());
         o.put("objective", obj.pieceCost() == 0 ? "weight" : "weight+pieces");
         o.put("pieceCost", weight(obj.pieceCost(), us));
@@ -321,6 +347,8 @@ public final class StudyCommand implements Callable<Integer> {
             Map<String, Object> values = new LinkedHashMap<>();
             v.settings().forEach(s -> values.put(s.parameter().key(), s.label()));
             j.put("values", values);
+            j.put("beamSpacing", json(us.length().fromSi(v.infill().largestSpacing())));
+            j.put("beamsPerBay", v.infill().present() ? v.infill().beamsPerBay() : null);
             j.put("steelWeight", json(weight(v.steelWeight(), us)));
             j.put("weightPerArea", json(perArea(v.weightPerArea(), us)));
             j.put("beamDepth", json(us.smallLength().fromSi(v.beamDepth())));
@@ -333,6 +361,8 @@ public final class StudyCommand implements Callable<Integer> {
             j.put("weightDepthFront", depthFront.contains(v.index()));
             j.put("weightPiecesFront", piecesFront.contains(v.index()));
             j.put("score", json(perArea(obj.score(v), us)));
+            var same = r.sameFloorAs(v);
+            j.put("sameFloorAs", same.isPresent() ? (Object) (same.getAsInt() + 1) : null);
             j.put("message", v.message().isEmpty() ? null : v.message());
             variants.add(j);
         }

@@ -32,10 +32,25 @@ public record StudyResult(List<VariantResult> variants, int total, boolean cance
 
     /**
      * The best {@code n} sound variants for an objective whose structural depth is within a limit
-     * (0 = none), best first; ties keep study order.
+     * (0 = none), best first; ties keep study order. A variant that designs the same floor as an earlier one
+     * is that floor again, so only the first of each group is listed.
      */
     public List<VariantResult> best(Objective objective, double depthLimit, int n) {
         return sound().stream().filter(v -> depthLimit <= 0 || v.structuralDepth() <= depthLimit + SearchLimits.DEPTH_ROUNDING)
+                .filter(v -> sameFloorAs(v).isEmpty())
                 .sorted(Comparator.comparingDouble(objective::score).thenComparingInt(VariantResult::index)).limit(n).toList();
+    }
+
+    /**
+     * The first variant (lowest index) that designs the same floor as {@code v}, when it is not {@code v}
+     * itself: a spacing sweep often gives the same beams for several spacings. Empty for the first of a group
+     * and for a variant that did not run.
+     */
+    public java.util.OptionalInt sameFloorAs(VariantResult v) {
+        if (v.floorKey().isEmpty()) {
+            return java.util.OptionalInt.empty();
+        }
+        return variants.stream().filter(o -> o.floorKey().equals(v.floorKey())).mapToInt(VariantResult::index).min()
+                .stream().filter(i -> i != v.index()).findFirst();
     }
 }

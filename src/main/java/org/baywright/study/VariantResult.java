@@ -27,12 +27,27 @@ import org.baywright.takedown.TakedownResult;
  * @param errors how many of them are errors
  * @param unsized members and tiers overstressed or unsupported
  * @param message why the variant could not be run (its settings do not fit the plan), else empty
+ * @param infill the infill beams the variant's plan actually placed (a maximum spacing is rounded to a
+ *     whole number of beams per bay, so several spacings may give the same floor)
+ * @param floorKey a digest of the designed floor: every member's kind, position and section and every
+ *     column tier's section at every level; two variants with the same key are the same floor (empty when
+ *     the variant did not run)
  */
 public record VariantResult(int index, List<Setting> settings, double steelWeight, double floorArea, double weightPerArea,
         double beamDepth, double girderDepth, int pieces, double maxRatio, int problems, int errors, int unsized,
-        String message) {
+        String message, InfillLayout infill, String floorKey) {
     public VariantResult {
         settings = List.copyOf(settings);
+        infill = infill == null ? InfillLayout.NONE : infill;
+        floorKey = floorKey == null ? "" : floorKey;
+    }
+
+    /** The figures without infill layout or floor digest (tests and hand-made results). */
+    public VariantResult(int index, List<Setting> settings, double steelWeight, double floorArea, double weightPerArea,
+            double beamDepth, double girderDepth, int pieces, double maxRatio, int problems, int errors, int unsized,
+            String message) {
+        this(index, settings, steelWeight, floorArea, weightPerArea, beamDepth, girderDepth, pieces, maxRatio, problems, errors,
+                unsized, message, InfillLayout.NONE, "");
     }
 
     /** Structural depth: the deeper of the deepest beam and the deepest girder, m. */
@@ -58,7 +73,7 @@ public record VariantResult(int index, List<Setting> settings, double steelWeigh
         int errors = (int) problems.stream().filter(p -> p.severity() == Problem.Severity.ERROR).count();
         if (t == null) {
             return new VariantResult(index, settings, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, 0, Double.NaN,
-                    problems.size(), Math.max(1, errors), 0, "");
+                    problems.size(), Math.max(1, errors), 0, "", InfillLayout.of(run.plan()), "");
         }
         double beam = 0;
         double girder = 0;
@@ -85,6 +100,43 @@ public record VariantResult(int index, List<Setting> settings, double steelWeigh
         double w = t.steelWeight();
         double area = t.floorArea();
         return new VariantResult(index, settings, w, area, area > 0 ? w / area : Double.NaN, beam, girder, pieces,
-                RunSummary.maxRatio(t), problems.size(), errors, unsized, "");
+                RunSummary.maxRatio(t), problems.size(), errors, unsized, "", InfillLayout.of(run.plan()), floorKey(run));
+    }
+
+    /**
+     * The digest of a designed floor: per level in order, the members sorted by kind and position
+     * (millimetres) with their sections, then every column tier's section. Ids and generated names are left
+     * out, so two spacings that place the same beams give the same key.
+     */
+    static String floorKey(RunResult run) {
+        TakedownResult t = run.takedown();
+        StringBuilder b = new StringBuilder();
+        for (Level lv : run.plan().levels()) {
+            b.append("level ").append(lv.name()).append('\n');
+            List<String> lines = new java.util.ArrayList<>();
+            for (MemberResult m : t.members().getOrDefault(t.levelFloors().get(lv.name()), List.of())) {
+                lines.add(m.kind() + " " + mm(m.start().x()) + " " + mm(m.start().y()) + " "
+                        + mm(m.end().x()) + " " + mm(m.end().y()) + " "
+                        + (m.design() != null && m.design().section() != null ? m.design().section().designation() : "-"));
+            }
+            java.util.Collections.sort(lines);
+            lines.forEach(l -> b.append(l).append('\n'));
+        }
+        for (ColumnResult c : t.columns()) {
+            b.append("column ").append(c.grid()).append(' ').append(mm(c.at().x())).append(' ').append(mm(c.at().y()));
+            c.tiers().forEach(tier -> b.append(' ').append(tier.section() == null ? "-" : tier.section()));
+            b.append('\n');
+        }
+        try {
+            byte[] d = java.security.MessageDigest.getInstance("SHA-256").digest(b.toString().getBytes(
+                    java.nio.charset.StandardCharsets.UTF_8));
+            return java.util.HexFormat.of().formatHex(d, 0, 12);
+        } catch (java.security.NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is part of every Java runtime", e);
+        }
+    }
+
+    private static long mm(double metres) {
+        return Math.round(metres * 1000);
     }
 }

@@ -564,7 +564,8 @@ public final class StudyPanel extends BorderPane {
             Consumer<Node> wire = node -> {
                 node.getStyleClass().addAll("study-point", styleClass);
                 node.setUserData(v);
-                Tooltip tip = new Tooltip(StudyPanelModel.describe(v, us, front.contains(v.index())));
+                Tooltip tip = new Tooltip(StudyPanelModel.describe(v, us, front.contains(v.index()),
+                        result == null ? java.util.OptionalInt.empty() : result.sameFloorAs(v)));
                 tip.setShowDelay(Duration.millis(150));
                 tip.setShowDuration(Duration.seconds(30));
                 Tooltip.install(node, tip);
@@ -604,6 +605,11 @@ public final class StudyPanel extends BorderPane {
             c.setComparator((a, b) -> Integer.compare(labelIndex(k, a), labelIndex(k, b)));
             table.getColumns().add(c);
         }
+        if (result.variants().stream().anyMatch(v -> v.infill().present())) {
+            table.getColumns().add(column("Spacing (" + us.length().symbol() + ")",
+                    v -> round(us.length().fromSi(v.infill().largestSpacing()), 2)));
+            table.getColumns().add(column("Beams/bay", v -> v.infill().present() ? v.infill().beamsPerBay() : "—"));
+        }
         table.getColumns().add(column("Steel (" + StudyPanelModel.weightUnit(us) + ")",
                 v -> round(StudyPanelModel.weight(v.steelWeight(), us), 0)));
         table.getColumns().add(column(StudyPanelModel.perAreaUnit(us), v -> round(StudyPanelModel.perArea(v.weightPerArea(), us), 2)));
@@ -614,6 +620,11 @@ public final class StudyPanel extends BorderPane {
         table.getColumns().add(column("Problems", v -> v.message().isEmpty() ? (Object) v.problems() : "not run"));
         table.getColumns().add(column("Front", v -> (depthFront.contains(v.index()) ? "D" : "")
                 + (piecesFront.contains(v.index()) ? "P" : "")));
+        StudyResult shown = result;
+        table.getColumns().add(column("Same as", v -> {
+            var same = shown.sameFloorAs(v);
+            return same.isPresent() ? "#" + (same.getAsInt() + 1) : "";
+        }));
         if (setup.depthLimit() > 0) {
             table.getColumns().add(column("Depth limit", v -> StudyPanelModel.tooDeep(setup, v) ? "exceeded" : "within"));
         }

@@ -450,6 +450,14 @@ public final class StudyPanelModel {
 
     /** The tooltip of a variant: its values and figures, in the plan's units. */
     public static String describe(VariantResult v, UnitSystem us, boolean onDepthFront) {
+        return describe(v, us, onDepthFront, java.util.OptionalInt.empty());
+    }
+
+    /**
+     * The tooltip of a variant, naming the earlier variant that designs the same floor (from
+     * {@link StudyResult#sameFloorAs}) when there is one.
+     */
+    public static String describe(VariantResult v, UnitSystem us, boolean onDepthFront, java.util.OptionalInt sameAs) {
         StringBuilder b = new StringBuilder();
         b.append("Variant ").append(v.index() + 1).append(onDepthFront ? " (on the weight–depth front)" : "").append('\n');
         b.append(values(v)).append('\n');
@@ -462,6 +470,15 @@ public final class StudyPanelModel {
         String d = us.smallLength().symbol();
         b.append(String.format(Locale.ROOT, "deepest beam %.1f %s, deepest girder %.1f %s%n", depth(v.beamDepth(), us), d,
                 depth(v.girderDepth(), us), d));
+        if (v.infill().present()) {
+            int n = v.infill().mostBeams();
+            b.append(String.format(Locale.ROOT, "infill: %s beam%s per bay, actual spacing up to %.2f %s%n",
+                    v.infill().beamsPerBay(), n == 1 && v.infill().fewestBeams() == 1 ? "" : "s",
+                    us.length().fromSi(v.infill().largestSpacing()), us.length().symbol()));
+        }
+        if (sameAs.isPresent()) {
+            b.append("the same floor as variant ").append(sameAs.getAsInt() + 1).append(" (members, positions and sizes)\n");
+        }
         b.append(String.format(Locale.ROOT, "%d pieces; highest ratio %.2f", v.pieces(), v.maxRatio()));
         if (v.problems() > 0) {
             b.append(String.format(Locale.ROOT, "; %d problem%s", v.problems(), v.problems() == 1 ? "" : "s"));

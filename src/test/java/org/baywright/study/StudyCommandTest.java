@@ -60,6 +60,53 @@ class StudyCommandTest {
         assertTrue(t.get("variants").get(0).get("weightDepthFront").isBoolean());
     }
 
+    /**
+     * A spacing typed as a maximum becomes a whole number of beams per bay: in a 30 ft bay every maximum from
+     * 10 ft to 14 ft gives 2 beams at 10 ft (30 / 3), and 15 ft gives 1 beam at 15 ft (arithmetic of the
+     * infill rule, COMPUTED). The table, the CSV and the JSON show the actual spacing and beams per bay and mark
+     * the variants that design the same floor.
+     */
+    @Test
+    void aSpacingSweepShowsTheActualSpacingAndMarksIdenticalFloors(@TempDir Path dir) throws Exception {
+        Path plan = plan(dir);
+        Path csv = dir.resolve("s.csv");
+        Run r = run("study", plan.toString(), "--vary", "beam-spacing=10ft..15ft:1ft", "--csv", csv.toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("beams/bay") && r.out().contains("same as"), r.out());
+        assertTrue(r.out().contains("same as: the variant designs the same floor"), r.out());
+        Run j = run("study", plan.toString(), "--vary", "beam-spacing=10ft..15ft:1ft", "--json", "-");
+        assertEquals(0, j.code(), j.err());
+        JsonNode vs = new ObjectMapper().readTree(j.out()).get("variants");
+        assertEquals(6, vs.size());
+        for (int i = 0; i < 5; i++) {
+            JsonNode v = vs.get(i);
+            assertEquals(10.0, v.get("beamSpacing").asDouble(), 1e-6, "variant " + (i + 1));
+            assertEquals("2", v.get("beamsPerBay").asText(), "variant " + (i + 1));
+            if (i == 0) {
+                assertTrue(v.get("sameFloorAs").isNull(), "the first of a group names no other");
+            } else {
+                assertEquals(1, v.get("sameFloorAs").asInt(), "variant " + (i + 1));
+            }
+        }
+        assertEquals(15.0, vs.get(5).get("beamSpacing").asDouble(), 1e-6);
+        assertEquals("1", vs.get(5).get("beamsPerBay").asText());
+        assertTrue(vs.get(5).get("sameFloorAs").isNull(), "one beam per bay is another floor");
+        var lines = Files.readAllLines(csv);
+        var header = java.util.Arrays.asList(lines.get(0).split(","));
+        int spacing = header.indexOf("actual beam spacing (ft)");
+        int beams = header.indexOf("beams per bay");
+        int same = header.indexOf("same floor as variant");
+        assertTrue(spacing > 0 && beams > 0 && same > 0, lines.get(0));
+        String[] third = lines.get(3).split(",", -1);
+        assertEquals(10.0, Double.parseDouble(third[spacing]), 1e-6);
+        assertEquals("2", third[beams]);
+        assertEquals("1", third[same]);
+        JsonNode best = new ObjectMapper().readTree(j.out()).get("best");
+        assertEquals(2, best.size(), best.toString());
+        assertEquals(java.util.Set.of(1, 6), java.util.Set.of(best.get(0).asInt(), best.get(1).asInt()),
+                "the best list names each floor once: " + best);
+    }
+
     @ParameterizedTest
     @ValueSource(strings = {"beam-spacing", "spacing=6ft", "beam-spacing=6ft..3ft:1ft", "beam-spacing=6..15:1",
         "beam-spacing=6ft..15ft", "beam-spacing=6ft,,8ft", "beam-direction=z", "beam-direction=x..y:1", "method=wsd",

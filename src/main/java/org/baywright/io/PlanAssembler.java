@@ -75,7 +75,8 @@ final class PlanAssembler {
     private static final Map<String, Boolean> GIRDER_AREA_DELIVERED = ordered("delivered", true, "half-bay", false);
     private static final Map<String, Boolean> DEFLECTION_LIVE_REDUCED = ordered("unreduced", false, "reduced", true);
     private static final Map<String, LiveLoadUse> USES = ordered("ordinary", LiveLoadUse.ORDINARY, "assembly",
-            LiveLoadUse.ASSEMBLY, "garage", LiveLoadUse.GARAGE, "not-reducible", LiveLoadUse.NOT_REDUCIBLE);
+            LiveLoadUse.ASSEMBLY, "garage", LiveLoadUse.GARAGE, "storage-light", LiveLoadUse.STORAGE_LIGHT, "storage-heavy",
+            LiveLoadUse.STORAGE_HEAVY, "not-reducible", LiveLoadUse.NOT_REDUCIBLE);
 
     private final Problems problems;
 

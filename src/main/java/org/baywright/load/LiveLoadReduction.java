@@ -103,7 +103,7 @@ public final class LiveLoadReduction {
             Calc.branch(calc, "live load marked not reducible → L = L0", Asce7.clause("§4.7"));
             return none("L", l0, RULE_NOT_REDUCIBLE, Asce7.clause("§4.7"), calc);
         }
-        boolean heavy = l0 > HEAVY_LIVE_LOAD;
+        boolean heavy = l0 > HEAVY_LIVE_LOAD || use == ReducibleUse.HEAVY;
         if (use == ReducibleUse.ASSEMBLY && !heavy) {
             Calc.branch(calc, "assembly use, L0 ≤ 100 psf (4.79 kN/m²) → no reduction", Asce7.clause("§4.7.5"));
             return none("L", l0, RULE_ASSEMBLY, Asce7.clause("§4.7.5"), calc);
@@ -111,7 +111,8 @@ public final class LiveLoadReduction {
         boolean garage = use == ReducibleUse.GARAGE;
         boolean capped = heavy || garage;
         String capClause = Asce7.clause(garage ? "§4.7.4" : "§4.7.3");
-        String capWhy = garage ? "passenger-vehicle garage" : "L0 > 100 psf (4.79 kN/m²)";
+        String capWhy = garage ? "passenger-vehicle garage"
+                : l0 > HEAVY_LIVE_LOAD ? "L0 > 100 psf (4.79 kN/m²)" : "storage live load (heavy live load whatever L0)";
         if (capped && floors == 1) {
             Calc.branch(calc, capWhy + ", member supporting one floor → no reduction", capClause);
             return none("L", l0, garage ? RULE_GARAGE_ONE_FLOOR : RULE_HEAVY_ONE_FLOOR, capClause, calc);

@@ -8,6 +8,11 @@ public enum ReducibleUse {
     ASSEMBLY,
     /** Passenger-vehicle garage: not reduced, except by up to 20 % for members supporting two or more floors (§4.7.4). */
     GARAGE,
+    /**
+     * Heavy live load: storage (light or heavy) whatever its value, or any load over 100 psf; not reduced on a
+     * member supporting one floor, and by at most 20 % on one supporting two or more (§4.7.3).
+     */
+    HEAVY,
     /** Live load the user excludes from reduction for any other reason: never reduced. */
     NOT_REDUCIBLE
 }

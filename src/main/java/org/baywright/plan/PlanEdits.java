@@ -646,6 +646,71 @@ public final class PlanEdits {
         });
     }
 
+    // ------------------------------------------------------------------ levels and load values
+
+    /**
+     * Renames a level and sets the height of the storey below it; the elevations of that level and every
+     * level above move by the change of height, and a column whose top level was the old name keeps it under
+     * the new one.
+     *
+     * @throws IllegalArgumentException for an unknown level, a blank or duplicate name, or a height that is
+     *     not positive
+     */
+    public static Plan setLevel(Plan p, String level, String newName, double storeyHeight) {
+        String name = newName == null ? "" : newName.trim();
+        int at = -1;
+        for (int i = 0; i < p.levels().size(); i++) {
+            if (p.levels().get(i).name().equals(level)) {
+                at = i;
+            }
+        }
+        if (at < 0) {
+            throw new IllegalArgumentException("the plan has no level " + level);
+        }
+        if (name.isEmpty()) {
+            throw new IllegalArgumentException("level " + level + ": a level needs a name");
+        }
+        if (!name.equals(level) && p.levels().stream().anyMatch(l -> l.name().equals(name))) {
+            throw new IllegalArgumentException("level " + level + ": another level is already called " + name);
+        }
+        if (!(storeyHeight > 0) || !Double.isFinite(storeyHeight)) {
+            throw new IllegalArgumentException("level " + level + ": the storey height must be a positive length");
+        }
+        double delta = storeyHeight - p.levels().get(at).storeyHeight();
+        List<Level> ls = new ArrayList<>();
+        for (int i = 0; i < p.levels().size(); i++) {
+            Level l = p.levels().get(i);
+            ls.add(i < at ? l : new Level(i == at ? name : l.name(), l.elevation() + delta,
+                    i == at ? storeyHeight : l.storeyHeight(), l.floor()));
+        }
+        List<Column> cs = p.columns().stream().map(c -> c.topLevel().equals(level)
+                ? new Column(c.id(), c.at(), c.grid(), name, c.fixedSection()) : c).toList();
+        return new Plan(p.name(), p.units(), p.settings(), p.grid(), ls, p.floors(), cs);
+    }
+
+    /**
+     * Sets the values of a load area, line load or point load of a floor, and a load area's use (null keeps
+     * it).
+     *
+     * @throws IllegalArgumentException when the floor has no load with that id
+     */
+    public static Plan setLoadValues(Plan p, String floorId, String id, LoadValues values, LiveLoadUse use) {
+        return editFloor(p, floorId, f -> {
+            boolean found = f.areaLoads().stream().anyMatch(a -> a.id().equals(id))
+                    || f.lineLoads().stream().anyMatch(l -> l.id().equals(id))
+                    || f.pointLoads().stream().anyMatch(q -> q.id().equals(id));
+            if (!found) {
+                throw new IllegalArgumentException("floor " + floorId + " has no load " + id);
+            }
+            return new Floor(f.id(), f.name(), f.roof(), f.slabEdge(), f.decks(), f.members(), f.infills(), f.openings(),
+                    f.areaLoads().stream().map(a -> a.id().equals(id)
+                            ? new AreaLoad(a.id(), a.outline(), values, use == null ? a.use() : use) : a).toList(),
+                    f.lineLoads().stream().map(l -> l.id().equals(id) ? new LineLoad(l.id(), l.path(), values) : l).toList(),
+                    f.pointLoads().stream().map(q -> q.id().equals(id) ? new PointLoadItem(q.id(), q.at(), values) : q)
+                            .toList());
+        });
+    }
+
     /** The plan in another unit system (values are SI either way; only what the user reads changes). */
     public static Plan withUnits(Plan p, String units) {
         return new Plan(p.name(), units, p.settings(), p.grid(), p.levels(), p.floors(), p.columns());

@@ -119,9 +119,9 @@ public record ColumnLines(List<Line> lines, List<Problem> problems) {
                 double a = fd.columnArea().getOrDefault(c.id(), 0.0);
                 boolean live = false;
                 for (Component comp : Component.values()) {
-                    live |= comp.isLive() && d[comp.ordinal()] != 0;
+                    live |= comp.isLive() && comp != Component.L_CONCENTRATED && d[comp.ordinal()] != 0;
                 }
-                // a roof carrying occupancy live load L (assembly, garden…) is reduced as a floor (ASCE 7-16
+                // a roof carrying occupancy live load L over an area (assembly, garden…) is reduced as a floor (ASCE 7-16
                 // §4.8.3): its area counts in the §4.7 A_T and it counts as a floor supported. Its area is then
                 // not in the roof A_T, so roof live load beside it is reduced by a smaller R1 (conservative).
                 if (levels.get(i).floor().roof() && !live) {

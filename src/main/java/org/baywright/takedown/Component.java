@@ -12,7 +12,10 @@ public enum Component {
     D(LoadCase.D),
     /** Ordinary reducible floor live load (L0 ≤ 100 psf), including a partition allowance carried as live. */
     L_ORDINARY(LoadCase.L),
-    /** Live load over 100 psf: reduced only for members supporting two or more floors, by at most 20 % (§4.7.3). */
+    /**
+     * Heavy live load: over 100 psf, or storage whatever its value; reduced only for members supporting two or
+     * more floors, by at most 20 % (§4.7.3).
+     */
     L_HEAVY(LoadCase.L),
     /** Assembly live load of 100 psf or less: not reduced (§4.7.5). */
     L_ASSEMBLY(LoadCase.L),
@@ -20,8 +23,18 @@ public enum Component {
     L_GARAGE(LoadCase.L),
     /** Live load the user marked not reducible. */
     L_FIXED(LoadCase.L),
+    /**
+     * Live load of a line or point load: not a uniformly distributed live load of Table 4.3-1, so never
+     * reduced (ASCE 7-16 §4.7.1 permits reducing only those); nor does it make a roof count as a floor.
+     */
+    L_CONCENTRATED(LoadCase.L),
     /** Roof live load (§4.8). */
     LR(LoadCase.LR),
+    /**
+     * Roof live load of a line or point load: not a uniformly distributed roof live load, so not reduced
+     * (ASCE 7-16 §4.8.1 permits reducing only those).
+     */
+    LR_CONCENTRATED(LoadCase.LR),
     /** Snow. */
     S(LoadCase.S);
 
@@ -41,7 +54,8 @@ public enum Component {
         return switch (this) {
             case L_ASSEMBLY -> org.baywright.load.ReducibleUse.ASSEMBLY;
             case L_GARAGE -> org.baywright.load.ReducibleUse.GARAGE;
-            case L_FIXED -> org.baywright.load.ReducibleUse.NOT_REDUCIBLE;
+            case L_FIXED, L_CONCENTRATED -> org.baywright.load.ReducibleUse.NOT_REDUCIBLE;
+            case L_HEAVY -> org.baywright.load.ReducibleUse.HEAVY;
             default -> org.baywright.load.ReducibleUse.ORDINARY;
         };
     }

@@ -6,7 +6,6 @@ import java.util.Locale;
 import org.baywright.load.LoadCase;
 import org.baywright.plan.AreaLoad;
 import org.baywright.plan.LineLoad;
-import org.baywright.plan.LiveLoadUse;
 import org.baywright.plan.PointLoadItem;
 import org.baywright.plan.Problem;
 
@@ -68,14 +67,14 @@ public record EquilibriumCheck(List<Equilibrium> cases, List<Problem> problems) 
             for (int k = 0; k + 1 < ll.path().size(); k++) {
                 len += ll.path().get(k).distance(ll.path().get(k + 1));
             }
-            double[] q = ServiceLoads.split(ll.values(), LiveLoadUse.ORDINARY, partitionAsDead, null);
+            double[] q = ServiceLoads.concentrated(ll.values(), partitionAsDead);
             add(applied, q, len);
             // the analysis works on the path snapped to its grid: each point may move by up to half a step
             // in x and in y, and pieces shorter than a step are not placed
             add(slack, q, 2 * Takedown.GRID * ll.path().size());
         }
         for (PointLoadItem p : lv.floor().pointLoads()) {
-            add(applied, ServiceLoads.split(p.values(), LiveLoadUse.ORDINARY, partitionAsDead, null), 1);
+            add(applied, ServiceLoads.concentrated(p.values(), partitionAsDead), 1);
         }
         for (MemberResult m : lv.design().members()) {
             applied[LoadCase.D.ordinal()] += m.steelWeight();

@@ -79,6 +79,7 @@ public final class FloorDesigner {
         d.problems.addAll(in.leftOut());
         d.problems.addAll(areas.problems());
         d.problems.addAll(graph.problems());
+        d.problems.addAll(OccupancyLoads.check(in.floor(), rules.units()));
         Map<String, Member> byId = in.byId();
         Map<String, MemberResult> results = new LinkedHashMap<>();
         for (String id : graph.inLoop()) {

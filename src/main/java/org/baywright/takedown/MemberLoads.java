@@ -16,7 +16,6 @@ import org.baywright.geometry.WidthSegment;
 import org.baywright.plan.AreaLoad;
 import org.baywright.plan.Floor;
 import org.baywright.plan.LineLoad;
-import org.baywright.plan.LiveLoadUse;
 import org.baywright.plan.Member;
 import org.baywright.plan.MemberKind;
 import org.baywright.plan.PointLoadItem;
@@ -119,7 +118,7 @@ record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea
                 if (!sh.memberId().equals(m.id())) {
                     continue;
                 }
-                double[] q = ServiceLoads.split(ll.values(), LiveLoadUse.ORDINARY, partitionAsDead, null);
+                double[] q = ServiceLoads.concentrated(ll.values(), partitionAsDead);
                 for (int c = 0; c < NC; c++) {
                     if (q[c] == 0) {
                         continue;
@@ -142,7 +141,7 @@ record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea
                 if (!sh.memberId().equals(m.id())) {
                     continue;
                 }
-                double[] q = ServiceLoads.split(pl.values(), LiveLoadUse.ORDINARY, partitionAsDead, null);
+                double[] q = ServiceLoads.concentrated(pl.values(), partitionAsDead);
                 for (int c = 0; c < NC; c++) {
                     if (q[c] != 0) {
                         comp.get(c).add(new PointLoad(clamp(sh.s(), span), sh.fraction() * q[c]));

@@ -29,6 +29,7 @@ final class ServiceLoads {
             case NOT_REDUCIBLE -> Component.L_FIXED;
             case ASSEMBLY -> live > Takedown.HEAVY_LIVE ? Component.L_HEAVY : Component.L_ASSEMBLY;
             case ORDINARY -> live > Takedown.HEAVY_LIVE ? Component.L_HEAVY : Component.L_ORDINARY;
+            case STORAGE_LIGHT, STORAGE_HEAVY -> Component.L_HEAVY;
         };
         q[lc.ordinal()] = live;
         q[Component.LR.ordinal()] = roofLive;
@@ -37,6 +38,21 @@ final class ServiceLoads {
             l0[lc.ordinal()] = Math.max(l0[lc.ordinal()], live);
             l0[Component.LR.ordinal()] = Math.max(l0[Component.LR.ordinal()], roofLive);
         }
+        return q;
+    }
+
+    /**
+     * Splits the values of a line or point load into components. ASCE 7-16 §4.7.1 permits reducing only the
+     * uniformly distributed live loads of Table 4.3-1, and §4.8.1 only uniformly distributed roof live loads,
+     * so the live load (with any partition allowance carried as live) of a line or point load is never
+     * reduced ({@link Component#L_CONCENTRATED}), nor its roof live load ({@link Component#LR_CONCENTRATED}).
+     */
+    static double[] concentrated(LoadValues v, boolean partitionAsDead) {
+        double[] q = new double[Component.values().length];
+        q[Component.D.ordinal()] = v.dead() + v.superimposed() + (partitionAsDead ? v.partition() : 0);
+        q[Component.L_CONCENTRATED.ordinal()] = v.live() + (partitionAsDead ? 0 : v.partition());
+        q[Component.LR_CONCENTRATED.ordinal()] = v.roofLive();
+        q[Component.S.ordinal()] = v.snow();
         return q;
     }
 

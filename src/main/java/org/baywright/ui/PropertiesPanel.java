@@ -65,9 +65,44 @@ final class PropertiesPanel {
                 grid.add(note, 0, row, 2, 1);
             } else if (item instanceof PropertiesViewModel.FixedSize f) {
                 fixedSize(f, row);
+            } else if (item instanceof PropertiesViewModel.Field f) {
+                field(f, row);
+            } else if (item instanceof PropertiesViewModel.UseChoice u) {
+                use(u, row);
             }
             row++;
         }
+    }
+
+    /**
+     * An editable value: Enter or leaving the field applies it (one undoable edit); no grey example text, so
+     * an empty field means no value.
+     */
+    private void field(PropertiesViewModel.Field f, int row) {
+        TextField text = new TextField(f.current());
+        text.setId(f.id());
+        text.setPrefColumnCount(9);
+        text.setOnAction(e -> vm.setField(f, text.getText()));
+        text.focusedProperty().addListener((o, was, now) -> {
+            if (was && !now && !text.getText().trim().equals(f.current())) {
+                vm.setField(f, text.getText());
+            }
+        });
+        grid.add(Styles.with(new Label(f.label()), Styles.PROPERTY_LABEL), 0, row);
+        grid.add(text, 1, row);
+    }
+
+    /** The use of a load area: the occupancy in the trade's words with its ASCE 7 clause. */
+    private void use(PropertiesViewModel.UseChoice u, int row) {
+        javafx.scene.control.ComboBox<org.baywright.plan.LiveLoadUse> box = UseList.of(u.current());
+        box.setId("edit-use");
+        box.valueProperty().addListener((o, a, b) -> {
+            if (b != null && b != u.current()) {
+                vm.setUse(u, b);
+            }
+        });
+        grid.add(Styles.with(new Label("Use"), Styles.PROPERTY_LABEL), 0, row);
+        grid.add(box, 1, row);
     }
 
     /** The fixed-size field: a designation makes the member checked, not searched; blank clears it. */

@@ -11,6 +11,9 @@ import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.collections.SetChangeListener;
 import org.baywright.plan.Column;
 import org.baywright.plan.Floor;
+import org.baywright.plan.Level;
+import org.baywright.plan.LiveLoadUse;
+import org.baywright.plan.LoadValues;
 import org.baywright.plan.PlanEdits;
 import org.baywright.takedown.ColumnResult;
 import org.baywright.takedown.ColumnTier;
@@ -32,7 +35,28 @@ public final class PropertiesViewModel {
     static final int REJECTED_SHOWN = 4;
 
     /** One item of the panel. */
-    public sealed interface Item permits Row, Note, FixedSize {
+    public sealed interface Item permits Row, Note, FixedSize, Field, UseChoice {
+    }
+
+    /** What an editable {@link Field} changes. */
+    public enum FieldKind {
+        LEVEL_NAME, STOREY_HEIGHT, DEAD, SUPERIMPOSED, PARTITION, LIVE, ROOF_LIVE, SNOW
+    }
+
+    /**
+     * An editable value: a level's name or storey height, or one load case of a load area, line load or point
+     * load. {@code current} is the value as the field shows it ("" when there is none: a field either holds a
+     * value or is plainly empty); {@code owner} is the level's name or the load's id.
+     */
+    public record Field(String label, FieldKind kind, String floorId, String owner, String current) implements Item {
+        /** The field's node id: {@code edit-} and the label in lower case with dashes ("edit-storey-height"). */
+        public String id() {
+            return "edit-" + label.trim().toLowerCase(Locale.ROOT).replaceAll("[^\\p{L}0-9]+", "-").replaceAll("-$", "");
+        }
+    }
+
+    /** The use (occupancy) of a load area, chosen from {@link LiveLoadUse}. */
+    public record UseChoice(String floorId, String owner, LiveLoadUse current) implements Item {
     }
 
     /** A labelled value. */
@@ -94,6 +118,76 @@ public final class PropertiesViewModel {
                 text.isEmpty() ? id + ": lightest adequate size" : id + ": fixed size " + text.toUpperCase(Locale.ROOT));
     }
 
+    /**
+     * Applies what was typed in an editable field (one undoable edit). A bad value changes nothing and the
+     * message says which field and what it accepts. Returns whether the plan changed.
+     */
+    public boolean setField(Field field, String typed) {
+        UnitSystem us = model.units();
+        String text = typed == null ? "" : typed.trim();
+        if (field.kind() == FieldKind.LEVEL_NAME || field.kind() == FieldKind.STOREY_HEIGHT) {
+            return model.edit(p -> {
+                Level lv = p.levels().stream().filter(l -> l.name().equals(field.owner())).findFirst()
+                        .orElseThrow(() -> new IllegalArgumentException("the plan has no level " + field.owner()));
+                String name = field.kind() == FieldKind.LEVEL_NAME ? text : lv.name();
+                double h = field.kind() == FieldKind.STOREY_HEIGHT
+                        ? ToolValues.length("level " + lv.name() + " storey height", text, us) : lv.storeyHeight();
+                return PlanEdits.setLevel(p, lv.name(), name, h);
+            }, "level " + field.owner() + ": " + field.label().toLowerCase(Locale.ROOT) + " " + text);
+        }
+        return model.edit(p -> {
+            LoadValues v = loadValues(p, field.floorId(), field.owner());
+            org.baywright.units.Unit unit = loadUnit(p, field.floorId(), field.owner(), us);
+            double x = ToolValues.load(field.owner() + " " + field.label().toLowerCase(Locale.ROOT), text, unit);
+            LoadValues next = switch (field.kind()) {
+                case DEAD -> new LoadValues(x, v.superimposed(), v.live(), v.roofLive(), v.snow(), v.partition());
+                case SUPERIMPOSED -> new LoadValues(v.dead(), x, v.live(), v.roofLive(), v.snow(), v.partition());
+                case PARTITION -> new LoadValues(v.dead(), v.superimposed(), v.live(), v.roofLive(), v.snow(), x);
+                case LIVE -> new LoadValues(v.dead(), v.superimposed(), x, v.roofLive(), v.snow(), v.partition());
+                case ROOF_LIVE -> new LoadValues(v.dead(), v.superimposed(), v.live(), x, v.snow(), v.partition());
+                case SNOW -> new LoadValues(v.dead(), v.superimposed(), v.live(), v.roofLive(), x, v.partition());
+                default -> v;
+            };
+            return PlanEdits.setLoadValues(p, field.floorId(), field.owner(), next, null);
+        }, field.owner() + ": " + field.label().toLowerCase(Locale.ROOT) + (text.isEmpty() ? " none" : " " + text));
+    }
+
+    /** Sets a load area's use (one undoable edit). */
+    public boolean setUse(UseChoice choice, LiveLoadUse use) {
+        if (use == null) {
+            return false;
+        }
+        return model.edit(p -> PlanEdits.setLoadValues(p, choice.floorId(), choice.owner(),
+                loadValues(p, choice.floorId(), choice.owner()), use), choice.owner() + ": use " + use.words().toLowerCase(Locale.ROOT));
+    }
+
+    private static LoadValues loadValues(org.baywright.plan.Plan p, String floorId, String id) {
+        Floor f = p.floor(floorId).orElseThrow(() -> new IllegalArgumentException("the plan has no floor " + floorId));
+        return f.areaLoads().stream().filter(a -> a.id().equals(id)).map(a -> a.values()).findFirst()
+                .or(() -> f.lineLoads().stream().filter(l -> l.id().equals(id)).map(l -> l.values()).findFirst())
+                .or(() -> f.pointLoads().stream().filter(q -> q.id().equals(id)).map(q -> q.values()).findFirst())
+                .orElseThrow(() -> new IllegalArgumentException("floor " + floorId + " has no load " + id));
+    }
+
+    /** psf or kN/m² for a load area, klf or kN/m for a line load, kip or kN for a point load. */
+    private static org.baywright.units.Unit loadUnit(org.baywright.plan.Plan p, String floorId, String id, UnitSystem us) {
+        Floor f = p.floor(floorId).orElseThrow();
+        if (f.lineLoads().stream().anyMatch(l -> l.id().equals(id))) {
+            return us.lineLoad();
+        }
+        return f.pointLoads().stream().anyMatch(q -> q.id().equals(id)) ? us.force() : us.areaLoad();
+    }
+
+    /** A value as an editable field shows it: the number and its unit with no space ("15psf"), or "" for none. */
+    static String fieldText(double si, org.baywright.units.Unit unit) {
+        if (si == 0) {
+            return "";
+        }
+        java.math.BigDecimal d = new java.math.BigDecimal(unit.fromSi(si)).round(new java.math.MathContext(6))
+                .stripTrailingZeros();
+        return d.toPlainString() + unit.symbol();
+    }
+
     /** Builds the items again from the model. */
     void refresh() {
         items.set(Collections.unmodifiableList(build()));
@@ -116,6 +210,9 @@ public final class PropertiesViewModel {
             } else {
                 model.currentFloor().ifPresent(f -> floorObject(f, id, us, out));
             }
+        }
+        if (out.isEmpty() && model.plan() != null && id == null) {
+            level(us, out);
         }
         if (out.isEmpty()) {
             out.add(new Note("prop-hint", model.plan() == null ? "No plan open." : model.run() == null ? "Running…"
@@ -183,13 +280,39 @@ public final class PropertiesViewModel {
         }
     }
 
+    /** The level shown, when nothing is selected: its name and storey height are editable. */
+    private void level(UnitSystem us, List<Item> out) {
+        String name = model.levelProperty().get();
+        Optional<Level> lv = model.plan().levels().stream().filter(l -> l.name().equals(name)).findFirst();
+        if (lv.isEmpty()) {
+            return;
+        }
+        out.add(new Field("Level", FieldKind.LEVEL_NAME, lv.get().floor(), name, name));
+        out.add(new Field("Storey height", FieldKind.STOREY_HEIGHT, lv.get().floor(), name,
+                fieldText(lv.get().storeyHeight(), us.length())));
+        out.add(new Row("Elevation", UnitSystem.format(lv.get().elevation(), us.length(), 2) + " (top of steel)"));
+        out.add(new Row("Floor layout", lv.get().floor()));
+        out.add(new Note("prop-hint", "Click a member, column, load or opening on the plan to see it here."));
+    }
+
+    /** The editable values of a load: every case, in the load's unit; blank means none. */
+    private static void loadFields(Floor f, String id, LoadValues v, org.baywright.units.Unit unit, List<Item> out) {
+        out.add(new Field("Dead", FieldKind.DEAD, f.id(), id, fieldText(v.dead(), unit)));
+        out.add(new Field("Superimposed dead", FieldKind.SUPERIMPOSED, f.id(), id, fieldText(v.superimposed(), unit)));
+        out.add(new Field("Partitions", FieldKind.PARTITION, f.id(), id, fieldText(v.partition(), unit)));
+        out.add(new Field("Live", FieldKind.LIVE, f.id(), id, fieldText(v.live(), unit)));
+        out.add(new Field("Roof live", FieldKind.ROOF_LIVE, f.id(), id, fieldText(v.roofLive(), unit)));
+        out.add(new Field("Snow", FieldKind.SNOW, f.id(), id, fieldText(v.snow(), unit)));
+    }
+
     /** A load area, opening, line load or point load of the floor shown. */
     private static void floorObject(Floor f, String id, UnitSystem us, List<Item> out) {
         for (var a : f.areaLoads()) {
             if (a.id().equals(id)) {
                 out.add(new Row("Load area", a.id()));
                 out.add(new Row("Loads", Readouts.areaLoad(a.values(), us)));
-                out.add(new Row("Use", a.use().name().toLowerCase(Locale.ROOT).replace('_', ' ')));
+                loadFields(f, a.id(), a.values(), us.areaLoad(), out);
+                out.add(new UseChoice(f.id(), a.id(), a.use()));
                 out.add(new Row("Area", UnitSystem.format(Math.abs(a.outline().signedArea()), us.floorArea(), 0)));
                 return;
             }
@@ -205,6 +328,7 @@ public final class PropertiesViewModel {
             if (l.id().equals(id)) {
                 out.add(new Row("Line load", l.id()));
                 out.add(new Row("Loads", Readouts.lineLoad(l.values(), us)));
+                loadFields(f, l.id(), l.values(), us.lineLoad(), out);
                 return;
             }
         }
@@ -212,6 +336,7 @@ public final class PropertiesViewModel {
             if (q.id().equals(id)) {
                 out.add(new Row("Point load", q.id()));
                 out.add(new Row("Loads", Readouts.force(q.values(), us)));
+                loadFields(f, q.id(), q.values(), us.force(), out);
                 return;
             }
         }

@@ -65,7 +65,7 @@ final class ToolOptionsBar {
                         apply);
             }
             case INFILL -> {
-                TextField f = field("infill-spacing", s.infill, 90, "10ft or 3");
+                TextField f = field("infill-spacing", s.infill, 90);
                 ToggleButton dir = new ToggleButton();
                 dir.setId("infill-direction");
                 Runnable label = () -> dir.setText(s.infillDirection.get() == GridLine.Axis.Y
@@ -75,31 +75,43 @@ final class ToolOptionsBar {
                     s.infillDirection.set(s.infillDirection.get() == GridLine.Axis.Y ? GridLine.Axis.X : GridLine.Axis.Y);
                     label.run();
                 });
-                children.addAll(new Label("Largest spacing, or number of beams"), f, dir, hint("then click a bay"));
+                children.addAll(new Label("Largest spacing (a length) or number of beams"), f, dir, hint("then click a bay"));
             }
             case LOAD_AREA -> {
-                ComboBox<LiveLoadUse> use = new ComboBox<>(FXCollections.observableArrayList(LiveLoadUse.values()));
+                ComboBox<LiveLoadUse> use = UseList.of(s.areaUse.get());
+                use.setMaxWidth(260);
                 use.valueProperty().bindBidirectional(s.areaUse);
                 use.setId("area-use");
-                children.addAll(new Label("Superimposed dead"), field("area-sd", s.areaSd, 80, "15psf"),
-                        new Label("Live (roof live on a roof)"), field("area-live", s.areaLive, 80, "100psf"),
-                        new Label("Use"), use, hint("drag a rectangle, or click corners"));
+                children.addAll(new Label("Superimposed dead"), field("area-sd", s.areaSd, 80),
+                        new Label("Live (roof live on a roof)"), field("area-live", s.areaLive, 80),
+                        new Label("Use"), use, hint("drag a rectangle, or click corners; an empty field is no load"));
             }
-            case LINE_LOAD -> children.addAll(new Label("Dead per length"), field("line-dead", s.lineDead, 80, "0.5klf"),
-                    new Label("Live per length"), field("line-live", s.lineLive, 80, ""),
-                    hint("click points; double-click or Enter to finish"));
-            case POINT_LOAD -> children.addAll(new Label("Dead"), field("point-dead", s.pointDead, 80, "5kip"),
-                    new Label("Live"), field("point-live", s.pointLive, 80, ""), hint("click where it acts"));
+            case LINE_LOAD -> children.addAll(new Label("Dead per length"), field("line-dead", s.lineDead, 80),
+                    new Label("Live per length"), field("line-live", s.lineLive, 80),
+                    hint("click points; double-click or Enter to finish; an empty field is no load"));
+            case POINT_LOAD -> children.addAll(new Label("Dead"), field("point-dead", s.pointDead, 80),
+                    new Label("Live"), field("point-live", s.pointLive, 80),
+                    hint("click where it acts; an empty field is no load"));
             default -> children.add(hint(t.hint()));
         }
     }
 
-    private static TextField field(String id, StringProperty value, double width, String prompt) {
+    /** A field whose grey text is plainly an example of the syntax ("e.g. 3@30ft"), never a value. */
+    private static TextField field(String id, StringProperty value, double width, String example) {
+        if (!example.startsWith("e.g. ")) {
+            throw new IllegalArgumentException("grey text must read as an example: " + example);
+        }
+        TextField f = field(id, value, width);
+        f.setPromptText(example);
+        return f;
+    }
+
+    /** A value field with no grey example text: it holds a value or is plainly empty. */
+    private static TextField field(String id, StringProperty value, double width) {
         TextField f = new TextField();
         f.setId(id);
         f.textProperty().bindBidirectional(value);
         f.setPrefWidth(width);
-        f.setPromptText(prompt);
         return f;
     }
 

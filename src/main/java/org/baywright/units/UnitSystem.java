@@ -156,6 +156,11 @@ public enum UnitSystem {
                 : new java.math.BigDecimal(v).round(new java.math.MathContext(2)).stripTrailingZeros().toPlainString();
     }
 
+    /** An area load as a message prints it: whole psf in US units, kN/m² to 0.01 in SI ({@code 125 psf}, {@code 5.99 kN/m²}). */
+    public String areaLoadText(double pascals) {
+        return grouped(areaLoad().fromSi(pascals), this == US ? 0 : 2) + " " + areaLoad().symbol();
+    }
+
     /** A force as a message prints it: kip or kN to 0.1, grouped ({@code 3,709.7 kip}). */
     public String forceText(double newtons) {
         return grouped(force.fromSi(newtons), 1) + " " + force.symbol();

@@ -72,12 +72,71 @@ class PropertiesViewModelTest {
     }
 
     @Test
-    void nothingSelectedShowsAHint() {
+    void nothingSelectedShowsTheLevelAndAHint() {
         List<PropertiesViewModel.Item> items = vm.items();
-        assertEquals(1, items.size());
-        PropertiesViewModel.Note hint = assertInstanceOf(PropertiesViewModel.Note.class, items.get(0));
+        PropertiesViewModel.Field name = assertInstanceOf(PropertiesViewModel.Field.class, items.get(0));
+        assertEquals(model.levelProperty().get(), name.current());
+        PropertiesViewModel.Field height = assertInstanceOf(PropertiesViewModel.Field.class, items.get(1));
+        assertEquals(PropertiesViewModel.FieldKind.STOREY_HEIGHT, height.kind());
+        assertTrue(height.current().endsWith("ft"), height.current());
+        PropertiesViewModel.Note hint = assertInstanceOf(PropertiesViewModel.Note.class, items.get(items.size() - 1));
         assertEquals("prop-hint", hint.id());
         assertTrue(hint.text().startsWith("Click a member"), hint.text());
+    }
+
+    private PropertiesViewModel.Field field(String label) {
+        return vm.items().stream().filter(i -> i instanceof PropertiesViewModel.Field f && f.label().equals(label))
+                .map(i -> (PropertiesViewModel.Field) i).findFirst()
+                .orElseThrow(() -> new AssertionError("no field " + label + " in " + vm.items()));
+    }
+
+    @Test
+    void aLevelsNameAndStoreyHeightAreUndoableEdits() {
+        String name = model.levelProperty().get();
+        var before = model.plan();
+        int at = before.levels().stream().map(l -> l.name()).toList().indexOf(name);
+        double h0 = before.levels().get(at).storeyHeight();
+        assertTrue(vm.setField(field("Storey height"), "16ft"));
+        var after = model.plan();
+        assertEquals(Units.FT_.toSi(16), after.levels().get(at).storeyHeight(), 1e-9);
+        for (int i = at; i < after.levels().size(); i++) {
+            assertEquals(before.levels().get(i).elevation() + Units.FT_.toSi(16) - h0, after.levels().get(i).elevation(), 1e-9,
+                    "levels at and above move up by the change of height");
+        }
+        assertFalse(vm.setField(field("Storey height"), "-3ft"), "a negative height is refused");
+        assertTrue(model.messageProperty().get().contains("storey height"), model.messageProperty().get());
+        assertTrue(model.undo());
+        assertEquals(before, model.plan());
+        assertTrue(vm.setField(field("Level"), "Mezzanine"));
+        assertTrue(model.plan().levels().stream().anyMatch(l -> l.name().equals("Mezzanine")));
+        String other = before.levels().get(at == 0 ? 1 : 0).name();
+        model.levelProperty().set("Mezzanine");
+        assertFalse(vm.setField(field("Level"), other), "two levels may not share a name");
+    }
+
+    @Test
+    void aLoadAreasValuesAndUseAreUndoableEditsTheRunFollows() {
+        var area = model.currentFloor().orElseThrow().areaLoads().get(0);
+        model.select(area.id());
+        PropertiesViewModel.Field live = field("Live");
+        assertEquals(area.values().live() == 0 ? "" : Math.round(Units.PSF.fromSi(area.values().live())) + "psf",
+                live.current());
+        var before = model.plan();
+        assertTrue(vm.setField(live, "125"), "a bare number is in the plan's unit");
+        var now = model.currentFloor().orElseThrow().areaLoads().get(0);
+        assertEquals(Units.PSF.toSi(125), now.values().live(), 1e-6);
+        assertEquals(area.values().superimposed(), now.values().superimposed(), 1e-9, "other cases kept");
+        assertEquals("125psf", field("Live").current());
+        PropertiesViewModel.UseChoice use = vm.items().stream().filter(i -> i instanceof PropertiesViewModel.UseChoice)
+                .map(i -> (PropertiesViewModel.UseChoice) i).findFirst().orElseThrow();
+        assertTrue(vm.setUse(use, org.baywright.plan.LiveLoadUse.STORAGE_LIGHT));
+        assertEquals(org.baywright.plan.LiveLoadUse.STORAGE_LIGHT, model.currentFloor().orElseThrow().areaLoads().get(0).use());
+        assertFalse(vm.setField(field("Snow"), "lots"), "not a load");
+        assertTrue(model.messageProperty().get().contains(area.id()), model.messageProperty().get());
+        assertTrue(vm.setField(field("Live"), ""), "an empty field is no load");
+        assertEquals(0, model.currentFloor().orElseThrow().areaLoads().get(0).values().live());
+        assertTrue(model.undo() && model.undo() && model.undo());
+        assertEquals(before, model.plan());
     }
 
     @Test

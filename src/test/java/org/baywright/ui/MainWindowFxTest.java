@@ -165,4 +165,25 @@ class MainWindowFxTest {
         assertTrue(model.dirtyProperty().get(), "nothing was lost");
         assertNotEquals(original, model.plan(), "the edited plan is still open");
     }
+
+    /** Typing a load's live load in Properties and pressing Enter is one undoable edit; Ctrl+Z takes it back. */
+    @Test
+    void aLoadsValueIsTypedInPropertiesAndUndone(FxRobot robot) {
+        var area = model.currentFloor().orElseThrow().areaLoads().get(0);
+        robot.interact(() -> model.select(area.id()));
+        javafx.scene.control.TextField live = robot.lookup("#edit-live").queryAs(javafx.scene.control.TextField.class);
+        assertTrue(live.getPromptText() == null || live.getPromptText().isEmpty(), "no grey example value");
+        robot.clickOn(live);
+        robot.interact(() -> live.selectAll());
+        robot.write("125psf");
+        robot.type(javafx.scene.input.KeyCode.ENTER);
+        var now = model.currentFloor().orElseThrow().areaLoads().get(0);
+        assertEquals(org.baywright.units.Units.PSF.toSi(125), now.values().live(), 1e-6);
+        javafx.scene.control.ComboBox<org.baywright.plan.LiveLoadUse> use = robot.lookup("#edit-use").query();
+        assertEquals(area.use(), use.getValue());
+        assertEquals(area.use().label(), use.getConverter().toString(use.getValue()), "the use in the trade's words");
+        robot.press(javafx.scene.input.KeyCode.CONTROL).press(javafx.scene.input.KeyCode.Z)
+                .release(javafx.scene.input.KeyCode.Z).release(javafx.scene.input.KeyCode.CONTROL);
+        assertEquals(area.values().live(), model.currentFloor().orElseThrow().areaLoads().get(0).values().live(), 1e-9);
+    }
 }

@@ -47,9 +47,9 @@ public record EquilibriumCheck(List<Equilibrium> cases, List<Problem> problems) 
             out.add(e);
             if (!e.holds()) {
                 problems.add(Problem.error("equilibrium", "load case " + lc.symbol(), "", String.format(Locale.ROOT,
-                        "load case %s: applied %s but the foundations carry %s (difference %.1f %%); see the"
+                        "applied %s but the foundations carry %s (difference %.1f %%); see the"
                                 + " other problems for load that does not reach a column",
-                        lc.symbol(), units.forceText(e.applied()), units.forceText(e.reactions()), 100 * (e.reactions()
+                        units.forceText(e.applied()), units.forceText(e.reactions()), 100 * (e.reactions()
                                 - e.applied()) / Math.max(Math.abs(e.applied()), Double.MIN_NORMAL))));
             }
         }

@@ -29,13 +29,14 @@ class ProblemUnitsTest {
     }
 
     private static String messages(List<Problem> problems) {
-        return String.join("\n", problems.stream().map(Problem::message).toList());
+        return String.join("\n", problems.stream().map(Problem::toString).toList());
     }
 
     @Test
     void aUsPlanSpeaksFeetAndKips() {
         String all = messages(PlanRun.run(demoWithoutColumns(), CATALOG).problems());
         assertAll(
+                () -> assertFalse(all.contains("load case D: load case D"), "the location is not repeated in the message"),
                 () -> assertTrue(all.contains("member G-1-AB has no support at (30'-0\", 0'-0\")"), all),
                 () -> assertTrue(all.matches("(?s).*load case D: applied [\\d,]+\\.\\d kip but the foundations carry 0\\.0 kip.*"),
                         all),

@@ -5,6 +5,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
 import org.baywright.analysis.DistributedLoad;
 import org.baywright.calc.Arg;
 import org.baywright.calc.Calc;
@@ -156,31 +157,65 @@ public final class CompositeBeamDesigner {
 
     // ---- per section -------------------------------------------------------------------------
 
-    /** What does not depend on the stud count: construction stage, camber, shear, the stud range. */
+    /** Shear strengths of the steel sections (G2.1), computed once per section and steel. */
+    private static final Map<Steel, Map<Section, IShapeShear.Strength>> SHEAR = new ConcurrentHashMap<>();
+
+    private static IShapeShear.Strength shearStrength(Section s, Steel steel, Calc calc) {
+        if (calc != null) {
+            return IShapeShear.strength(s, steel.fy(), steel.e(), calc);
+        }
+        Map<Section, IShapeShear.Strength> m = SHEAR.computeIfAbsent(steel, k -> new ConcurrentHashMap<>());
+        IShapeShear.Strength v = m.get(s);
+        if (v == null) {
+            v = IShapeShear.strength(s, steel.fy(), steel.e(), null);
+            m.put(s, v);
+        }
+        return v;
+    }
+
+    /**
+     * What does not depend on the stud count: the pre-composite deflection and camber, the stud range,
+     * and (by {@link #stages}, which the search runs only for a section that passes at its most studs)
+     * the construction stage and the shear check.
+     */
     private final class SectionState {
         final Section s;
         final double w;
-        final double es;
-        final List<Check> constructionChecks;
-        final double constructionRatio;
         final double pre;
         final double camber;
-        final Check shear;
         final double full;
         final int minPerHalf;
         final int hiPerHalf;
         final boolean limitedByRibs;
+        List<Check> constructionChecks = List.of();
+        double constructionRatio;
+        Check shear;
 
         SectionState(Section s, Calc calc) {
             this.s = s;
             this.w = criteria.selfWeight() ? s.weight() : 0;
-            this.es = criteria.steel().e();
-            double is = s.props().ix();
             if (criteria.shored()) {
-                constructionChecks = List.of();
-                constructionRatio = 0;
                 pre = 0;
                 camber = 0;
+            } else {
+                if (calc != null) {
+                    calc.heading("Deflection of the bare steel under the wet slab and camber");
+                }
+                pre = deflection("Δ_pre", wSlab + w, s.props().ix(), "wet slab and steel on the bare steel", calc);
+                camber = criteria.camber().camber(pre, span, calc);
+            }
+            // the stud range
+            this.full = Math.min(0.85 * concrete.fc() * concrete.ac(), s.props().a() * criteria.steel().fy());
+            int forDegree = (int) Math.ceil(criteria.minDegree() * full / qn - 1e-9);
+            this.minPerHalf = Math.max(Math.max(forDegree, spacingMinPerHalf), 1);
+            int forFull = (int) Math.ceil(full / qn - 1e-9);
+            this.hiPerHalf = Math.min(forFull, maxPerHalf);
+            this.limitedByRibs = forFull > maxPerHalf;
+        }
+
+        /** The construction stage (bare steel, F2/F3 and G2.1 by {@link BeamDesigner}) and the composite-stage shear. */
+        void stages(Calc calc) {
+            if (criteria.shored()) {
                 Calc.branch(calc, "shored: the composite section carries every load; no construction stage, no camber", PRACTICE);
             } else {
                 if (calc != null) {
@@ -190,21 +225,18 @@ public final class CompositeBeamDesigner {
                 List<Check> renamed = new ArrayList<>(cc.size());
                 double r = 0;
                 for (Check c : cc) {
-                    Check k = new Check("construction " + c.name(), c.demand(), c.capacity(), c.ratio(), c.loadCombination(),
-                            c.clause(), c.quantity(), c.position(), c.segment(), c.lb(), c.cb(), c.note());
-                    renamed.add(k);
+                    renamed.add(new Check("construction " + c.name(), c.demand(), c.capacity(), c.ratio(), c.loadCombination(),
+                            c.clause(), c.quantity(), c.position(), c.segment(), c.lb(), c.cb(), c.note()));
                     r = Math.max(r, c.ratio());
                 }
                 constructionChecks = renamed;
                 constructionRatio = r;
-                pre = deflection("Δ_pre", wSlab + w, is, "wet slab and steel on the bare steel", calc);
-                camber = criteria.camber().camber(pre, span, calc);
             }
             // shear on the steel section alone (I4.2 → G2.1)
             if (calc != null) {
                 calc.heading("Shear: the steel section alone");
             }
-            IShapeShear.Strength vs = IShapeShear.strength(s, criteria.steel().fy(), es, calc);
+            IShapeShear.Strength vs = shearStrength(s, criteria.steel(), calc);
             double[] byCase = byCase((wSlab + wSdl + w) * span / 2, wLive * span / 2);
             Combinations.Governing g = Combinations.governing(byCase, combos);
             double avail = criteria.method().available(vs.vn(), vs.phi(), vs.omega());
@@ -217,13 +249,6 @@ public final class CompositeBeamDesigner {
             }
             this.shear = new Check("shear", g.value(), avail, g.value() / avail, g.combination(), CLAUSE_I4_2, Quantity.FORCE,
                     0, null, Double.NaN, Double.NaN, "steel section alone");
-            // the stud range
-            this.full = Math.min(0.85 * concrete.fc() * concrete.ac(), s.props().a() * criteria.steel().fy());
-            int forDegree = (int) Math.ceil(criteria.minDegree() * full / qn - 1e-9);
-            this.minPerHalf = Math.max(Math.max(forDegree, spacingMinPerHalf), 1);
-            int forFull = (int) Math.ceil(full / qn - 1e-9);
-            this.hiPerHalf = Math.min(forFull, maxPerHalf);
-            this.limitedByRibs = forFull > maxPerHalf;
         }
     }
 
@@ -253,8 +278,10 @@ public final class CompositeBeamDesigner {
     private Trial trial(SectionState st, int perHalf, Calc calc) {
         Section s = st.s;
         double fy = criteria.steel().fy();
-        double sumQn = Calc.eq(calc, "ΣQn", "n_h·Qn", CLAUSE_I8_2C, perHalf * qn, Quantity.FORCE,
-                Arg.num("n_h", perHalf), Arg.of("Qn", qn, Quantity.FORCE));
+        double sumQn = perHalf * qn;
+        if (calc != null) {
+            calc.eq("ΣQn", "n_h·Qn", CLAUSE_I8_2C, sumQn, Quantity.FORCE, Arg.num("n_h", perHalf), Arg.of("Qn", qn, Quantity.FORCE));
+        }
         CompositeFlexureI3.Result r = CompositeFlexureI3.strength(s, fy, criteria.steel().e(), concrete, sumQn, calc);
         double[] byCase = byCase((wSlab + wSdl + st.w) * span * span / 8, wLive * span * span / 8);
         Combinations.Governing g = Combinations.governing(byCase, combos);
@@ -323,6 +350,7 @@ public final class CompositeBeamDesigner {
             recordSlab(calc);
         }
         SectionState st = new SectionState(s, calc);
+        st.stages(calc);
         if (calc != null) {
             calc.heading("Composite flexure: " + s.designation() + " with " + studsPerHalf + " studs per half span");
         }
@@ -363,16 +391,8 @@ public final class CompositeBeamDesigner {
                 break;
             }
             SectionState st = new SectionState(s, null);
-            Check fail = null;
-            if (st.constructionRatio > 1 + Check.RATIO_TOLERANCE) {
-                fail = Check.governing(st.constructionChecks);
-            } else if (!st.shear.passes()) {
-                fail = st.shear;
-            } else if (st.minPerHalf > maxPerHalf) {
-                fail = studLimit(st);
-            }
-            if (fail != null) {
-                rejected.add(new Rejection(s, fail));
+            if (st.minPerHalf > maxPerHalf) {
+                rejected.add(new Rejection(s, studLimit(st)));
                 continue;
             }
             int hi = Math.max(st.hiPerHalf, st.minPerHalf);
@@ -390,6 +410,14 @@ public final class CompositeBeamDesigner {
                     closest = st;
                     closestN = hi;
                 }
+                continue;
+            }
+            // the stud count does not change these: checked only for a section the composite checks let through
+            st.stages(null);
+            Check fail = st.constructionRatio > 1 + Check.RATIO_TOLERANCE ? Check.governing(st.constructionChecks)
+                    : !st.shear.passes() ? st.shear : null;
+            if (fail != null) {
+                rejected.add(new Rejection(s, fail));
                 continue;
             }
             // the least stud count that passes: flexural strength and I_LB rise with ΣQn
@@ -418,6 +446,7 @@ public final class CompositeBeamDesigner {
                 return new CompositeDesign(MemberStatus.OVERSTRESSED, null, 0, 0, qn, 0, beff, bLeft, bRight, slabWeight, null,
                         Double.NaN, Double.NaN, Double.NaN, 0, Double.NaN, List.of(), rejected, passing, Double.NaN, evaluations);
             }
+            closest.stages(null);
             Trial t = trial(closest, closestN, null);
             return result(MemberStatus.OVERSTRESSED, closest, closestN, t,
                     CompositeStiffness.transformed(closest.s, concrete, criteria.steel().e(), ec, null), rejected, passing,

@@ -82,14 +82,22 @@ public final class CompositeFlexureI3 {
 
     /** AISC 360-16 Eq. I3-1a: concrete crushing, V′c = 0.85·f′c·A_c [N]. */
     public static double concreteCrushing(double fc, double ac, Calc calc) {
-        return Calc.eq(calc, "Vc", "0.85·fc·Ac", EQ_I3_1A, 0.85 * fc * ac, Quantity.FORCE,
-                Arg.of("fc", fc, Quantity.STRESS), Arg.of("Ac", ac, Quantity.AREA));
+        double v = 0.85 * fc * ac;
+        if (calc != null) {
+            calc.eq("Vc", "0.85·fc·Ac", EQ_I3_1A, v, Quantity.FORCE, Arg.of("fc", fc, Quantity.STRESS),
+                    Arg.of("Ac", ac, Quantity.AREA));
+        }
+        return v;
     }
 
     /** AISC 360-16 Eq. I3-1b: tensile yielding of the steel section, V′s = A_s·F_y [N]. */
     public static double steelYielding(double as, double fy, Calc calc) {
-        return Calc.eq(calc, "Vs", "As·Fy", EQ_I3_1B, as * fy, Quantity.FORCE,
-                Arg.of("As", as, Quantity.AREA), Arg.of("Fy", fy, Quantity.STRESS));
+        double v = as * fy;
+        if (calc != null) {
+            calc.eq("Vs", "As·Fy", EQ_I3_1B, v, Quantity.FORCE, Arg.of("As", as, Quantity.AREA),
+                    Arg.of("Fy", fy, Quantity.STRESS));
+        }
+        return v;
     }
 
     /**
@@ -117,17 +125,26 @@ public final class CompositeFlexureI3 {
                     + (plastic ? " → plastic stress distribution" : " → elastic method of I3.2a(b) (not implemented)"),
                     CLAUSE_I3_2A_A);
         }
-        double ac = Calc.eq(calc, "Ac", "b·(tc + ρ·hr)", CLAUSE_I3_2C, slab.ac(), Quantity.AREA,
-                Arg.of("b", slab.b(), Quantity.SECTION_LENGTH), Arg.of("tc", slab.tc(), Quantity.SECTION_LENGTH),
-                Arg.num("ρ", slab.ribFraction()), Arg.of("hr", slab.hr(), Quantity.SECTION_LENGTH));
+        double ac = slab.ac();
+        if (calc != null) {
+            calc.eq("Ac", "b·(tc + ρ·hr)", CLAUSE_I3_2C, ac, Quantity.AREA,
+                    Arg.of("b", slab.b(), Quantity.SECTION_LENGTH), Arg.of("tc", slab.tc(), Quantity.SECTION_LENGTH),
+                    Arg.num("ρ", slab.ribFraction()), Arg.of("hr", slab.hr(), Quantity.SECTION_LENGTH));
+        }
         double fc = slab.fc();
         double vc = concreteCrushing(fc, ac, calc);
         double py = steelYielding(as, fy, calc);
-        double c = Calc.eq(calc, "C", "min(Vc, Vs, ΣQn)", CLAUSE_I3_2D1, Math.min(vc, Math.min(py, sumQn)), Quantity.FORCE,
-                Arg.of("Vc", vc, Quantity.FORCE), Arg.of("Vs", py, Quantity.FORCE), Arg.of("ΣQn", sumQn, Quantity.FORCE));
+        double c = Math.min(vc, Math.min(py, sumQn));
+        if (calc != null) {
+            calc.eq("C", "min(Vc, Vs, ΣQn)", CLAUSE_I3_2D1, c, Quantity.FORCE, Arg.of("Vc", vc, Quantity.FORCE),
+                    Arg.of("Vs", py, Quantity.FORCE), Arg.of("ΣQn", sumQn, Quantity.FORCE));
+        }
         double full = Math.min(vc, py);
-        double degree = Calc.eq(calc, "η", "C/min(Vc, Vs)", CLAUSE_I3_2D1, c / full, Quantity.NUMBER,
-                Arg.of("C", c, Quantity.FORCE), Arg.of("Vc", vc, Quantity.FORCE), Arg.of("Vs", py, Quantity.FORCE));
+        double degree = c / full;
+        if (calc != null) {
+            calc.eq("η", "C/min(Vc, Vs)", CLAUSE_I3_2D1, degree, Quantity.NUMBER, Arg.of("C", c, Quantity.FORCE),
+                    Arg.of("Vc", vc, Quantity.FORCE), Arg.of("Vs", py, Quantity.FORCE));
+        }
 
         // the concrete stress block
         double b = slab.b();
@@ -137,23 +154,34 @@ public final class CompositeFlexureI3 {
         double a;
         double d1;
         if (c <= top || slab.ribFraction() == 0) {
-            a = Calc.eq(calc, "a", "C/(0.85·fc·b)", CLAUSE_I3_2A, c / (0.85 * fc * b), Quantity.SECTION_LENGTH,
-                    Arg.of("C", c, Quantity.FORCE), Arg.of("fc", fc, Quantity.STRESS), Arg.of("b", b, Quantity.SECTION_LENGTH));
-            d1 = Calc.eq(calc, "d1", "Ycon − a/2", CLAUSE_I3_2A, ycon - a / 2, Quantity.SECTION_LENGTH,
-                    Arg.of("Ycon", ycon, Quantity.SECTION_LENGTH), Arg.of("a", a, Quantity.SECTION_LENGTH));
+            a = c / (0.85 * fc * b);
+            if (calc != null) {
+                calc.eq("a", "C/(0.85·fc·b)", CLAUSE_I3_2A, a, Quantity.SECTION_LENGTH, Arg.of("C", c, Quantity.FORCE),
+                        Arg.of("fc", fc, Quantity.STRESS), Arg.of("b", b, Quantity.SECTION_LENGTH));
+            }
+            d1 = ycon - a / 2;
+            if (calc != null) {
+                calc.eq("d1", "Ycon − a/2", CLAUSE_I3_2A, d1, Quantity.SECTION_LENGTH,
+                        Arg.of("Ycon", ycon, Quantity.SECTION_LENGTH), Arg.of("a", a, Quantity.SECTION_LENGTH));
+            }
         } else {
             // ribs parallel: the block reaches into the ribs, where only ρ·b is concrete (I3.2c(3))
             double rho = slab.ribFraction();
             Calc.branch(calc, "C > 0.85·f′c·b·tc → the stress block reaches into the ribs (deck parallel)", CLAUSE_I3_2C);
-            a = Calc.eq(calc, "a", "tc + (C − 0.85·fc·b·tc)/(0.85·fc·b·ρ)", CLAUSE_I3_2A,
-                    tc + (c - 0.85 * fc * b * tc) / (0.85 * fc * b * rho), Quantity.SECTION_LENGTH,
-                    Arg.of("C", c, Quantity.FORCE), Arg.of("fc", fc, Quantity.STRESS), Arg.of("b", b, Quantity.SECTION_LENGTH),
-                    Arg.of("tc", tc, Quantity.SECTION_LENGTH), Arg.num("ρ", rho));
-            d1 = Calc.eq(calc, "d1", "Ycon − (0.85·fc·b·tc·tc/2 + (C − 0.85·fc·b·tc)·(tc + (a − tc)/2))/C", CLAUSE_I3_2A,
-                    ycon - (0.85 * fc * b * tc * tc / 2 + (c - 0.85 * fc * b * tc) * (tc + (a - tc) / 2)) / c,
-                    Quantity.SECTION_LENGTH, Arg.of("Ycon", ycon, Quantity.SECTION_LENGTH), Arg.of("fc", fc, Quantity.STRESS),
-                    Arg.of("b", b, Quantity.SECTION_LENGTH), Arg.of("tc", tc, Quantity.SECTION_LENGTH),
-                    Arg.of("C", c, Quantity.FORCE), Arg.of("a", a, Quantity.SECTION_LENGTH));
+            a = tc + (c - 0.85 * fc * b * tc) / (0.85 * fc * b * rho);
+            if (calc != null) {
+                calc.eq("a", "tc + (C − 0.85·fc·b·tc)/(0.85·fc·b·ρ)", CLAUSE_I3_2A, a, Quantity.SECTION_LENGTH,
+                        Arg.of("C", c, Quantity.FORCE), Arg.of("fc", fc, Quantity.STRESS),
+                        Arg.of("b", b, Quantity.SECTION_LENGTH), Arg.of("tc", tc, Quantity.SECTION_LENGTH),
+                        Arg.num("ρ", rho));
+            }
+            d1 = ycon - (0.85 * fc * b * tc * tc / 2 + (c - 0.85 * fc * b * tc) * (tc + (a - tc) / 2)) / c;
+            if (calc != null) {
+                calc.eq("d1", "Ycon − (0.85·fc·b·tc·tc/2 + (C − 0.85·fc·b·tc)·(tc + (a − tc)/2))/C", CLAUSE_I3_2A, d1, Quantity.SECTION_LENGTH,
+                        Arg.of("Ycon", ycon, Quantity.SECTION_LENGTH), Arg.of("fc", fc, Quantity.STRESS),
+                        Arg.of("b", b, Quantity.SECTION_LENGTH), Arg.of("tc", tc, Quantity.SECTION_LENGTH),
+                        Arg.of("C", c, Quantity.FORCE), Arg.of("a", a, Quantity.SECTION_LENGTH));
+            }
         }
 
         // the steel: compression Cs at the top, centroid d2 below the top of the steel
@@ -168,44 +196,65 @@ public final class CompositeFlexureI3 {
             pnaDepth = -(ycon - a);
             Calc.branch(calc, "C = As·Fy → the PNA is in the slab; the whole steel section yields in tension", CLAUSE_I3_2A);
         } else {
-            cs = Calc.eq(calc, "Cs", "(As·Fy − C)/2", CLAUSE_I3_2A, cs, Quantity.FORCE, Arg.of("As", as, Quantity.AREA),
-                    Arg.of("Fy", fy, Quantity.STRESS), Arg.of("C", c, Quantity.FORCE));
+            if (calc != null) {
+                calc.eq("Cs", "(As·Fy − C)/2", CLAUSE_I3_2A, cs, Quantity.FORCE, Arg.of("As", as, Quantity.AREA),
+                        Arg.of("Fy", fy, Quantity.STRESS), Arg.of("C", c, Quantity.FORCE));
+            }
             if (cs <= flange) {
                 pna = Pna.TOP_FLANGE;
                 Calc.branch(calc, "Cs ≤ bf·tf·Fy = " + CalcFormat.sig(flange / 1e3) + " kN → the PNA is in the top flange",
                         CLAUSE_I3_2A);
-                double x = Calc.eq(calc, "x", "Cs/(bf·Fy)", CLAUSE_I3_2A, cs / (bf * fy), Quantity.SECTION_LENGTH,
-                        Arg.of("Cs", cs, Quantity.FORCE), Arg.of("bf", bf, Quantity.SECTION_LENGTH), Arg.of("Fy", fy, Quantity.STRESS));
+                double x = cs / (bf * fy);
+                if (calc != null) {
+                    calc.eq("x", "Cs/(bf·Fy)", CLAUSE_I3_2A, x, Quantity.SECTION_LENGTH,
+                            Arg.of("Cs", cs, Quantity.FORCE), Arg.of("bf", bf, Quantity.SECTION_LENGTH),
+                            Arg.of("Fy", fy, Quantity.STRESS));
+                }
                 pnaDepth = x;
-                d2 = Calc.eq(calc, "d2", "x/2", CLAUSE_I3_2A, x / 2, Quantity.SECTION_LENGTH,
-                        Arg.of("x", x, Quantity.SECTION_LENGTH));
+                d2 = x / 2;
+                if (calc != null) {
+                    calc.eq("d2", "x/2", CLAUSE_I3_2A, d2, Quantity.SECTION_LENGTH, Arg.of("x", x, Quantity.SECTION_LENGTH));
+                }
             } else {
                 pna = Pna.WEB;
                 Calc.branch(calc, "Cs > bf·tf·Fy = " + CalcFormat.sig(flange / 1e3) + " kN → the PNA is in the web", CLAUSE_I3_2A);
-                double twe = Calc.eq(calc, "tw_e", "(As − 2·bf·tf)/(d − 2·tf)", CLAUSE_I3_2A, (as - 2 * bf * tf) / (d - 2 * tf),
-                        Quantity.SECTION_LENGTH, Arg.of("As", as, Quantity.AREA), Arg.of("bf", bf, Quantity.SECTION_LENGTH),
-                        Arg.of("tf", tf, Quantity.SECTION_LENGTH), Arg.of("d", d, Quantity.SECTION_LENGTH));
-                double xw = Calc.eq(calc, "x_w", "(Cs − bf·tf·Fy)/(tw_e·Fy)", CLAUSE_I3_2A, (cs - flange) / (twe * fy),
-                        Quantity.SECTION_LENGTH, Arg.of("Cs", cs, Quantity.FORCE), Arg.of("bf", bf, Quantity.SECTION_LENGTH),
-                        Arg.of("tf", tf, Quantity.SECTION_LENGTH), Arg.of("Fy", fy, Quantity.STRESS),
-                        Arg.of("tw_e", twe, Quantity.SECTION_LENGTH));
+                double twe = (as - 2 * bf * tf) / (d - 2 * tf);
+                if (calc != null) {
+                    calc.eq("tw_e", "(As − 2·bf·tf)/(d − 2·tf)", CLAUSE_I3_2A, twe, Quantity.SECTION_LENGTH,
+                            Arg.of("As", as, Quantity.AREA), Arg.of("bf", bf, Quantity.SECTION_LENGTH),
+                            Arg.of("tf", tf, Quantity.SECTION_LENGTH), Arg.of("d", d, Quantity.SECTION_LENGTH));
+                }
+                double xw = (cs - flange) / (twe * fy);
+                if (calc != null) {
+                    calc.eq("x_w", "(Cs − bf·tf·Fy)/(tw_e·Fy)", CLAUSE_I3_2A, xw, Quantity.SECTION_LENGTH,
+                            Arg.of("Cs", cs, Quantity.FORCE), Arg.of("bf", bf, Quantity.SECTION_LENGTH),
+                            Arg.of("tf", tf, Quantity.SECTION_LENGTH), Arg.of("Fy", fy, Quantity.STRESS),
+                            Arg.of("tw_e", twe, Quantity.SECTION_LENGTH));
+                }
                 pnaDepth = tf + xw;
-                d2 = Calc.eq(calc, "d2", "(bf·tf·Fy·tf/2 + (Cs − bf·tf·Fy)·(tf + x_w/2))/Cs", CLAUSE_I3_2A,
-                        (flange * tf / 2 + (cs - flange) * (tf + xw / 2)) / cs, Quantity.SECTION_LENGTH,
-                        Arg.of("bf", bf, Quantity.SECTION_LENGTH), Arg.of("tf", tf, Quantity.SECTION_LENGTH),
-                        Arg.of("Fy", fy, Quantity.STRESS), Arg.of("Cs", cs, Quantity.FORCE),
-                        Arg.of("x_w", xw, Quantity.SECTION_LENGTH));
+                d2 = (flange * tf / 2 + (cs - flange) * (tf + xw / 2)) / cs;
+                if (calc != null) {
+                    calc.eq("d2", "(bf·tf·Fy·tf/2 + (Cs − bf·tf·Fy)·(tf + x_w/2))/Cs", CLAUSE_I3_2A, d2, Quantity.SECTION_LENGTH,
+                            Arg.of("bf", bf, Quantity.SECTION_LENGTH), Arg.of("tf", tf, Quantity.SECTION_LENGTH),
+                            Arg.of("Fy", fy, Quantity.STRESS), Arg.of("Cs", cs, Quantity.FORCE),
+                            Arg.of("x_w", xw, Quantity.SECTION_LENGTH));
+                }
             }
         }
-        double d3 = Calc.eq(calc, "d3", "d/2", CLAUSE_I3_2A, d / 2, Quantity.SECTION_LENGTH, Arg.of("d", d, Quantity.SECTION_LENGTH));
+        double d3 = d / 2;
+        if (calc != null) {
+            calc.eq("d3", "d/2", CLAUSE_I3_2A, d3, Quantity.SECTION_LENGTH, Arg.of("d", d, Quantity.SECTION_LENGTH));
+        }
         double mn = c * (d1 + d2) + py * (d3 - d2);
         if (!plastic) {
             mn = Double.NaN;
         } else {
-            mn = Calc.eq(calc, "Mn", "C·(d1 + d2) + As·Fy·(d3 − d2)", CLAUSE_I3_2A, mn, Quantity.MOMENT,
-                    Arg.of("C", c, Quantity.FORCE), Arg.of("d1", d1, Quantity.SECTION_LENGTH),
-                    Arg.of("d2", d2, Quantity.SECTION_LENGTH), Arg.of("As", as, Quantity.AREA),
-                    Arg.of("Fy", fy, Quantity.STRESS), Arg.of("d3", d3, Quantity.SECTION_LENGTH));
+            if (calc != null) {
+                calc.eq("Mn", "C·(d1 + d2) + As·Fy·(d3 − d2)", CLAUSE_I3_2A, mn, Quantity.MOMENT,
+                        Arg.of("C", c, Quantity.FORCE), Arg.of("d1", d1, Quantity.SECTION_LENGTH),
+                        Arg.of("d2", d2, Quantity.SECTION_LENGTH), Arg.of("As", as, Quantity.AREA),
+                        Arg.of("Fy", fy, Quantity.STRESS), Arg.of("d3", d3, Quantity.SECTION_LENGTH));
+            }
         }
         return new Result(vc, py, c, degree, a, d1, cs, d2, d3, pnaDepth, pna, mn);
     }

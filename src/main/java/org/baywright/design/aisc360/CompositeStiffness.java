@@ -33,6 +33,9 @@ public final class CompositeStiffness {
      */
     public static double yEna(double as, double d3, double d1, double c, double fy, Calc calc) {
         double v = (as * d3 + (c / fy) * (2 * d3 + d1)) / (as + c / fy);
+        if (calc == null) {
+            return v;
+        }
         return Calc.eq(calc, "Y_ENA", "(As·d3 + (ΣQn/Fy)·(2·d3 + d1))/(As + ΣQn/Fy)", EQ_C_I3_2, v, Quantity.SECTION_LENGTH,
                 Arg.of("As", as, Quantity.AREA), Arg.of("d3", d3, Quantity.SECTION_LENGTH),
                 Arg.of("ΣQn", c, Quantity.FORCE), Arg.of("Fy", fy, Quantity.STRESS), Arg.of("d1", d1, Quantity.SECTION_LENGTH));
@@ -48,6 +51,9 @@ public final class CompositeStiffness {
     public static double ilb(double is, double as, double d3, double d1, double c, double fy, Calc calc) {
         double y = yEna(as, d3, d1, c, fy, calc);
         double v = is + as * (y - d3) * (y - d3) + (c / fy) * (2 * d3 + d1 - y) * (2 * d3 + d1 - y);
+        if (calc == null) {
+            return v;
+        }
         return Calc.eq(calc, "I_LB", "Is + As·(Y_ENA − d3)² + (ΣQn/Fy)·(2·d3 + d1 − Y_ENA)²", EQ_C_I3_1, v,
                 Quantity.INERTIA, Arg.of("Is", is, Quantity.INERTIA), Arg.of("As", as, Quantity.AREA),
                 Arg.of("Y_ENA", y, Quantity.SECTION_LENGTH), Arg.of("d3", d3, Quantity.SECTION_LENGTH),

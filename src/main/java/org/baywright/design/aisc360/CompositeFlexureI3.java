@@ -202,7 +202,7 @@ public final class CompositeFlexureI3 {
             }
             if (cs <= flange) {
                 pna = Pna.TOP_FLANGE;
-                Calc.branch(calc, "Cs ≤ bf·tf·Fy = " + CalcFormat.sig(flange / 1e3) + " kN → the PNA is in the top flange",
+                Calc.branch(calc, "Cs ≤ bf·tf·Fy → the PNA is in the top flange",
                         CLAUSE_I3_2A);
                 double x = cs / (bf * fy);
                 if (calc != null) {
@@ -217,7 +217,7 @@ public final class CompositeFlexureI3 {
                 }
             } else {
                 pna = Pna.WEB;
-                Calc.branch(calc, "Cs > bf·tf·Fy = " + CalcFormat.sig(flange / 1e3) + " kN → the PNA is in the web", CLAUSE_I3_2A);
+                Calc.branch(calc, "Cs > bf·tf·Fy → the PNA is in the web", CLAUSE_I3_2A);
                 double twe = (as - 2 * bf * tf) / (d - 2 * tf);
                 if (calc != null) {
                     calc.eq("tw_e", "(As − 2·bf·tf)/(d − 2·tf)", CLAUSE_I3_2A, twe, Quantity.SECTION_LENGTH,

@@ -133,10 +133,8 @@ public final class StudStrengthI8 {
         double steel = f.rg() * f.rp() * asa * fu;
         double v = Math.min(concrete, steel);
         if (calc != null) {
-            calc.branch(concrete <= steel ? "0.5·Asa·√(f′c·Ec) = " + sig(Units.KIPS.fromSi(concrete))
-                    + " kips ≤ Rg·Rp·Asa·Fu = " + sig(Units.KIPS.fromSi(steel)) + " kips → the concrete governs"
-                    : "Rg·Rp·Asa·Fu = " + sig(Units.KIPS.fromSi(steel)) + " kips < 0.5·Asa·√(f′c·Ec) = "
-                            + sig(Units.KIPS.fromSi(concrete)) + " kips → the stud governs", EQ_I8_1);
+            calc.branch(concrete <= steel ? "0.5·Asa·√(f′c·Ec) ≤ Rg·Rp·Asa·Fu → the concrete governs"
+                    : "Rg·Rp·Asa·Fu < 0.5·Asa·√(f′c·Ec) → the stud governs", EQ_I8_1);
         }
         return Calc.eq(calc, "Qn", "min(0.5·Asa·√(fc·Ec), Rg·Rp·Asa·Fu)", EQ_I8_1, v, Quantity.FORCE,
                 Arg.of("Asa", asa, Quantity.AREA), Arg.of("fc", fc, Quantity.STRESS), Arg.of("Ec", ec, Quantity.STRESS),

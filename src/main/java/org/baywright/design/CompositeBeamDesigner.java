@@ -418,6 +418,11 @@ public final class CompositeBeamDesigner {
                     : !st.shear.passes() ? st.shear : null;
             if (fail != null) {
                 rejected.add(new Rejection(s, fail));
+                if (fail.ratio() < closestRatio) {
+                    closestRatio = fail.ratio();
+                    closest = st;
+                    closestN = hi;
+                }
                 continue;
             }
             // the least stud count that passes: flexural strength and I_LB rise with ΣQn

@@ -81,6 +81,21 @@ class CompositeBeamDesignerValidationTest {
                 I1.near("L/360 [in]", 1.50, Units.IN.fromSi(live.capacity()), ROUND_OFF));
     }
 
+    /** I.1's construction stage with the V15 construction live load, 25 psf (ASCE/SEI 37). */
+    @Test
+    void exampleI1ConstructionStageAt25Psf() {
+        CompositeBeam b = exampleI1();
+        CompositeBeam v15 = new CompositeBeam(b.span(), b.ribs(), b.toNeighbourLeft(), b.toNeighbourRight(), b.toEdgeLeft(),
+                b.toEdgeRight(), b.tributaryWidth(), b.slab(), b.studs(), b.superimposedDead(), b.live(), Units.PSF.toSi(25),
+                b.slabWeightOverride());
+        Check cons = new CompositeBeamDesigner(v15, exampleCriteria()).check(CATALOG.find("W21X50").orElseThrow(), 23, null)
+                .check("construction flexure");
+        assertAll("DE I.1 construction stage, 25 psf",
+                // CHECK-VALUES §7 "I.1 construction stage": Mu = 353.4 kip-ft with 25 psf, COMPUTED
+                I1.printed("construction Mu [kip-ft] (25 psf)", 353.4, Units.KIP_FT.fromSi(cons.demand())),
+                holds("below φbMp = 412.5 kip-ft", cons.passes()));
+    }
+
     /** The search on I.1: a W21X50 carries it; nothing lighter than what the search picks passes. */
     @Test
     void exampleI1Search() {

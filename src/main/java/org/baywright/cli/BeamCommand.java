@@ -667,9 +667,9 @@ public final class BeamCommand implements Callable<Integer> {
         return s.name().equals(FY_GIVEN) ? fyText + " (" + FY_GIVEN + ")" : s.name() + ", " + fyText;
     }
 
-    /** A section's designation in the output's units. */
+    /** A section's designation in the output's units: in SI, the SI designation where the catalog gives it. */
     static String name(Section s, UnitSystem us) {
-        return s.designation();
+        return s.designationIn(us);
     }
 
     private static String where(Check k, UnitSystem us) {

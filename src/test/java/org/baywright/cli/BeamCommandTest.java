@@ -309,4 +309,26 @@ class BeamCommandTest {
         System.arraycopy(more, 0, r, a.length, more.length);
         return r;
     }
+
+    @Test
+    void siOutputPrintsTheSiDesignationsTheCatalogGives() throws Exception {
+        // W460X52 is the SI designation of W18X35 (issue 12; the published SI shapes table, FOUND): in SI output
+        // the section is named as the SI edition names it, in US output as the US edition does
+        String cat = org.baywright.catalog.SiDesignationValidationTest.fixturePath().toString();
+        JsonNode si = json("beam", "--span", "9m", "--dead", "6kN/m", "--live", "9kN/m", "--catalog", cat, "--json");
+        JsonNode us = json("beam", "--span", "9m", "--dead", "6kN/m", "--live", "9kN/m", "--catalog", cat, "--units", "us",
+                "--json");
+        Run text = run("beam", "--span", "9m", "--dead", "6kN/m", "--live", "9kN/m", "--catalog", cat, "--all-rejected");
+        // --section takes either name
+        JsonNode fixed = json("beam", "--span", "9m", "--dead", "6kN/m", "--live", "9kN/m", "--catalog", cat,
+                "--section", "W460X52", "--json");
+        assertAll(
+                () -> assertEquals("W460X52", si.get("section").asText()),
+                () -> assertEquals("W18X35", us.get("section").asText()),
+                () -> assertEquals("W360X32.9", si.get("rejected").get(0).get("section").asText()),
+                () -> assertTrue(text.out().contains("Result: W460X52"), text.out()),
+                () -> assertTrue(text.out().contains("W410X38.8"), text.out()),
+                () -> assertFalse(text.out().contains("W18X35"), text.out()),
+                () -> assertEquals("W460X52", fixed.get("section").asText()));
+    }
 }

@@ -36,6 +36,12 @@ public final class Catalog {
                 throw new IllegalArgumentException(source + ": designation " + s.designation() + " appears twice");
             }
         }
+        for (Section s : this.sections) {
+            if (!s.siDesignation().isEmpty() && map.putIfAbsent(s.siDesignation(), s) != null
+                    && map.get(s.siDesignation()) != s) {
+                throw new IllegalArgumentException(source + ": designation " + s.siDesignation() + " appears twice");
+            }
+        }
         this.byDesignation = map;
     }
 
@@ -58,7 +64,7 @@ public final class Catalog {
         return sections.size();
     }
 
-    /** Finds a section by designation, in any case and spacing ({@code w18x50}). */
+    /** Finds a section by designation, in any case and spacing ({@code w18x50}), or by its SI designation where the catalog gives one. */
     public Optional<Section> find(String designation) {
         return Optional.ofNullable(byDesignation.get(Section.normalize(designation)));
     }

@@ -29,7 +29,9 @@ import org.baywright.units.Units;
  * </pre>
  *
  * The first seven columns are required; the property columns are optional and a cell may be empty
- * (not tabulated: the value is computed from the dimensions). Any unit of the right kind is
+ * (not tabulated: the value is computed from the dimensions). An optional column
+ * {@code designation[SI]} gives the designation of the same shape in the SI edition of the standard
+ * (W460X52 for W18X35), which SI output prints; an empty cell means none. Any unit of the right kind is
  * accepted ({@code d[mm]}, {@code weight[kg/m]}, {@code Ix[mm4]}…). See {@code docs/catalog-format.md}.
  */
 public final class CatalogFile {
@@ -132,7 +134,9 @@ public final class CatalogFile {
         out.write(MAGIC + "\n");
         out.write("# name: " + catalog.name() + "\n");
         out.write("# Units are in each column heading. An empty cell means \"not tabulated\": Baywright computes it from the dimensions.\n");
-        StringBuilder h = new StringBuilder("designation,weight[plf],d[in],bf[in],tw[in],tf[in],kdes[in]");
+        boolean siNames = catalog.sections().stream().anyMatch(x -> !x.siDesignation().isEmpty());
+        StringBuilder h = new StringBuilder("designation" + (siNames ? ",designation[SI]" : "")
+                + ",weight[plf],d[in],bf[in],tw[in],tf[in],kdes[in]");
         Unit[] propUnits = {Units.IN2, Units.IN4, Units.IN3, Units.IN3, Units.IN4, Units.IN3, Units.IN3, Units.IN4, Units.IN6};
         if (withTabulated) {
             for (Property p : Property.values()) {
@@ -142,6 +146,9 @@ public final class CatalogFile {
         out.write(h.append('\n').toString());
         for (Section s : catalog.sections()) {
             StringBuilder b = new StringBuilder(s.designation());
+            if (siNames) {
+                b.append(',').append(s.siDesignation());
+            }
             b.append(',').append(num(Units.PLF.fromSi(s.weight())));
             IShapeDimensions d = s.dims();
             for (double v : new double[] {d.d(), d.bf(), d.tw(), d.tf(), d.kdes()}) {
@@ -175,6 +182,9 @@ public final class CatalogFile {
     private record Column(String name, Unit unit, Property property, int dimIndex) {
     }
 
+    /** The column index marker of the SI designation column, {@code designation[SI]}. */
+    private static final int SI_NAME = -2;
+
     private static Column[] header(String src, int lineNo, String line) {
         String[] cells = line.split(",", -1);
         Column[] cols = new Column[cells.length];
@@ -190,6 +200,10 @@ public final class CatalogFile {
                 }
                 base = c.substring(0, lb).strip();
                 unitText = c.substring(lb + 1, c.length() - 1).strip();
+            }
+            if (base.equals("designation") && "SI".equals(unitText)) {
+                cols[i] = new Column("designation[SI]", null, null, SI_NAME);
+                continue;
             }
             if (base.equals("designation")) {
                 cols[i] = new Column(base, null, null, -1);
@@ -277,6 +291,7 @@ public final class CatalogFile {
                     + cols.length + " columns");
         }
         String designation = null;
+        String siName = "";
         double weight = Double.NaN;
         double[] dims = new double[DIM_COLUMNS.length];
         Map<Property, Double> tab = new EnumMap<>(Property.class);
@@ -284,7 +299,11 @@ public final class CatalogFile {
             Column c = cols[i];
             String cell = cells[i].strip();
             if (c.unit() == null) {
-                designation = cell;
+                if (c.dimIndex() == SI_NAME) {
+                    siName = cell;
+                } else {
+                    designation = cell;
+                }
                 continue;
             }
             if (cell.isEmpty()) {
@@ -318,7 +337,7 @@ public final class CatalogFile {
             throw new CatalogException(src + ":" + lineNo + ": the designation is empty");
         }
         try {
-            return new Section(designation, weight, new IShapeDimensions(dims[0], dims[1], dims[2], dims[3], dims[4]), tab);
+            return new Section(designation, siName, weight, new IShapeDimensions(dims[0], dims[1], dims[2], dims[3], dims[4]), tab);
         } catch (IllegalArgumentException e) {
             throw new CatalogException(src + ":" + lineNo + ": " + designation + ": " + e.getMessage(), e);
         }

@@ -17,6 +17,7 @@ public final class Section {
     private static final Pattern DESIGNATION = Pattern.compile("^([A-Z]+)(\\d+(?:\\.\\d+)?)X(\\d+(?:\\.\\d+)?)$");
 
     private final String designation;
+    private final String siDesignation;
     private final String shape;
     private final String nominalDepth;
     private final String series;
@@ -34,6 +35,24 @@ public final class Section {
      * @param tabulated the tabulated properties the catalog gives (any subset), SI
      */
     public Section(String designation, double weight, IShapeDimensions dims, Map<Property, Double> tabulated) {
+        this(designation, "", weight, dims, tabulated);
+    }
+
+    /**
+     * A section that also carries the designation of the same shape in the SI edition of the standard
+     * (W460X52 for W18X35). That name is a listing of the standard (ASTM A6/A6M), not a formula of the
+     * dimensions: a catalog gives it or it is absent.
+     *
+     * @param siDesignation the SI designation, e.g. {@code W460X52}; "" or null for none
+     */
+    public Section(String designation, String siDesignation, double weight, IShapeDimensions dims,
+            Map<Property, Double> tabulated) {
+        String si = siDesignation == null ? "" : normalize(siDesignation);
+        if (!si.isEmpty() && !DESIGNATION.matcher(si).matches()) {
+            throw new IllegalArgumentException("SI designation \"" + siDesignation
+                    + "\" is not of the form W460X52 (shape letters, nominal depth in mm, X, mass in kg/m)");
+        }
+        this.siDesignation = si;
         this.designation = normalize(Objects.requireNonNull(designation, "designation"));
         Matcher m = DESIGNATION.matcher(this.designation);
         if (!m.matches()) {
@@ -71,6 +90,19 @@ public final class Section {
 
     public String designation() {
         return designation;
+    }
+
+    /** The designation of the same shape in the SI edition (W460X52), or "" when the catalog does not give it. */
+    public String siDesignation() {
+        return siDesignation;
+    }
+
+    /**
+     * The designation to print in a unit system: in SI the SI designation where the catalog gives one,
+     * otherwise (and in US units) the designation.
+     */
+    public String designationIn(org.baywright.units.UnitSystem units) {
+        return units == org.baywright.units.UnitSystem.SI && !siDesignation.isEmpty() ? siDesignation : designation;
     }
 
     /** Shape letters: {@code W}. */
@@ -134,7 +166,7 @@ public final class Section {
 
     @Override
     public boolean equals(Object o) {
-        return o == this || o instanceof Section s && s.hash == hash && s.designation.equals(designation) && s.weight == weight
+        return o == this || o instanceof Section s && s.hash == hash && s.designation.equals(designation) && s.siDesignation.equals(siDesignation) && s.weight == weight
                 && s.dims.equals(dims) && s.tabulated.equals(tabulated);
     }
 

@@ -44,29 +44,35 @@ public final class NewCommand implements Callable<Integer> {
     @Option(names = "--beam-spacing", defaultValue = "10ft", paramLabel = "LENGTH", description = "Largest infill beam spacing (default ${DEFAULT-VALUE}).")
     String beamSpacing;
 
-    @Option(names = "--dead", defaultValue = "56psf", paramLabel = "AREA-LOAD", description = "Dead load of slab and deck (default ${DEFAULT-VALUE}); the framing's own weight is added by the run.")
+    @Option(names = "--dead", defaultValue = RegularPlan.OFFICE_DEAD, paramLabel = "AREA-LOAD", description = "Dead load of slab and deck (default ${DEFAULT-VALUE}, common practice); the framing's own weight is added by the run.")
     String dead;
 
-    @Option(names = "--superimposed", defaultValue = "10psf", paramLabel = "AREA-LOAD", description = "Superimposed dead load (default ${DEFAULT-VALUE}).")
+    @Option(names = "--superimposed", defaultValue = RegularPlan.OFFICE_SUPERIMPOSED, paramLabel = "AREA-LOAD", description = "Superimposed dead load: ceiling, services, finishes (default ${DEFAULT-VALUE}, common practice); the roof takes the same.")
     String superimposed;
 
-    @Option(names = "--live", defaultValue = "50psf", paramLabel = "AREA-LOAD", description = "Floor live load (default ${DEFAULT-VALUE}, offices, ASCE 7-16 Table 4.3-1).")
+    @Option(names = "--live", defaultValue = RegularPlan.OFFICE_LIVE, paramLabel = "AREA-LOAD", description = "Floor live load (default ${DEFAULT-VALUE}, offices, ASCE 7-16 Table 4.3-1).")
     String live;
 
-    @Option(names = "--partition", defaultValue = "0psf", paramLabel = "AREA-LOAD", description = "Partition allowance, carried as reducible live load (ASCE 7-16 §4.3.2 gives 15 psf for offices; default ${DEFAULT-VALUE}).")
+    @Option(names = "--partition", defaultValue = RegularPlan.OFFICE_PARTITION, paramLabel = "AREA-LOAD", description = "Partition allowance on the floors, carried as reducible live load (default ${DEFAULT-VALUE}, ASCE 7-16 §4.3.2 for offices). Less, e.g. 0psf, needs the reason in --notes unless --live is 80 psf or more (§4.3.2 exception).")
     String partition;
 
-    @Option(names = "--roof-live", defaultValue = "20psf", paramLabel = "AREA-LOAD", description = "Roof live load (default ${DEFAULT-VALUE}).")
+    @Option(names = "--roof-dead", paramLabel = "AREA-LOAD", description = "Dead load of the roof's own slab or deck, e.g. 20psf (default: the same as --dead).")
+    String roofDead;
+
+    @Option(names = "--roof-live", defaultValue = RegularPlan.ROOF_LIVE, paramLabel = "AREA-LOAD", description = "Roof live load (default ${DEFAULT-VALUE}, ordinary flat roof, ASCE 7-16 Table 4.3-1).")
     String roofLive;
 
-    @Option(names = "--snow", defaultValue = "0psf", paramLabel = "AREA-LOAD", description = "Roof snow load (default ${DEFAULT-VALUE}).")
+    @Option(names = "--snow", defaultValue = RegularPlan.SNOW, paramLabel = "AREA-LOAD", description = "Roof snow load (default ${DEFAULT-VALUE}: none; the site decides it, ASCE 7-16 Chapter 7).")
     String snow;
 
-    @Option(names = "--edge-load", defaultValue = "0klf", paramLabel = "LINE-LOAD", description = "Cladding dead load along the slab edge of every level (default ${DEFAULT-VALUE}).")
+    @Option(names = "--edge-load", defaultValue = RegularPlan.EDGE_LOAD, paramLabel = "LINE-LOAD", description = "Cladding dead load per length of slab edge, on every level and the roof (default ${DEFAULT-VALUE}: no cladding load; give the facade's weight, e.g. 0.4klf).")
     String edgeLoad;
 
     @Option(names = "--name", defaultValue = "New plan", paramLabel = "TEXT", description = "Project name.")
     String name;
+
+    @Option(names = "--notes", paramLabel = "TEXT", description = "The plan's notes, e.g. why a load departs from the defaults (\"no partitions: fixed masonry walls, carried as dead load\").")
+    String notes;
 
     @Option(names = "--units", paramLabel = "us|si", description = "Units of the plan file (default: SI when the bays are metric).")
     String units;
@@ -98,9 +104,16 @@ public final class NewCommand implements Callable<Integer> {
         double sd = CliValues.quantity("--superimposed", superimposed, Dimension.AREA_LOAD, false);
         double l = CliValues.quantity("--live", live, Dimension.AREA_LOAD, false);
         double p = CliValues.quantity("--partition", partition, Dimension.AREA_LOAD, false);
+        double rd = roofDead == null ? d : CliValues.quantity("--roof-dead", roofDead, Dimension.AREA_LOAD, false);
         double lr = CliValues.quantity("--roof-live", roofLive, Dimension.AREA_LOAD, false);
         double s = CliValues.quantity("--snow", snow, Dimension.AREA_LOAD, false);
         double edge = CliValues.quantity("--edge-load", edgeLoad, Dimension.LINE_LOAD, false);
+        double required = RegularPlan.OFFICE_FLOOR.partition();
+        if (p < required * (1 - 1e-9) && l < RegularPlan.PARTITION_NOT_REQUIRED_LIVE && (notes == null || notes.isBlank())) {
+            throw new BadInputException("--partition: \"" + partition + "\" is less than the " + RegularPlan.OFFICE_PARTITION
+                    + " partition allowance ASCE 7-16 §4.3.2 asks for where the live load is below 80 psf; give the reason "
+                    + "in the plan's notes with --notes \"…\" (e.g. fixed partitions carried as dead load)");
+        }
         UnitSystem us;
         if (units != null) {
             us = CliValues.units("--units", units);
@@ -109,8 +122,8 @@ public final class NewCommand implements Callable<Integer> {
             us = t.endsWith("mm") || (t.endsWith("m") && !t.endsWith("in")) ? UnitSystem.SI : UnitSystem.US;
         }
         Plan plan = RegularPlan.generate(new RegularPlan.Spec(name, us.name().toLowerCase(Locale.ROOT), bx, by, st,
-                along.equals("y"), spacing, new LoadValues(d, sd, l, 0, 0, p), new LoadValues(d, sd, 0, lr, s, 0),
-                new LoadValues(edge, 0, 0, 0, 0, 0)));
+                along.equals("y"), spacing, new LoadValues(d, sd, l, 0, 0, p), new LoadValues(rd, sd, 0, lr, s, 0),
+                new LoadValues(edge, 0, 0, 0, 0, 0))).withNotes(notes == null ? "" : notes.strip());
         PlanFiles.write(plan, output);
         spec.commandLine().getErr().println("wrote " + output + ": " + (bx.size()) + " × " + by.size() + " bays, "
                 + st.size() + " levels, " + plan.columns().size() + " columns");

@@ -108,7 +108,8 @@ final class PlanAssembler {
         if (problems.hasErrors()) {
             return Optional.empty();
         }
-        return Optional.of(new Plan(d.name() == null ? "" : d.name(), units, settings, grid, levels, floors, columns));
+        return Optional.of(new Plan(d.name() == null ? "" : d.name(), units, settings, grid, levels, floors, columns,
+                d.notes() == null ? "" : d.notes()));
     }
 
     // ---- settings

@@ -35,7 +35,7 @@ final class PlanDocument {
     }
 
     /** The whole file. {@code format} and {@code version} are checked before the rest. */
-    record PlanDoc(String format, Integer version, String name, @Required String units, SettingsDoc settings,
+    record PlanDoc(String format, Integer version, String name, String notes, @Required String units, SettingsDoc settings,
             List<GridLineDoc> grid, List<LevelDoc> levels, List<FloorDoc> floors, List<ColumnDoc> columns) {
     }
 

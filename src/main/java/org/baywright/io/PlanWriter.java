@@ -60,7 +60,8 @@ final class PlanWriter {
     }
 
     private PlanDoc plan(Plan p) {
-        return new PlanDoc(PlanFiles.FORMAT, PlanFiles.VERSION, p.name(), p.units(), settings(p.settings()),
+        return new PlanDoc(PlanFiles.FORMAT, PlanFiles.VERSION, p.name(), p.notes().isEmpty() ? null : p.notes(), p.units(),
+                settings(p.settings()),
                 map(p.grid(), this::gridLine), map(p.levels(), this::level), map(p.floors(), this::floor),
                 map(p.columns(), this::column));
     }

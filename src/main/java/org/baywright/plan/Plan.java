@@ -9,14 +9,28 @@ import java.util.Optional;
  *
  * @param name project name
  * @param units the unit system the user works in ("us" or "si"); values are SI regardless
+ * @param notes the designer's notes on the plan, free text ("" for none): e.g. why a load departs from
+ *     the office defaults, such as no partition allowance (ASCE 7-16 §4.3.2)
  */
 public record Plan(String name, String units, DesignSettings settings, List<GridLine> grid, List<Level> levels,
-        List<Floor> floors, List<Column> columns) {
+        List<Floor> floors, List<Column> columns, String notes) {
     public Plan {
         grid = List.copyOf(grid);
         levels = List.copyOf(levels);
         floors = List.copyOf(floors);
         columns = List.copyOf(columns);
+        notes = notes == null ? "" : notes;
+    }
+
+    /** A plan without notes. */
+    public Plan(String name, String units, DesignSettings settings, List<GridLine> grid, List<Level> levels,
+            List<Floor> floors, List<Column> columns) {
+        this(name, units, settings, grid, levels, floors, columns, "");
+    }
+
+    /** The same plan with other notes. */
+    public Plan withNotes(String text) {
+        return new Plan(name, units, settings, grid, levels, floors, columns, text);
     }
 
     public Optional<Floor> floor(String id) {

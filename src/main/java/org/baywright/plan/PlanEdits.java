@@ -36,11 +36,10 @@ public final class PlanEdits {
     /**
      * Floor loads a new plan starts with, an office floor: slab on metal deck 50 psf and ceiling and
      * services 15 psf (common practice), office live load 50 psf (ASCE 7-16 Table 4.3-1) and the
-     * partition allowance 15 psf (ASCE 7-16 §4.3.2). The user changes them in the plan.
+     * partition allowance 15 psf (ASCE 7-16 §4.3.2). The user changes them in the plan. The same
+     * values as the {@code new} command's defaults: both are {@link RegularPlan#OFFICE_FLOOR}.
      */
-    public static final LoadValues OFFICE_FLOOR = new LoadValues(org.baywright.units.Units.PSF.toSi(50),
-            org.baywright.units.Units.PSF.toSi(15), org.baywright.units.Units.PSF.toSi(50), 0, 0,
-            org.baywright.units.Units.PSF.toSi(15));
+    public static final LoadValues OFFICE_FLOOR = RegularPlan.OFFICE_FLOOR;
     /** The floor layout of a new plan. */
     public static final String NEW_FLOOR = "typical";
 
@@ -189,7 +188,7 @@ public final class PlanEdits {
                 }
             }
         }
-        return new Plan(p.name(), p.units(), p.settings(), grid, p.levels(), floors, columns);
+        return new Plan(p.name(), p.units(), p.settings(), grid, p.levels(), floors, columns, p.notes());
     }
 
     /** Moves one grid line to a new offset; everything on the plan stretches with it (see the class note). */
@@ -229,7 +228,7 @@ public final class PlanEdits {
             if (same.isEmpty()) {
                 List<GridLine> grid = new ArrayList<>(p.grid());
                 grid.add(new GridLine(axis == GridLine.Axis.X ? "A" : "1", axis, offset));
-                return new Plan(p.name(), p.units(), p.settings(), grid, p.levels(), p.floors(), p.columns());
+                return new Plan(p.name(), p.units(), p.settings(), grid, p.levels(), p.floors(), p.columns(), p.notes());
             }
             spacings.add(offset - same.get(same.size() - 1).offset());
             return axis == GridLine.Axis.X ? withGrid(p, spacings, null, columns, null) : withGrid(p, null, spacings, columns, null);
@@ -255,7 +254,7 @@ public final class PlanEdits {
         }
         List<GridLine> grid = new ArrayList<>(p.grid());
         grid.add(new GridLine(label, axis, offset));
-        return new Plan(p.name(), p.units(), p.settings(), grid, p.levels(), p.floors(), p.columns());
+        return new Plan(p.name(), p.units(), p.settings(), grid, p.levels(), p.floors(), p.columns(), p.notes());
     }
 
     /** The grid lines of one axis, by offset. */
@@ -480,7 +479,7 @@ public final class PlanEdits {
         String id = g.map(s -> unique("C-" + s[0] + s[1], ids)).orElseGet(() -> next("C", ids));
         List<Column> cs = new ArrayList<>(p.columns());
         cs.add(new Column(id, at, g.map(s -> s[0] + "-" + s[1]).orElse(""), "", Optional.empty()));
-        return new Plan(p.name(), p.units(), p.settings(), p.grid(), p.levels(), p.floors(), cs);
+        return new Plan(p.name(), p.units(), p.settings(), p.grid(), p.levels(), p.floors(), cs, p.notes());
     }
 
     /** Sets the span direction of one deck area, degrees counter-clockwise from x, folded into [0, 180). */
@@ -601,7 +600,7 @@ public final class PlanEdits {
                         ? new PointLoadItem(q.id(), mv.apply(q.at()), q.values()) : q).toList()));
         List<Column> cs = edited.columns().stream().map(c -> ids.contains(c.id())
                 ? new Column(c.id(), mv.apply(c.at()), "", c.topLevel(), c.fixedSection()) : c).toList();
-        return new Plan(edited.name(), edited.units(), edited.settings(), edited.grid(), edited.levels(), edited.floors(), cs);
+        return new Plan(edited.name(), edited.units(), edited.settings(), edited.grid(), edited.levels(), edited.floors(), cs, edited.notes());
     }
 
     /**
@@ -625,7 +624,7 @@ public final class PlanEdits {
                 f.lineLoads().stream().filter(l -> !gone.contains(l.id())).toList(),
                 f.pointLoads().stream().filter(q -> !gone.contains(q.id())).toList()));
         return new Plan(edited.name(), edited.units(), edited.settings(), edited.grid(), edited.levels(), edited.floors(),
-                edited.columns().stream().filter(c -> !gone.contains(c.id())).toList());
+                edited.columns().stream().filter(c -> !gone.contains(c.id())).toList(), edited.notes());
     }
 
     /** Sets (or, with an empty section, clears) the fixed size of a member of a floor or of a column. */
@@ -633,7 +632,7 @@ public final class PlanEdits {
         Optional<String> s = section.map(x -> x.trim().toUpperCase(Locale.ROOT)).filter(x -> !x.isEmpty());
         if (p.columns().stream().anyMatch(c -> c.id().equals(id))) {
             return new Plan(p.name(), p.units(), p.settings(), p.grid(), p.levels(), p.floors(), p.columns().stream()
-                    .map(c -> c.id().equals(id) ? new Column(c.id(), c.at(), c.grid(), c.topLevel(), s) : c).toList());
+                    .map(c -> c.id().equals(id) ? new Column(c.id(), c.at(), c.grid(), c.topLevel(), s) : c).toList(), p.notes());
         }
         return editFloor(p, floorId, f -> {
             if (f.member(id).isEmpty()) {
@@ -713,13 +712,13 @@ public final class PlanEdits {
 
     /** The plan in another unit system (values are SI either way; only what the user reads changes). */
     public static Plan withUnits(Plan p, String units) {
-        return new Plan(p.name(), units, p.settings(), p.grid(), p.levels(), p.floors(), p.columns());
+        return new Plan(p.name(), units, p.settings(), p.grid(), p.levels(), p.floors(), p.columns(), p.notes());
     }
 
     /** The plan designed by another method ("lrfd" or "asd"). */
     public static Plan withMethod(Plan p, String method) {
         return new Plan(p.name(), p.units(), p.settings().withMethod(method), p.grid(), p.levels(),
-                p.floors(), p.columns());
+                p.floors(), p.columns(), p.notes());
     }
 
     // ------------------------------------------------------------------ helpers
@@ -738,7 +737,7 @@ public final class PlanEdits {
         if (!found) {
             throw new IllegalArgumentException("the plan has no floor layout " + floorId);
         }
-        return new Plan(p.name(), p.units(), p.settings(), p.grid(), p.levels(), fs, p.columns());
+        return new Plan(p.name(), p.units(), p.settings(), p.grid(), p.levels(), fs, p.columns(), p.notes());
     }
 
     private static Floor withMembers(Floor f, List<Member> ms) {

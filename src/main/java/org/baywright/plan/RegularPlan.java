@@ -14,7 +14,35 @@ import java.util.Optional;
  * deck spans east–west onto the beams.
  */
 public final class RegularPlan {
+    // The office defaults of a new plan, written once: the `new` command's option defaults (as text) and the
+    // editor's new floors (OFFICE_FLOOR, PlanEdits.OFFICE_FLOOR) both come from here.
+
+    /** Slab on metal deck, dead load (common practice). */
+    public static final String OFFICE_DEAD = "50psf";
+    /** Ceiling, services and finishes, superimposed dead load (common practice). */
+    public static final String OFFICE_SUPERIMPOSED = "15psf";
+    /** Office live load, ASCE 7-16 Table 4.3-1. */
+    public static final String OFFICE_LIVE = "50psf";
+    /** Partition allowance, ASCE 7-16 §4.3.2: not less than 15 psf where partitions may be moved and L0 ≤ 80 psf. */
+    public static final String OFFICE_PARTITION = "15psf";
+    /** §4.3.2: no partition allowance is required where the live load is this or more (80 psf), Pa. */
+    public static final double PARTITION_NOT_REQUIRED_LIVE = org.baywright.units.Units.PSF.toSi(80);
+    /** Ordinary flat roof live load, ASCE 7-16 Table 4.3-1. */
+    public static final String ROOF_LIVE = "20psf";
+    /** Snow: none unless given (the site's ground snow load decides it, ASCE 7-16 Chapter 7). */
+    public static final String SNOW = "0psf";
+    /** Cladding edge load: none unless given (the facade decides it). */
+    public static final String EDGE_LOAD = "0klf";
+
+    /** The floor loads of a new office plan (the values above, SI). */
+    public static final LoadValues OFFICE_FLOOR = new LoadValues(psf(OFFICE_DEAD), psf(OFFICE_SUPERIMPOSED),
+            psf(OFFICE_LIVE), 0, 0, psf(OFFICE_PARTITION));
+
     private RegularPlan() {
+    }
+
+    private static double psf(String text) {
+        return org.baywright.units.Quantities.parse("office default", text, org.baywright.units.Dimension.AREA_LOAD);
     }
 
     /**

@@ -101,7 +101,7 @@ public final class Optimiser {
             floors.add(new Floor(fl.id(), fl.name(), fl.roof(), fl.slabEdge(), fl.decks(), fl.members(), infills, fl.openings(),
                     fl.areaLoads(), fl.lineLoads(), fl.pointLoads()));
         }
-        return new Plan(plan.name(), plan.units(), plan.settings(), plan.grid(), plan.levels(), floors, plan.columns());
+        return new Plan(plan.name(), plan.units(), plan.settings(), plan.grid(), plan.levels(), floors, plan.columns(), plan.notes());
     }
 
     private static Optional<Double> width(Plan plan, Infill inf) {

@@ -91,7 +91,7 @@ public final class Variations {
         List<Column> columns = plan.columns().stream()
                 .map(c -> new Column(c.id(), f.apply(c.at()), c.grid(), c.topLevel(), c.fixedSection())).toList();
         List<Floor> floors = plan.floors().stream().map(fl -> mapFloor(fl, f)).toList();
-        return new Plan(plan.name(), plan.units(), plan.settings(), grid, plan.levels(), floors, columns);
+        return new Plan(plan.name(), plan.units(), plan.settings(), grid, plan.levels(), floors, columns, plan.notes());
     }
 
     private static double[] distinct(double[] sorted) {
@@ -171,7 +171,7 @@ public final class Variations {
         List<Floor> floors = plan.floors().stream().map(fl -> new Floor(fl.id(), fl.name(), fl.roof(), fl.slabEdge(), fl.decks(),
                 fl.members(), fl.infills().stream().map(f).toList(), fl.openings(), fl.areaLoads(), fl.lineLoads(),
                 fl.pointLoads())).toList();
-        return new Plan(plan.name(), plan.units(), plan.settings(), plan.grid(), plan.levels(), floors, plan.columns());
+        return new Plan(plan.name(), plan.units(), plan.settings(), plan.grid(), plan.levels(), floors, plan.columns(), plan.notes());
     }
 
     /** The deck span angle that spans onto beams running in {@code direction}: 0 onto north–south beams. */
@@ -219,7 +219,7 @@ public final class Variations {
             floors.add(new Floor(fl.id(), fl.name(), fl.roof(), fl.slabEdge(), decks, members, infills, fl.openings(),
                     fl.areaLoads(), fl.lineLoads(), fl.pointLoads()));
         }
-        return new Plan(plan.name(), plan.units(), plan.settings(), plan.grid(), plan.levels(), floors, plan.columns());
+        return new Plan(plan.name(), plan.units(), plan.settings(), plan.grid(), plan.levels(), floors, plan.columns(), plan.notes());
     }
 
     private static boolean onAny(double v, List<Double> offsets) {
@@ -247,6 +247,6 @@ public final class Variations {
     }
 
     private static Plan withSettings(Plan plan, DesignSettings s) {
-        return new Plan(plan.name(), plan.units(), s, plan.grid(), plan.levels(), plan.floors(), plan.columns());
+        return new Plan(plan.name(), plan.units(), s, plan.grid(), plan.levels(), plan.floors(), plan.columns(), plan.notes());
     }
 }

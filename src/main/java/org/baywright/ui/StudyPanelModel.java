@@ -436,7 +436,7 @@ public final class StudyPanelModel {
     /** A variant's plan, named as {@link #variantName} says, to open as a new document. */
     public static Plan named(Plan variant, Plan base, VariantResult v) {
         return new Plan(variantName(base, v), variant.units(), variant.settings(), variant.grid(), variant.levels(),
-                variant.floors(), variant.columns());
+                variant.floors(), variant.columns(), variant.notes());
     }
 
     // ---- texts ------------------------------------------------------------------------------------

@@ -78,6 +78,32 @@ public final class ReferenceShapes {
         return out;
     }
 
+    private static Map<String, Map<String, String>> siCache;
+
+    /**
+     * W-shape rows of the SI edition, keyed by the US label of the same shape. The two editions list
+     * the same shapes in the same order, one row each, so the k-th W row of one is the k-th of the
+     * other; the caller can check the pairing by the depth (d in mm = 25.4 × d in in, to rounding).
+     */
+    public static synchronized Map<String, Map<String, String>> wShapesSiByUsLabel() {
+        assumePresent();
+        assumeTrue(Files.isRegularFile(SI), "skipped: the SI edition of the AISC Shapes Database v15.0 is not at "
+                + SI.toAbsolutePath().normalize());
+        if (siCache == null) {
+            List<String> us = labels();
+            List<Map<String, String>> si = new ArrayList<>(read(SI, "W").values());
+            if (si.size() != us.size()) {
+                throw new IllegalStateException("the US and SI editions list " + us.size() + " and " + si.size() + " W shapes");
+            }
+            Map<String, Map<String, String>> m = new LinkedHashMap<>();
+            for (int k = 0; k < us.size(); k++) {
+                m.put(us.get(k), si.get(k));
+            }
+            siCache = m;
+        }
+        return siCache;
+    }
+
     /** Labels in file order. */
     public static List<String> labels() {
         return new ArrayList<>(wShapes().keySet());

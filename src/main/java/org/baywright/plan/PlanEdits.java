@@ -684,7 +684,7 @@ public final class PlanEdits {
         }
         List<Column> cs = p.columns().stream().map(c -> c.topLevel().equals(level)
                 ? new Column(c.id(), c.at(), c.grid(), name, c.fixedSection()) : c).toList();
-        return new Plan(p.name(), p.units(), p.settings(), p.grid(), ls, p.floors(), cs);
+        return new Plan(p.name(), p.units(), p.settings(), p.grid(), ls, p.floors(), cs, p.notes());
     }
 
     /**

@@ -126,7 +126,8 @@ public final class NewCommand implements Callable<Integer> {
                 new LoadValues(edge, 0, 0, 0, 0, 0))).withNotes(notes == null ? "" : notes.strip());
         PlanFiles.write(plan, output);
         spec.commandLine().getErr().println("wrote " + output + ": " + (bx.size()) + " × " + by.size() + " bays, "
-                + st.size() + " levels, " + plan.columns().size() + " columns");
+                + st.size() + (st.size() == 1 ? " level, " : " levels, ") + plan.columns().size()
+                + (plan.columns().size() == 1 ? " column" : " columns"));
         return 0;
     }
 

@@ -159,6 +159,6 @@ final class CheckerPages {
     }
 
     private static String force(double newtons, UnitSystem us) {
-        return newtons == 0 ? "–" : Fmt.fixed(newtons, Quantity.FORCE, us, 1);
+        return newtons == 0 ? "–" : us.forceNumber(newtons);
     }
 }

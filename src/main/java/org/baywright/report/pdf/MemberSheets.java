@@ -190,7 +190,7 @@ final class MemberSheets {
     }
 
     private static String n(double v, UnitSystem us) {
-        return v == 0 ? "–" : Fmt.n(v, Quantity.FORCE, us);
+        return v == 0 ? "–" : us.forceNumber(v);
     }
 
     // ---- shear and moment --------------------------------------------------------------------

@@ -23,6 +23,7 @@ import org.baywright.io.PlanDocument.OpeningDoc;
 import org.baywright.io.PlanDocument.PlanDoc;
 import org.baywright.io.PlanDocument.PointLoadDoc;
 import org.baywright.io.PlanDocument.SettingsDoc;
+import org.baywright.plan.RoofCeiling;
 import org.baywright.plan.AreaLoad;
 import org.baywright.plan.Column;
 import org.baywright.plan.Deck;
@@ -73,6 +74,22 @@ final class PlanAssembler {
     private static final Map<String, GridLine.Axis> AXES = ordered("x", GridLine.Axis.X, "y", GridLine.Axis.Y);
     private static final Map<String, Boolean> PARTITION_AS_DEAD = ordered("live", false, "dead", true);
     private static final Map<String, Boolean> GIRDER_AREA_DELIVERED = ordered("delivered", true, "half-bay", false);
+    /** A roof's ceiling as the file writes it (IBC Table 1604.3 roof rows). */
+    private static final Map<String, RoofCeiling> CEILINGS = ordered("plaster", RoofCeiling.PLASTER, "non-plaster",
+            RoofCeiling.NON_PLASTER, "none", RoofCeiling.NONE);
+    /** The ceilings the roof layouts of the file set, by floor id. */
+    private final Map<String, RoofCeiling> roofCeilings = new java.util.LinkedHashMap<>();
+
+    /** The file's word for a roof ceiling. */
+    static String ceilingKey(RoofCeiling c) {
+        for (Map.Entry<String, RoofCeiling> e : CEILINGS.entrySet()) {
+            if (e.getValue() == c) {
+                return e.getKey();
+            }
+        }
+        throw new IllegalArgumentException(String.valueOf(c));
+    }
+
     private static final Map<String, Boolean> DEFLECTION_LIVE_REDUCED = ordered("unreduced", false, "reduced", true);
     private static final Map<String, LiveLoadUse> USES = ordered("ordinary", LiveLoadUse.ORDINARY, "assembly",
             LiveLoadUse.ASSEMBLY, "garage", LiveLoadUse.GARAGE, "storage-light", LiveLoadUse.STORAGE_LIGHT, "storage-heavy",
@@ -102,6 +119,9 @@ final class PlanAssembler {
         List<GridLine> grid = grid(d.grid());
         List<Level> levels = levels(d.levels());
         List<Floor> floors = floors(d.floors());
+        if (!roofCeilings.isEmpty()) {
+            settings = settings.withRoofCeilings(roofCeilings);
+        }
         List<Column> columns = columns(d.columns());
         checkLevelFloors(d.levels(), d.floors());
         checkTopLevels(d.columns(), d.levels());
@@ -391,6 +411,16 @@ final class PlanAssembler {
                 }
             }
             Polygon slab = f.slabEdge() == null ? null : polygon(f.slabEdge(), p + "/slabEdge", id, "slabEdge");
+            if (f.ceiling() != null) {
+                RoofCeiling c = choice(f.ceiling(), p + "/ceiling", id, "ceiling", CEILINGS, null);
+                if (f.roof() == null || !f.roof()) {
+                    problems.error("bad-value", p + "/ceiling", id, "ceiling: \"" + ShapeCheck.clip(f.ceiling()) + "\" is"
+                            + " given on floor \"" + id + "\", which is not a roof; the ceiling chooses the deflection limits"
+                            + " of roof members (IBC Table 1604.3): set \"roof\": true, or leave the ceiling out");
+                } else if (c != null) {
+                    roofCeilings.put(id, c);
+                }
+            }
             FloorIds ids = new FloorIds(id);
             List<Deck> decks = items(f.decks(), p + "/decks", ids, DeckDoc::id, this::deck);
             List<Member> members = items(f.members(), p + "/members", ids, MemberDoc::id, this::member);

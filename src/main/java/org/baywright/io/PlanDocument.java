@@ -59,7 +59,7 @@ final class PlanDocument {
             @Required @QuantityOf(Dimension.LENGTH) String storeyHeight, @Required String floor) {
     }
 
-    record FloorDoc(@Required String id, String name, Boolean roof,
+    record FloorDoc(@Required String id, String name, Boolean roof, String ceiling,
             @Required @QuantityOf(Dimension.LENGTH) List<List<String>> slabEdge, List<DeckDoc> decks,
             List<MemberDoc> members, List<InfillDoc> infills, List<OpeningDoc> openings, List<AreaLoadDoc> areaLoads,
             List<LineLoadDoc> lineLoads, List<PointLoadDoc> pointLoads) {

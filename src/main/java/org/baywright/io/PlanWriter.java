@@ -24,6 +24,7 @@ import org.baywright.plan.Column;
 import org.baywright.plan.Deck;
 import org.baywright.plan.DesignSettings;
 import org.baywright.plan.Floor;
+import org.baywright.plan.RoofCeiling;
 import org.baywright.plan.GridLine;
 import org.baywright.plan.Infill;
 import org.baywright.plan.Level;
@@ -62,7 +63,7 @@ final class PlanWriter {
     private PlanDoc plan(Plan p) {
         return new PlanDoc(PlanFiles.FORMAT, PlanFiles.VERSION, p.name(), p.notes().isEmpty() ? null : p.notes(), p.units(),
                 settings(p.settings()),
-                map(p.grid(), this::gridLine), map(p.levels(), this::level), map(p.floors(), this::floor),
+                map(p.grid(), this::gridLine), map(p.levels(), this::level), map(p.floors(), f -> floor(f, p.settings())),
                 map(p.columns(), this::column));
     }
 
@@ -84,8 +85,11 @@ final class PlanWriter {
         return new LevelDoc(l.name(), length(l.elevation()), length(l.storeyHeight()), l.floor());
     }
 
-    private FloorDoc floor(Floor f) {
-        return new FloorDoc(f.id(), f.name(), f.roof(), polygon(f.slabEdge()), map(f.decks(), this::deck),
+    private FloorDoc floor(Floor f, DesignSettings s) {
+        // a roof's ceiling only when the plan sets one (a roof without it reads as the default)
+        RoofCeiling ceiling = f.roof() ? s.roofCeilings().get(f.id()) : null;
+        return new FloorDoc(f.id(), f.name(), f.roof(), ceiling == null ? null : PlanAssembler.ceilingKey(ceiling),
+                polygon(f.slabEdge()), map(f.decks(), this::deck),
                 map(f.members(), this::member), map(f.infills(), this::infill), map(f.openings(), this::opening),
                 map(f.areaLoads(), this::areaLoad), map(f.lineLoads(), this::lineLoad), map(f.pointLoads(), this::pointLoad));
     }

@@ -1,6 +1,8 @@
 package org.baywright.plan;
 
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
  * The design basis of a plan.
@@ -21,15 +23,46 @@ import java.util.List;
  * @param catalog catalog file, or empty for the built-in W shapes
  * @param deflectionLiveReduced check deflection under the live load as reduced for strength (true) or
  *     unreduced (false, the default: common practice checks serviceability under unreduced live load)
+ * @param roofCeilings what the members of each roof floor layout carry below them, by floor id (IBC Table
+ *     1604.3 roof rows); a roof layout not listed takes {@link RoofCeiling#DEFAULT}
  */
 public record DesignSettings(String method, double fy, double liveDeflection, double totalDeflection,
         List<String> beamSeries, List<String> girderSeries, List<String> columnSeries, double maxBeamDepth,
         int spliceEvery, boolean liveLoadReduction, boolean partitionAsDead, boolean girderAreaDelivered,
-        String catalog, boolean deflectionLiveReduced) {
+        String catalog, boolean deflectionLiveReduced, Map<String, RoofCeiling> roofCeilings) {
     public DesignSettings {
         beamSeries = List.copyOf(beamSeries);
         girderSeries = List.copyOf(girderSeries);
         columnSeries = List.copyOf(columnSeries);
+        roofCeilings = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(roofCeilings));
+    }
+
+    /** The settings with every roof at the default ceiling ({@link RoofCeiling#DEFAULT}). */
+    public DesignSettings(String method, double fy, double liveDeflection, double totalDeflection, List<String> beamSeries,
+            List<String> girderSeries, List<String> columnSeries, double maxBeamDepth, int spliceEvery,
+            boolean liveLoadReduction, boolean partitionAsDead, boolean girderAreaDelivered, String catalog,
+            boolean deflectionLiveReduced) {
+        this(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries, maxBeamDepth, spliceEvery,
+                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, Map.of());
+    }
+
+    /** What the members of roof floor layout {@code floorId} carry below them: as set, else the default. */
+    public RoofCeiling roofCeiling(String floorId) {
+        return roofCeilings.getOrDefault(floorId, RoofCeiling.DEFAULT);
+    }
+
+    /** The same settings with the ceiling under the members of roof floor layout {@code floorId}. */
+    public DesignSettings withRoofCeiling(String floorId, RoofCeiling ceiling) {
+        Map<String, RoofCeiling> m = new LinkedHashMap<>(roofCeilings);
+        m.put(floorId, ceiling);
+        return withRoofCeilings(m);
+    }
+
+    /** The same settings with these roof ceilings, by floor id. */
+    public DesignSettings withRoofCeilings(Map<String, RoofCeiling> ceilings) {
+        return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced,
+                ceilings);
     }
 
     /** The settings with deflection checked under unreduced live load (the default). */
@@ -49,43 +82,43 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
     /** The same settings with another design method ("lrfd" or "asd"). */
     public DesignSettings withMethod(String newMethod) {
         return new DesignSettings(newMethod, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings);
     }
 
     /** The same settings with another yield stress, Pa. */
     public DesignSettings withFy(double newFy) {
         return new DesignSettings(method, newFy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings);
     }
 
     /** The same settings with other deflection limits (span ratios, 0 = off). */
     public DesignSettings withDeflection(double live, double total) {
         return new DesignSettings(method, fy, live, total, beamSeries, girderSeries, columnSeries, maxBeamDepth, spliceEvery,
-                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
+                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings);
     }
 
     /** The same settings with other series allowed for beams and for girders (empty = all). */
     public DesignSettings withBeamSeries(List<String> beams, List<String> girders) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beams, girders, columnSeries, maxBeamDepth,
-                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings);
     }
 
     /** The same settings with other series allowed for columns. */
     public DesignSettings withColumnSeries(List<String> series) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, series, maxBeamDepth,
-                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings);
     }
 
     /** The same settings with another depth limit for beams and girders, m (0 = none). */
     public DesignSettings withMaxBeamDepth(double depth) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries, depth,
-                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings);
     }
 
     /** The same settings with column splices every {@code levels} levels. */
     public DesignSettings withSpliceEvery(int levels) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, levels, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
+                maxBeamDepth, levels, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings);
     }
 
     /**
@@ -97,7 +130,7 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
      */
     public DesignSettings withLiveLoad(boolean reduce, boolean partitionsAsDead, boolean girderDelivered) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, reduce, partitionsAsDead, girderDelivered, catalog, deflectionLiveReduced);
+                maxBeamDepth, spliceEvery, reduce, partitionsAsDead, girderDelivered, catalog, deflectionLiveReduced, roofCeilings);
     }
 
     /**
@@ -105,12 +138,12 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
      */
     public DesignSettings withDeflectionLiveReduced(boolean reduced) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, reduced);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, reduced, roofCeilings);
     }
 
     /** The same settings with another catalog file (empty: the built-in W shapes). */
     public DesignSettings withCatalog(String file) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, file, deflectionLiveReduced);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, file, deflectionLiveReduced, roofCeilings);
     }
 }

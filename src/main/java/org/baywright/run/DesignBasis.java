@@ -2,8 +2,11 @@ package org.baywright.run;
 
 import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import org.baywright.catalog.Catalog;
 import org.baywright.catalog.CatalogException;
@@ -16,8 +19,10 @@ import org.baywright.design.Steel;
 import org.baywright.load.DesignMethod;
 import org.baywright.load.LiveLoadRules;
 import org.baywright.plan.DesignSettings;
+import org.baywright.plan.Floor;
 import org.baywright.plan.Plan;
 import org.baywright.plan.Problem;
+import org.baywright.plan.RoofCeiling;
 import org.baywright.takedown.ColumnLines;
 import org.baywright.takedown.FloorRules;
 import org.baywright.units.UnitSystem;
@@ -33,7 +38,10 @@ import org.baywright.units.UnitSystem;
  *     stopped before sizing)
  * @param catalogFile the catalog file the settings name, empty for the built-in W shapes
  * @param units the plan's unit system for output; US when its text names none
- * @param deflection the deflection limits of beams and girders (project criteria)
+ * @param deflection the deflection limits of floor beams and girders (project criteria)
+ * @param roofDeflection the deflection limits of the members of each roof floor layout, by floor id: the
+ *     IBC Table 1604.3 roof row of the ceiling the plan sets for it, with the checks the plan turns off
+ *     turned off
  * @param liveLoad how live load is reduced and classed
  * @param beams the sections a beam may be (series, depth limit)
  * @param girders the sections a girder may be
@@ -42,11 +50,12 @@ import org.baywright.units.UnitSystem;
  */
 public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, String catalogFile, UnitSystem units,
         DeflectionLimits deflection, LiveLoadRules liveLoad, SearchFilter beams, SearchFilter girders,
-        List<String> columnSeries, int spliceEvery) {
+        List<String> columnSeries, int spliceEvery, Map<String, DeflectionLimits> roofDeflection) {
 
     public DesignBasis {
         columnSeries = List.copyOf(columnSeries);
         catalogFile = catalogFile == null ? "" : catalogFile;
+        roofDeflection = Collections.unmodifiableMap(new LinkedHashMap<>(roofDeflection));
     }
 
     /** A catalog read for a basis, or the located problem of a catalog that cannot be read. */
@@ -68,7 +77,41 @@ public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, Str
                 new DeflectionLimits(s.liveDeflection(), s.totalDeflection()), new LiveLoadRules(s.liveLoadReduction(), s.partitionAsDead(), s.girderAreaDelivered(),
                         s.deflectionLiveReduced()),
                 filter(s.beamSeries(), s.maxBeamDepth()), filter(s.girderSeries(), s.maxBeamDepth()), s.columnSeries(),
-                s.spliceEvery());
+                s.spliceEvery(), roofDeflection(plan));
+    }
+
+    /** The deflection limits of the members of every roof layout of a plan, by floor id. */
+    private static Map<String, DeflectionLimits> roofDeflection(Plan plan) {
+        DesignSettings s = plan.settings();
+        DeflectionLimits settings = new DeflectionLimits(s.liveDeflection(), s.totalDeflection());
+        Map<String, DeflectionLimits> out = new LinkedHashMap<>();
+        for (Floor f : plan.floors()) {
+            if (f.roof()) {
+                out.put(f.id(), roofRow(s.roofCeiling(f.id())).withChecksOffAs(settings));
+            }
+        }
+        return out;
+    }
+
+    /** The row of IBC Table 1604.3 for roof members carrying {@code ceiling}. */
+    public static DeflectionLimits roofRow(RoofCeiling ceiling) {
+        return switch (ceiling) {
+            case PLASTER -> DeflectionLimits.ROOF_PLASTER_CEILING;
+            case NON_PLASTER -> DeflectionLimits.ROOF_NON_PLASTER_CEILING;
+            case NONE -> DeflectionLimits.ROOF_NO_CEILING;
+        };
+    }
+
+    /**
+     * The deflection limits of the members of a floor layout: the roof row of its ceiling for a roof
+     * (the default ceiling for a roof layout this basis was not made with), else the floor limits.
+     */
+    public DeflectionLimits deflectionOf(Floor floor) {
+        if (!floor.roof()) {
+            return deflection;
+        }
+        DeflectionLimits r = roofDeflection.get(floor.id());
+        return r != null ? r : roofRow(RoofCeiling.DEFAULT).withChecksOffAs(deflection);
     }
 
     /** The design method a plan's settings name: LRFD when they name none. */
@@ -121,12 +164,17 @@ public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, Str
     /** The same basis with another catalog (e.g. one a command line names). */
     public DesignBasis withCatalog(Catalog other) {
         return new DesignBasis(method, steel, other, catalogFile, units, deflection, liveLoad, beams, girders, columnSeries,
-                spliceEvery);
+                spliceEvery, roofDeflection);
     }
 
-    /** What the design of a floor layout reads from the basis (besides the catalog). */
+    /** What the design of a floor (not roof) layout reads from the basis (besides the catalog). */
     public FloorRules floorRules() {
         return new FloorRules(method, steel, deflection, beams, girders, liveLoad, units);
+    }
+
+    /** What the design of {@code floor} reads from the basis: its own deflection limits (roof rows for a roof). */
+    public FloorRules floorRules(Floor floor) {
+        return new FloorRules(method, steel, deflectionOf(floor), beams, girders, liveLoad, units);
     }
 
     /** The designer of column tiers: the catalog's non-slender shapes of the allowed series. */

@@ -63,13 +63,16 @@ public final class PlanRun {
             throw new IllegalArgumentException("a run needs the catalog of its design basis; this basis has none");
         }
         long t0 = System.nanoTime();
-        FloorRules rules = basis.floorRules();
         Searches searches = new Searches(basis.catalog());
         FloorCache cache = reuse != null && reuse.catalog() == basis.catalog() ? reuse : null;
         ExpandedPlan expanded = ExpandedPlan.of(plan);
         List<FloorDesign> floors = expanded.floors().parallelStream()
-                .map(f -> cache == null ? designFloor(f, rules, searches)
-                        : cache.get(f.key(rules), () -> designFloor(f, rules, searches)))
+                .map(f -> {
+                    // each layout with its own deflection limits: the roof rows of IBC Table 1604.3 on a roof
+                    FloorRules rules = basis.floorRules(f.floor());
+                    return cache == null ? designFloor(f, rules, searches)
+                            : cache.get(f.key(rules), () -> designFloor(f, rules, searches));
+                })
                 .toList();
         List<LevelDesign> levels = expanded.withDesigns(floors);
         ColumnLines columns = ColumnLines.design(plan, levels, basis.columnDesigner(), basis.columnRules());

@@ -161,9 +161,37 @@ public enum UnitSystem {
         return grouped(areaLoad().fromSi(pascals), this == US ? 0 : 2) + " " + areaLoad().symbol();
     }
 
-    /** A force as a message prints it: kip or kN to 0.1, grouped ({@code 3,709.7 kip}). */
+    /**
+     * A force as a message prints it, by the rule of {@link #forceNumber}: {@code 3,709.7 kip},
+     * {@code 6.30 kip}.
+     */
     public String forceText(double newtons) {
-        return grouped(force.fromSi(newtons), 1) + " " + force.symbol();
+        return forceNumber(newtons) + " " + force.symbol();
+    }
+
+    /**
+     * A force in kip or kN as every report prints it (tables, sheets, drawing tags, messages): the one
+     * rule of {@link #threeFigures}, so "D 6.30, L 5.69" and never "D 6.3, L 5.688".
+     */
+    public String forceNumber(double newtons) {
+        return threeFigures(force.fromSi(newtons));
+    }
+
+    /**
+     * A number to three significant figures with at least one decimal, zeros kept and thousands grouped:
+     * 6.30, 5.69, 0.0457, 12.3, 123.4, 3,709.7. Three figures are what published tables of forces carry
+     * (the AISC Manual's tables round to three significant figures); the decimal keeps a column of
+     * values readable as forces rather than counts.
+     */
+    public static String threeFigures(double v) {
+        if (!Double.isFinite(v)) {
+            return String.valueOf(v);
+        }
+        if (v == 0) {
+            return "0.0";
+        }
+        int scale = new java.math.BigDecimal(v).round(new java.math.MathContext(3)).scale();
+        return grouped(v, Math.max(1, scale));
     }
 
     /**

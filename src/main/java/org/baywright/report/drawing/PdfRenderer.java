@@ -63,6 +63,36 @@ public final class PdfRenderer {
         }
     }
 
+    /**
+     * Draws {@code d} on a page of another document: its whole sheet scaled by {@code scale} with the
+     * sheet's lower-left corner at ({@code x}, {@code y}) points. The calculation package prints each
+     * level's framing plan this way, from the same primitives as the exported drawing.
+     *
+     * @param fonts the drawing fonts loaded into that document ({@link #fonts(PDDocument)})
+     */
+    public static void drawOn(PDPageContentStream cs, FramingPlanDrawing d, float x, float y, float scale, PDType0Font[] fonts)
+            throws IOException {
+        cs.saveGraphicsState();
+        cs.transform(new Matrix(scale, 0, 0, scale, x, y));
+        cs.setLineCapStyle(0);
+        cs.setLineJoinStyle(1);
+        for (Primitive p : d.primitives()) {
+            draw(cs, d, p, fonts[0], fonts[1]);
+        }
+        cs.restoreGraphicsState();
+    }
+
+    /** The drawing fonts (regular, bold) loaded once into {@code doc}, embedded as subsets. */
+    public static PDType0Font[] fonts(PDDocument doc) throws IOException {
+        return new PDType0Font[] {PDType0Font.load(doc, new ByteArrayInputStream(DrawingFonts.bytes(false)), true),
+            PDType0Font.load(doc, new ByteArrayInputStream(DrawingFonts.bytes(true)), true)};
+    }
+
+    /** Sheet width or height in points. */
+    public static float points(double mm) {
+        return pt(mm);
+    }
+
     private static float pt(double mm) {
         return (float) (mm * PT_PER_MM);
     }

@@ -907,9 +907,9 @@ public final class PlanPicture {
         return b.toString();
     }
 
+    /** A force in a tag: the reports' one rule ({@link UnitSystem#forceNumber}). */
     private String forceText(double newtons) {
-        double v = units.force().fromSi(newtons);
-        return Math.abs(v) >= 99.95 ? String.format(Locale.ROOT, "%.0f", v) : String.format(Locale.ROOT, "%.1f", v);
+        return units.forceNumber(newtons);
     }
 
     private String forceSuffix() {

@@ -77,7 +77,9 @@ public final class CalculationPackage {
         CheckerPages.statements(cx);
         int[] sheets = {0, 0};
         if (run.takedown() != null) {
+            PlanPages.write(cx);
             Summaries.loads(cx);
+            LoadDerivation.write(cx);
             Summaries.takedown(cx);
             sheets = MemberSheets.write(cx);
             CheckerPages.endReactions(cx);

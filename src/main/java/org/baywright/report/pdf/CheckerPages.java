@@ -54,7 +54,9 @@ final class CheckerPages {
                         : ll.deflectionReduced() ? "as reduced for the member's strength design (plan setting)"
                                 : "unreduced (common practice for serviceability; the strength checks use the reduced live load)")
                 + ". Limits: live load " + FrontMatter.limit(st.liveDeflection()) + ", total "
-                + FrontMatter.limit(st.totalDeflection()) + ".");
+                + FrontMatter.limit(st.totalDeflection()) + (cx.basis().roofDeflection().isEmpty() ? "."
+                        : " for floor members; roof members by the roof rows of IBC Table 1604.3: "
+                                + FrontMatter.roofDeflection(cx) + "."));
         f.bullet(f.body, "Deck: its span direction is taken from the plan; the deck itself (its span between the members"
                 + " that carry it, overhangs, and its strength as a form and as a floor) is chosen and checked by the"
                 + " engineer of record from the deck maker's published tables.");
@@ -159,6 +161,6 @@ final class CheckerPages {
     }
 
     private static String force(double newtons, UnitSystem us) {
-        return newtons == 0 ? "–" : Fmt.fixed(newtons, Quantity.FORCE, us, 1);
+        return newtons == 0 ? "–" : us.forceNumber(newtons);
     }
 }

@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import org.baywright.calc.Caution;
 import org.baywright.calc.Quantity;
 import org.baywright.design.DeflectionLimits;
@@ -115,6 +116,9 @@ final class FrontMatter {
         t.row("Strength combinations", combos.toString(), ASCE + (m == DesignMethod.LRFD ? " §2.3.1" : " §2.4.1"));
         t.row("Live-load reduction", liveLoadReduction(b), ASCE + " §4.7, §4.8");
         t.row("Deflection criteria", deflection(b), deflectionSource(b));
+        if (!b.roofDeflection().isEmpty()) {
+            t.row("Roof deflection criteria", roofDeflection(cx), DeflectionLimits.SOURCE + " (roof rows)");
+        }
         t.row("Steel", steel.name() + ", Fy = " + Fmt.v(steel.fy(), Quantity.STRESS, cx.us) + ", E = "
                 + Fmt.v(steel.e(), Quantity.STRESS, cx.us), AISC + " A3.1");
         t.row("Section catalog", cx.run.catalogName().isEmpty() ? "(none: the run stopped before sizing)" : cx.run.catalogName(),
@@ -151,6 +155,35 @@ final class FrontMatter {
                 : "project criteria (" + DeflectionLimits.SOURCE + " gives L/360 and L/240)";
     }
 
+    /**
+     * The limits of each roof layout: "layout "roof" (Roof): roof members supporting a non-plaster ceiling
+     * (default), L/240 under Lr, S or L, L/180 total".
+     */
+    static String roofDeflection(Context cx) {
+        List<String> parts = new ArrayList<>();
+        DesignSettings st = cx.run.plan().settings();
+        for (Map.Entry<String, DeflectionLimits> e : cx.basis().roofDeflection().entrySet()) {
+            DeflectionLimits d = e.getValue();
+            boolean set = st.roofCeilings().containsKey(e.getKey());
+            parts.add("layout " + Summaries.floorLabel(cx, e.getKey()) + ": " + d.row() + (set ? " (plan setting)"
+                    : " (the default: a suspended non-plaster ceiling is what a roof usually carries, common practice)")
+                    + ", live load (Lr, S or L) " + limit(d.live()) + ", dead + live " + limit(d.total()));
+        }
+        return String.join("; ", parts);
+    }
+
+    /**
+     * The footnote of IBC Table 1604.3 on the dead load of steel members, as the user's choice. Its text
+     * is not quoted: the project's reference gives the table's rows, not that footnote's words.
+     */
+    static String steelDeadLoadNote(DesignBasis b) {
+        return "IBC Table 1604.3 has a footnote on the dead load of steel members in the dead + live check (from memory,"
+                + " not quoted: it lets that dead load be taken as zero; confirm the wording in the edition adopted). Applying"
+                + " it is the engineer's choice: a total-load limit of 0 in the plan's settings turns the dead + live check"
+                + " off for floor and roof members alike. In this run the dead + live check is "
+                + (b.deflection().total() == 0 ? "off (the footnote applied)." : "on (the footnote not applied).");
+    }
+
     static String limit(double n) {
         if (n == 0) {
             return "not checked";
@@ -173,7 +206,9 @@ final class FrontMatter {
         s.row(ASCE, ASCE_TITLE, "load combinations (" + (m == DesignMethod.LRFD ? "§2.3.1" : "§2.4.1")
                 + "), live-load reduction §4.7, roof live load §4.8, partition allowance §4.3.2, K_LL Table 4.7-1");
         s.row("IBC Table 1604.3", "International Building Code, deflection limits (edition adopted for the project)",
-                "the default serviceability criteria L/360 and L/240 for floor members");
+                "the default serviceability criteria L/360 and L/240 for floor members; for roof members the roof rows"
+                        + " by the ceiling they carry (plaster or stucco L/360 and L/240, non-plaster L/240 and L/180,"
+                        + " none L/180 and L/120)");
         s.row("Catalog", cx.run.catalogName(), "section dimensions and properties (tabulated values)");
         s.draw(f);
 
@@ -196,8 +231,11 @@ final class FrontMatter {
         for (LoadCombination combo : Combinations.gravity(m, EnumSet.allOf(LoadCase.class))) {
             c.row(combo.name(), combo.reference(), "strength of members and columns");
         }
-        c.row("L (+ Lr, S where present)", DeflectionLimits.SOURCE, "live-load deflection, limit " + limit(b.deflection().live()));
-        c.row("D + L (+ Lr, S) + own weight", DeflectionLimits.SOURCE, "total-load deflection, limit " + limit(b.deflection().total()));
+        String roofs = b.roofDeflection().isEmpty() ? "" : " (floor members; roof members: their roof row)";
+        c.row("L (+ Lr, S where present)", DeflectionLimits.SOURCE, "live-load deflection, limit " + limit(b.deflection().live())
+                + roofs);
+        c.row("D + L (+ Lr, S) + own weight", DeflectionLimits.SOURCE, "total-load deflection, limit "
+                + limit(b.deflection().total()) + roofs);
         c.draw(f);
         f.paragraph(f.small, "Each member is checked only under the combinations that matter for the cases it carries (a"
                 + " member with D and L only gets " + (m == DesignMethod.LRFD ? "1.4D and 1.2D + 1.6L" : "D and D + L")
@@ -239,6 +277,12 @@ final class FrontMatter {
                         ? "live load reduced as for strength (ASCE 7-16 §4.7, §4.8; plan setting deflectionLiveLoad \"reduced\")."
                         : "live load unreduced (common practice: serviceability is checked under the full live load; plan"
                                 + " setting deflectionLiveLoad \"unreduced\", the default)."));
+        if (!b.roofDeflection().isEmpty()) {
+            f.paragraph(f.body, "Roof members take the roof rows of " + DeflectionLimits.SOURCE + " by the ceiling they carry"
+                    + " (a plan setting per roof layout; the limit under Lr and under S is the same, so one live-load check"
+                    + " covers both): " + roofDeflection(cx) + ".");
+        }
+        f.paragraph(f.small, steelDeadLoadNote(b));
 
         f.heading2("How members and columns are designed", 40);
         f.bullet(f.body, "Every beam and girder is a simple span. Its statics (reactions, shear, moment, deflection) are"

@@ -15,6 +15,7 @@ import org.baywright.calc.CalcLine;
 import org.baywright.calc.Quantity;
 import org.baywright.design.BeamCriteria;
 import org.baywright.design.BeamDesign;
+import org.baywright.design.DeflectionLimits;
 import org.baywright.design.BeamLoads;
 import org.baywright.design.Check;
 import org.baywright.design.MemberStatus;
@@ -127,7 +128,8 @@ final class MemberSheets {
         facts.add(new String[] {"Tributary area", Fmt.v(m.tributaryArea(), Quantity.FLOOR_AREA, us) + " of deck carried directly"});
         facts.add(new String[] {"Live reduction", liveReduction(m, us)});
         facts.add(new String[] {"Deflection limits", FrontMatter.limit(cr.deflection().live()) + " live, "
-                + FrontMatter.limit(cr.deflection().total()) + " total"});
+                + FrontMatter.limit(cr.deflection().total()) + " total" + (cr.deflection().row().isEmpty() ? ""
+                        : " (" + DeflectionLimits.SOURCE + ", " + cr.deflection().row() + ")")});
         facts.add(new String[] {"Own weight", cr.selfWeight() ? "added to D by the check (line wsw)" : "not added (taken as included in D)"});
         f.pairs2(facts, 74);
         f.gap(2);
@@ -190,7 +192,7 @@ final class MemberSheets {
     }
 
     private static String n(double v, UnitSystem us) {
-        return v == 0 ? "–" : Fmt.n(v, Quantity.FORCE, us);
+        return v == 0 ? "–" : us.forceNumber(v);
     }
 
     // ---- shear and moment --------------------------------------------------------------------

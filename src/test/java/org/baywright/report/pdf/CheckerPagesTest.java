@@ -73,7 +73,7 @@ class CheckerPagesTest {
         MemberResult first = run.takedown().members().get(typical).stream().filter(m -> m.design() != null)
                 .min(java.util.Comparator.comparing(MemberResult::id)).orElseThrow();
         CheckerPages.EndReaction r = CheckerPages.reactions(List.of(first), DesignMethod.LRFD).get(0);
-        String ru = String.format(java.util.Locale.ROOT, "%,.1f", r.factored() / Units.KIPS.toSi(1));
+        String ru = UnitSystem.US.forceNumber(r.factored());
         String text = all;
         assertAll(
                 () -> assertTrue(text.contains("End reactions for connection design"), "the part"),

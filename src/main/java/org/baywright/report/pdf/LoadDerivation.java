@@ -161,6 +161,8 @@ final class LoadDerivation {
             case ORDINARY -> "";
             case ASSEMBLY -> "; assembly use: not reduced at 100 psf or less (§4.7.5)";
             case GARAGE -> "; garage: not reduced, 20 % at most for members supporting two floors or more (§4.7.4)";
+            case STORAGE_LIGHT, STORAGE_HEAVY -> "; storage: a heavy live load whatever its value, not reduced on one floor,"
+                    + " 20 % at most for members supporting two floors or more (§4.7.3)";
             case NOT_REDUCIBLE -> "; not reduced (plan setting)";
         };
         if (rows.isEmpty()) {
@@ -174,14 +176,9 @@ final class LoadDerivation {
         return FrontMatter.ASCE + " Table 4.3-1: " + String.join("; ", names) + reduction;
     }
 
-    /** The use as the trade says it. */
+    /** The use as the trade says it (the words the editor's Use list shows). */
     static String useLabel(LiveLoadUse use) {
-        return switch (use) {
-            case ORDINARY -> "ordinary (reducible)";
-            case ASSEMBLY -> "assembly";
-            case GARAGE -> "passenger-vehicle garage";
-            case NOT_REDUCIBLE -> "not reducible";
-        };
+        return use.words();
     }
 
     private static double psf(double pascals) {

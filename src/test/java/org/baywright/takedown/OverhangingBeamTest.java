@@ -1,0 +1,82 @@
+package org.baywright.takedown;
+
+import static org.junit.jupiter.api.Assertions.assertAll;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.baywright.analysis.DistributedLoad;
+import org.baywright.analysis.OverhangSpan;
+import org.baywright.catalog.CatalogFile;
+import org.baywright.io.PlanFiles;
+import org.baywright.plan.Problem;
+import org.baywright.run.PlanRun;
+import org.baywright.run.RunResult;
+import org.baywright.units.Units;
+import org.junit.jupiter.api.Test;
+
+/**
+ * A beam drawn past its support: one bay 30 ft × 30 ft between girders on grid 1 (y = 0) and grid 2
+ * (y = 30 ft), with the slab running 6 ft south of grid 1. Three north–south beams run from grid 2 to
+ * the slab edge at y = −6 ft: on A and B they pass over the columns, in the middle (x = 15 ft) over the
+ * girder G-1. The deck spans east–west onto the beams, so the middle one carries 15 ft of it, 50 psf
+ * dead, nothing else.
+ *
+ * <p>Expected (COMPUTED, AISC Manual Table 3-23, beam overhanging one support, uniform load on the
+ * whole member, from memory): with w the dead load plus the beam's own weight, l = 30 ft and c = 6 ft,
+ * the girder takes R2 = w/(2l)·(l + c)² = 0.72·w·(36 ft), more than the 0.5 + 6/36 of a member's load
+ * a simple span would hand it, and the far support R1 = w/(2l)·(l² − c²); the sum is the load (the run's
+ * equilibrium check holds). Before overhangs were recognised the beam had no support at its south
+ * end ("unsupported-member").
+ */
+class OverhangingBeamTest {
+    private static final String PLAN = """
+            {"format": "baywright-plan", "version": 1, "name": "overhang", "units": "us",
+             "grid": [{"label": "A", "x": "0ft"}, {"label": "B", "x": "30ft"}, {"label": "1", "y": "0ft"}, {"label": "2", "y": "30ft"}],
+             "levels": [{"name": "Level 2", "elevation": "14ft", "storeyHeight": "14ft", "floor": "f"}],
+             "floors": [{"id": "f", "name": "Floor", "roof": false,
+               "slabEdge": [["0ft", "-6ft"], ["30ft", "-6ft"], ["30ft", "30ft"], ["0ft", "30ft"]],
+               "decks": [{"id": "DK", "outline": [["0ft", "-6ft"], ["30ft", "-6ft"], ["30ft", "30ft"], ["0ft", "30ft"]], "spanAngle": 0}],
+               "members": [
+                 {"id": "G-1", "kind": "girder", "start": ["0ft", "0ft"], "end": ["30ft", "0ft"]},
+                 {"id": "G-2", "kind": "girder", "start": ["0ft", "30ft"], "end": ["30ft", "30ft"]},
+                 {"id": "B-A", "kind": "beam", "start": ["0ft", "30ft"], "end": ["0ft", "-6ft"]},
+                 {"id": "B-M", "kind": "beam", "start": ["15ft", "30ft"], "end": ["15ft", "-6ft"]},
+                 {"id": "B-B", "kind": "beam", "start": ["30ft", "30ft"], "end": ["30ft", "-6ft"]}],
+               "areaLoads": [{"id": "AL", "outline": [["0ft", "-6ft"], ["30ft", "-6ft"], ["30ft", "30ft"], ["0ft", "30ft"]],
+                 "dead": "50psf", "use": "ordinary"}]}],
+             "columns": [{"id": "C-A1", "at": ["0ft", "0ft"]}, {"id": "C-B1", "at": ["30ft", "0ft"]},
+               {"id": "C-A2", "at": ["0ft", "30ft"]}, {"id": "C-B2", "at": ["30ft", "30ft"]}]}
+            """;
+
+    @Test
+    void aBeamDrawnPastItsSupportOverhangsItAndItsGirderGetsTheLargerReaction() {
+        var read = PlanFiles.read(PLAN, "overhang.bay.json");
+        assertTrue(read.plan().isPresent(), () -> read.problems().toString());
+        RunResult run = PlanRun.run(read.plan().get(), CatalogFile.loadDefault());
+        List<MemberResult> members = run.takedown().members().get(run.takedown().levelFloors().get("Level 2"));
+        MemberResult b = members.stream().filter(m -> m.id().equals("B-M")).findFirst().orElseThrow();
+        MemberResult g = members.stream().filter(m -> m.id().equals("G-1")).findFirst().orElseThrow();
+        double ft = Units.FT_.toSi(1);
+        double w = Units.PSF.toSi(50) * 15 * ft + b.design().section().weight();
+        double l = 30 * ft;
+        double c = 6 * ft;
+        OverhangSpan statics = OverhangSpan.of(l + c, 0, l, List.of(DistributedLoad.full(l + c, w)));
+        int d = Component.D.ordinal();
+        assertAll(
+                () -> assertTrue(run.problems().stream().noneMatch(p -> p.kind().equals("unsupported-member")),
+                        () -> "no unsupported member: " + run.problems()),
+                () -> assertTrue(b.overhangs(), "B-M overhangs G-1"),
+                () -> assertEquals("member G-1 (passed over; the end overhangs it)", b.endSupport()),
+                () -> assertEquals(1, b.kll(), "K_LL = 1 for a cantilever beam (ASCE 7-16 Table 4.7-1)"),
+                () -> assertEquals(w / (2 * l) * (l + c) * (l + c), b.endReaction()[d], 1e-6, "R2 = w/(2l)·(l + c)²"),
+                () -> assertEquals(w / (2 * l) * (l * l - c * c), b.startReaction()[d], 1e-6, "R1 = w/(2l)·(l² − c²)"),
+                () -> assertEquals(statics.reactionB(), b.endReaction()[d], 1e-6),
+                () -> assertTrue(b.endReaction()[d] > w * (l + c) / 2, "larger than a simple span's half"),
+                () -> assertEquals(b.endReaction()[d] + g.design().section().weight() * l, g.startReaction()[d] + g.endReaction()[d],
+                        1e-6, "G-1 carries the overhanging beam's reaction (and its own weight)"),
+                () -> assertTrue(run.takedown().equilibrium().stream().allMatch(e -> e.holds()), "equilibrium"),
+                () -> assertTrue(run.problems().stream().noneMatch(p -> p.severity() == Problem.Severity.ERROR),
+                        () -> run.problems().toString()));
+    }
+}

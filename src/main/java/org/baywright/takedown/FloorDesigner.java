@@ -207,6 +207,7 @@ public final class FloorDesigner {
             // the same deck twice in the columns' A_T)
             double area = end == 0 ? h.delivered() * h.startShare() : h.delivered() * (1 - h.startShare());
             if (s.member() != null) {
+                rx = withoutUplift(r, s, rx);
                 incoming.computeIfAbsent(s.member(), k -> new ArrayList<>()).add(new Incoming(s.position(), rx, area, h.l0()));
             } else if (s.column() != null) {
                 double[] acc = columnLoads.computeIfAbsent(s.column(), k -> new double[NC]);
@@ -220,6 +221,28 @@ public final class FloorDesigner {
                 }
             }
         }
+    }
+
+    /**
+     * A reaction pulling up on the member that supports it (an overhanging member's far end): the beam
+     * designer takes downward loads only, so the upward part is not passed on and a located problem says
+     * so (the equilibrium check then shows the difference).
+     */
+    private double[] withoutUplift(MemberResult r, Support s, double[] rx) {
+        double[] out = null;
+        for (int c = 0; c < NC; c++) {
+            if (rx[c] < 0) {
+                out = out == null ? rx.clone() : out;
+                out[c] = 0;
+            }
+        }
+        if (out == null) {
+            return rx;
+        }
+        problems.add(new Problem(Problem.Severity.ERROR, "uplift-on-member", "floor " + floor.id(), r.id(), "member " + r.id()
+                + " pulls up on " + s.describe() + " (its overhang outweighs its backspan); an upward reaction on a member is"
+                + " not designed: support that end on a column or shorten the overhang", List.of(r.start(), r.end())));
+        return out;
     }
 
     private MemberResult notDesigned(Member m, Ends ends) {

@@ -32,14 +32,15 @@ import org.baywright.units.Units;
  *
  * <p>Harbourview Offices: 4 × 3 bays of 30 ft × 35 ft, beams north–south at no more than 10 ft;
  * Level 2 carries a file-storage zone (125 psf) in the north-east bay D–E/3–4; Levels 3 and 4 have a double-height
- * atrium open in bay B–C/2–3; a balcony overhangs the south face between grid lines B and D,
- * 8 ft deep at B tapering to 4 ft at D; cladding on every slab edge; the roof carries two rooftop
+ * atrium open in bay B–C/2–3; a balcony 6 ft deep overhangs the south face between grid lines B
+ * and D (it tapered from 8 ft at B to 4 ft at D until its framing was reworked: with beams square to
+ * grid 1, a sloping edge leaves slivers of deck past the beam tips); cladding on every slab edge; the roof carries two rooftop
  * units.
  *
  * <p>The balcony is framed with cantilevered beams and backspans: in bays B–C and C–D the north–south
  * beams of the bays 1–2 (on grid lines B, C, D and the infill lines at 10 ft) run from the grid-2
  * girders across grid 1 (the girders G-1-BC and G-1-CD, or the columns on B, C and D) to the balcony
- * edge, so each is a 35 ft backspan with an overhang of 4 to 8 ft. The balcony deck spans east–west
+ * edge, so each is a 35 ft backspan with a 6 ft overhang. The balcony deck spans east–west
  * between them and stops at the beams on B and D: it has no overhang of its own.
  */
 public final class HarbourviewDemo {
@@ -63,11 +64,11 @@ public final class HarbourviewDemo {
         Floor roof = base.floor("roof").orElseThrow();
 
         // slab edge with the balcony: south face between B (x = 30 ft) and D (x = 90 ft)
-        Polygon slab = new Polygon(List.of(new Point(0, 0), new Point(ft(30), 0), new Point(ft(30), ft(-8)),
-                new Point(ft(90), ft(-4)), new Point(ft(90), 0), new Point(ft(120), 0), new Point(ft(120), ft(105)),
+        Polygon slab = new Polygon(List.of(new Point(0, 0), new Point(ft(30), 0), new Point(ft(30), ft(-6)),
+                new Point(ft(90), ft(-6)), new Point(ft(90), 0), new Point(ft(120), 0), new Point(ft(120), ft(105)),
                 new Point(0, ft(105))));
         Polygon grid = Polygon.rectangle(0, 0, ft(120), ft(105));
-        Polygon balcony = new Polygon(List.of(new Point(ft(30), ft(-8)), new Point(ft(90), ft(-4)), new Point(ft(90), 0),
+        Polygon balcony = new Polygon(List.of(new Point(ft(30), ft(-6)), new Point(ft(90), ft(-6)), new Point(ft(90), 0),
                 new Point(ft(30), 0)));
         List<Deck> decks = List.of(new Deck("DK-main", grid, 0), new Deck("DK-balcony", balcony, 0));
         List<Point> perimeter = new ArrayList<>(slab.vertices());
@@ -80,8 +81,8 @@ public final class HarbourviewDemo {
         List<Member> roofMembers = balconyFraming(roof.members());
 
         // Level 2: file storage in bay D–E / 3–4 (light storage, ASCE 7-16 Table 4.3-1: 125 psf, no partitions)
-        Polygon officeL2 = new Polygon(List.of(new Point(0, 0), new Point(ft(30), 0), new Point(ft(30), ft(-8)),
-                new Point(ft(90), ft(-4)), new Point(ft(90), 0), new Point(ft(120), 0), new Point(ft(120), ft(70)),
+        Polygon officeL2 = new Polygon(List.of(new Point(0, 0), new Point(ft(30), 0), new Point(ft(30), ft(-6)),
+                new Point(ft(90), ft(-6)), new Point(ft(90), 0), new Point(ft(120), 0), new Point(ft(120), ft(70)),
                 new Point(ft(90), ft(70)), new Point(ft(90), ft(105)), new Point(0, ft(105))));
         AreaLoad storage = new AreaLoad("AL-storage", Polygon.rectangle(ft(90), ft(70), ft(120), ft(105)),
                 new LoadValues(psf(56), psf(10), psf(125), 0, 0, 0), LiveLoadUse.ORDINARY);
@@ -126,9 +127,9 @@ public final class HarbourviewDemo {
         return infills.stream().filter(i -> !BALCONY_BAYS.contains(i.id())).toList();
     }
 
-    /** y of the balcony edge at x (ft): 8 ft south of grid 1 at B (x = 30 ft), 4 ft at D (x = 90 ft). */
+    /** y of the balcony edge at x (ft): 6 ft south of grid 1 from B to D. */
     private static double balconyEdge(double xFt) {
-        return -8 + 4 * (xFt - 30) / 60;
+        return -6;
     }
 
     /**

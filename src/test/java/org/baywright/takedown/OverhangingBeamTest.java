@@ -50,6 +50,45 @@ class OverhangingBeamTest {
             """;
 
     @Test
+    void theFramingPlanMarksTheSupportPassedOverAndTheFreeEnd() {
+        var plan = PlanFiles.read(PLAN, "overhang.bay.json").plan().orElseThrow();
+        RunResult run = PlanRun.run(plan, CatalogFile.loadDefault());
+        var style = org.baywright.report.drawing.PlanPicture.Style.sheet(org.baywright.units.UnitSystem.US, 2.5,
+                null, org.baywright.load.DesignMethod.LRFD);
+        var prims = org.baywright.report.drawing.PlanPicture.forPlan(plan, "Level 2", run, style).build(0.05);
+        double ft = Units.FT_.toSi(1);
+        // a filled wedge with its point on the support passed over: (15 ft, 0) for B-M, the columns for B-A and B-B
+        long wedges = prims.stream().filter(p -> p instanceof org.baywright.report.drawing.Primitive.Path path
+                && path.points().size() == 3 && path.fill() != null).count();
+        boolean atGirder = prims.stream().anyMatch(p -> p instanceof org.baywright.report.drawing.Primitive.Path path
+                && path.points().size() == 3 && Math.abs(path.points().get(0).x() - 15 * ft) < 1e-9
+                && Math.abs(path.points().get(0).y()) < 1e-9);
+        // a bar across each free end, centred on the tip at y = -6 ft
+        long bars = prims.stream().filter(p -> p instanceof org.baywright.report.drawing.Primitive.Line l
+                && Math.abs(0.5 * (l.from().y() + l.to().y()) + 6 * ft) < 1e-9 && Math.abs(l.from().y() - l.to().y()) < 1e-9
+                && Math.abs(l.from().x() - l.to().x()) < 1.0).count();
+        assertAll(
+                () -> assertEquals(3, wedges, "one wedge per overhanging beam"),
+                () -> assertTrue(atGirder, "the wedge of B-M is where it passes over G-1"),
+                () -> assertTrue(bars >= 3, "a bar at each free end: " + bars));
+    }
+
+    @Test
+    void anOverhangThatLiftsTheMemberUnderItsFarEndIsAProblemNotACrash() {
+        // the middle beam starts on a girder 4 ft north of grid 1 and overhangs 6 ft: under its full load
+        // the far support is pulled up (R1 = w/(2l)·(l² − c²) < 0 for c > l, Table 3-23)
+        String plan = PLAN.replace("{\"id\": \"B-M\", \"kind\": \"beam\", \"start\": [\"15ft\", \"30ft\"]",
+                "{\"id\": \"G-H\", \"kind\": \"girder\", \"start\": [\"0ft\", \"4ft\"], \"end\": [\"30ft\", \"4ft\"]},"
+                        + " {\"id\": \"B-M\", \"kind\": \"beam\", \"start\": [\"15ft\", \"4ft\"]");
+        RunResult run = PlanRun.run(PlanFiles.read(plan, "uplift.bay.json").plan().orElseThrow(), CatalogFile.loadDefault());
+        assertAll(
+                () -> assertTrue(run.problems().stream().anyMatch(p -> p.kind().equals("uplift") && p.objectId().equals("B-M")),
+                        () -> run.problems().toString()),
+                () -> assertTrue(run.problems().stream().anyMatch(p -> p.kind().equals("uplift-on-member")
+                        && p.message().contains("member G-H")), () -> run.problems().toString()));
+    }
+
+    @Test
     void aBeamDrawnPastItsSupportOverhangsItAndItsGirderGetsTheLargerReaction() {
         var read = PlanFiles.read(PLAN, "overhang.bay.json");
         assertTrue(read.plan().isPresent(), () -> read.problems().toString());

@@ -53,6 +53,8 @@ public final class FloorDesigner {
     private final FloorRules rules;
     private final Searches searches;
     private final Map<String, List<Incoming>> incoming = new HashMap<>();
+    /** Upward reactions on a member, not designed for but passed through to its supports: {position, N per component}. */
+    private final Map<String, List<double[]>> uplifts = new HashMap<>();
     private final Map<String, double[]> columnLoads = new LinkedHashMap<>();
     private final Map<String, Double> columnArea = new LinkedHashMap<>();
     private final Map<String, double[]> columnL0 = new LinkedHashMap<>();
@@ -111,6 +113,7 @@ public final class FloorDesigner {
         Searches.Sized sized = size(m, reduction, loads, criteria);
         BeamDesign d = sized.design();
         MemberLoads.Reactions rx = loads.reactions(span, d.section());
+        passThrough(m, rx, 0, span);
         MemberTributary mt = trib.members().get(m.id());
         MemberResult r = new MemberResult(m.id(), floor.id(), m.kind(), m.start(), m.end(), span, d.status(), d,
                 loads.ownArea(), reduction.area(), reduction.kll(), reduction.ordinaryLive(), reduction.roofLive(), rx.start(), rx.end(),
@@ -135,6 +138,7 @@ public final class FloorDesigner {
         Searches.Sized sized = size(m, reduction, loads, criteria, a, b);
         BeamDesign d = sized.design();
         MemberLoads.Reactions rx = loads.reactions(span, d.section(), a, b);
+        passThrough(m, rx, a, b);
         Support sa = ends.free() == 0 ? ends.over() : ends.start();
         Support sb = ends.free() == 0 ? ends.end() : ends.over();
         if (d.section() != null) {
@@ -225,8 +229,9 @@ public final class FloorDesigner {
 
     /**
      * A reaction pulling up on the member that supports it (an overhanging member's far end): the beam
-     * designer takes downward loads only, so the upward part is not passed on and a located problem says
-     * so (the equilibrium check then shows the difference).
+     * designer takes downward loads only, so the upward part is left out of that member's design and
+     * passed straight through to its supports by the lever rule (equilibrium holds), and a located problem
+     * says it was not designed for.
      */
     private double[] withoutUplift(MemberResult r, Support s, double[] rx) {
         double[] out = null;
@@ -239,10 +244,27 @@ public final class FloorDesigner {
         if (out == null) {
             return rx;
         }
+        double[] up = new double[NC + 1];
+        up[0] = s.position();
+        for (int c = 0; c < NC; c++) {
+            up[c + 1] = rx[c] - out[c];
+        }
+        uplifts.computeIfAbsent(s.member(), k -> new ArrayList<>()).add(up);
         problems.add(new Problem(Problem.Severity.ERROR, "uplift-on-member", "floor " + floor.id(), r.id(), "member " + r.id()
                 + " pulls up on " + s.describe() + " (its overhang outweighs its backspan); an upward reaction on a member is"
                 + " not designed: support that end on a column or shorten the overhang", List.of(r.start(), r.end())));
         return out;
+    }
+
+    /** Adds the upward reactions received by {@code m} to its reactions at supports a and b, by the lever rule. */
+    private void passThrough(Member m, MemberLoads.Reactions rx, double a, double b) {
+        for (double[] up : uplifts.getOrDefault(m.id(), List.of())) {
+            double fb = Math.max(0, Math.min(1, (up[0] - a) / (b - a)));
+            for (int c = 0; c < NC; c++) {
+                rx.start()[c] += up[c + 1] * (1 - fb);
+                rx.end()[c] += up[c + 1] * fb;
+            }
+        }
     }
 
     private MemberResult notDesigned(Member m, Ends ends) {

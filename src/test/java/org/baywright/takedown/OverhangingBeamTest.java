@@ -85,7 +85,9 @@ class OverhangingBeamTest {
                 () -> assertTrue(run.problems().stream().anyMatch(p -> p.kind().equals("uplift") && p.objectId().equals("B-M")),
                         () -> run.problems().toString()),
                 () -> assertTrue(run.problems().stream().anyMatch(p -> p.kind().equals("uplift-on-member")
-                        && p.message().contains("member G-H")), () -> run.problems().toString()));
+                        && p.message().contains("member G-H")), () -> run.problems().toString()),
+                () -> assertTrue(run.takedown().equilibrium().stream().allMatch(e -> e.holds()),
+                        () -> "the uplift passes through G-H to its supports: " + run.takedown().equilibrium()));
     }
 
     @Test

@@ -20,11 +20,52 @@ public final class BeamLoads {
     private final double span;
     private final Map<LoadCase, SimpleSpan> cases;
     private final Map<LoadCase, SimpleSpan> deflectionCases;
+    /** The supports, m from the start: 0 and {@code span} for a simple span, else an overhanging member. */
+    private final double supportA;
+    private final double supportB;
 
     private BeamLoads(double span, Map<LoadCase, SimpleSpan> cases, Map<LoadCase, SimpleSpan> deflectionCases) {
+        this(span, cases, deflectionCases, 0, span);
+    }
+
+    private BeamLoads(double span, Map<LoadCase, SimpleSpan> cases, Map<LoadCase, SimpleSpan> deflectionCases,
+            double supportA, double supportB) {
         this.span = span;
         this.cases = cases;
         this.deflectionCases = deflectionCases;
+        this.supportA = supportA;
+        this.supportB = supportB;
+    }
+
+    /**
+     * Loads per case on a member of length {@code length} that overhangs its supports at {@code a} and
+     * {@code b} (m from its start, {@code 0 ≤ a < b ≤ length}, not both at the ends): designed by
+     * {@link OverhangDesigner}. The per-case {@link #of(LoadCase)} spans then only hold the loads; their
+     * statics are those of {@link org.baywright.analysis.OverhangSpan}, not of a simple span.
+     */
+    public static BeamLoads overhanging(double length, double a, double b,
+            Map<LoadCase, ? extends List<? extends SpanLoad>> loads) {
+        BeamLoads s = of(length, loads);
+        if (!(a >= 0 && a < b && b <= length) || (a == 0 && b == length)) {
+            throw new IllegalArgumentException("an overhanging member needs supports 0 ≤ a < b ≤ L, not both at its ends; were a = "
+                    + a + " m, b = " + b + " m, L = " + length + " m");
+        }
+        return new BeamLoads(length, s.cases, s.deflectionCases, a, b);
+    }
+
+    /** True when the member overhangs a support ({@link #overhanging}). */
+    public boolean isOverhanging() {
+        return supportA != 0 || supportB != span;
+    }
+
+    /** The first support, m from the start (0 for a simple span). */
+    public double supportA() {
+        return supportA;
+    }
+
+    /** The second support, m from the start (the span for a simple span). */
+    public double supportB() {
+        return supportB;
     }
 
     /** Loads per case on a span of {@code span} metres; missing cases carry nothing. */
@@ -41,7 +82,7 @@ public final class BeamLoads {
      * unreduced); the cases present must be the same.
      */
     public BeamLoads withDeflectionLoads(Map<LoadCase, ? extends List<? extends SpanLoad>> loads) {
-        return new BeamLoads(span, cases, spans(span, loads));
+        return new BeamLoads(span, cases, spans(span, loads), supportA, supportB);
     }
 
     /** True when the deflection checks use loads of their own ({@link #withDeflectionLoads}). */

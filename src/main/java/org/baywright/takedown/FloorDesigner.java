@@ -53,6 +53,8 @@ public final class FloorDesigner {
     private final FloorRules rules;
     private final Searches searches;
     private final Map<String, List<Incoming>> incoming = new HashMap<>();
+    /** Upward reactions on a member, not designed for but passed through to its supports: {position, N per component}. */
+    private final Map<String, List<double[]>> uplifts = new HashMap<>();
     private final Map<String, double[]> columnLoads = new LinkedHashMap<>();
     private final Map<String, Double> columnArea = new LinkedHashMap<>();
     private final Map<String, double[]> columnL0 = new LinkedHashMap<>();
@@ -101,6 +103,9 @@ public final class FloorDesigner {
         if (!ends.supported()) {
             return new Designed(notDesigned(m, ends), Handoff.NONE);
         }
+        if (ends.overhangs()) {
+            return overhanging(m, ends);
+        }
         double span = m.length();
         MemberLoads loads = MemberLoads.of(m, floor, trib, incoming.getOrDefault(m.id(), List.of()),
                 rules.liveLoad().partitionAsDead());
@@ -109,6 +114,7 @@ public final class FloorDesigner {
         Searches.Sized sized = size(m, reduction, loads, criteria);
         BeamDesign d = sized.design();
         MemberLoads.Reactions rx = loads.reactions(span, d.section());
+        passThrough(m, rx, 0, span);
         MemberTributary mt = trib.members().get(m.id());
         MemberResult r = new MemberResult(m.id(), floor.id(), m.kind(), m.start(), m.end(), span, d.status(), d,
                 loads.ownArea(), reduction.area(), reduction.kll(), reduction.ordinaryLive(), reduction.roofLive(), rx.start(), rx.end(),
@@ -116,8 +122,53 @@ public final class FloorDesigner {
         return new Designed(r, new Handoff(loads.l0(), loads.startShare(), loads.deliveredArea()));
     }
 
+    /**
+     * Designs a member that overhangs the support it passes over (a cantilever with a backspan): supports
+     * at a and b along it, K_LL = 1 (ASCE 7-16 Table 4.7-1, cantilever beams), the reactions at the two
+     * supports (the one beside the overhang larger than the load between them), and a warning where a
+     * pattern of live load lifts the far support.
+     */
+    private Designed overhanging(Member m, Ends ends) {
+        double span = m.length();
+        double a = ends.free() == 0 ? ends.overAt() : 0;
+        double b = ends.free() == 0 ? span : ends.overAt();
+        MemberLoads loads = MemberLoads.of(m, floor, trib, incoming.getOrDefault(m.id(), List.of()),
+                rules.liveLoad().partitionAsDead(), a, b);
+        MemberReduction reduction = MemberReduction.of(loads, reductionArea(m, loads), 1, rules.liveLoad().reduce());
+        BeamCriteria criteria = new BeamCriteria(rules.method(), rules.steel(), loads.bracing(m.kind()), rules.deflection(), true);
+        Searches.Sized sized = size(m, reduction, loads, criteria, a, b);
+        BeamDesign d = sized.design();
+        MemberLoads.Reactions rx = loads.reactions(span, d.section(), a, b);
+        passThrough(m, rx, a, b);
+        Support sa = ends.free() == 0 ? ends.over() : ends.start();
+        Support sb = ends.free() == 0 ? ends.end() : ends.over();
+        if (d.section() != null) {
+            double[] min = new org.baywright.design.OverhangDesigner(sized.loads(), criteria).minimumReactions(d.section());
+            int far = ends.free() == 0 ? 1 : 0;
+            if (min[far] < 0) {
+                problems.add(new Problem(Problem.Severity.WARNING, "uplift", "floor " + floor.id(), m.id(), "member " + m.id()
+                        + " overhangs its support: with live load on the overhang only its far support ("
+                        + (far == 0 ? sa : sb).describe() + ") is pulled up by " + String.format(Locale.ROOT, "%.1f kN", -min[far] / 1000)
+                        + " (factored); that connection must hold it down (ASCE 7-16 §4.3.3)",
+                        List.of(far == 0 ? m.start() : m.end())));
+            }
+        }
+        MemberTributary mt = trib.members().get(m.id());
+        String over = " (passed over; the " + (ends.free() == 0 ? "start" : "end") + " overhangs it)";
+        MemberResult r = new MemberResult(m.id(), floor.id(), m.kind(), m.start(), m.end(), span, d.status(), d,
+                loads.ownArea(), reduction.area(), reduction.kll(), reduction.ordinaryLive(), reduction.roofLive(), rx.start(), rx.end(),
+                sa.describe() + (ends.free() == 0 ? over : ""), sb.describe() + (ends.free() == 1 ? over : ""),
+                mt == null ? List.of() : mt.polygons(), sized.loads(), criteria);
+        return new Designed(r, new Handoff(loads.l0(), loads.startShare(), loads.deliveredArea()));
+    }
+
     /** The search, or the check of the member's fixed size when the catalog has it; problems for what went wrong. */
     private Searches.Sized size(Member m, MemberReduction reduction, MemberLoads loads, BeamCriteria criteria) {
+        return size(m, reduction, loads, criteria, 0, m.length());
+    }
+
+    /** {@link #size(Member, MemberReduction, MemberLoads, BeamCriteria)} on supports at a and b along the member. */
+    private Searches.Sized size(Member m, MemberReduction reduction, MemberLoads loads, BeamCriteria criteria, double a, double b) {
         double span = m.length();
         Optional<String> fixed = m.fixedSection();
         Optional<Section> fixedSection = fixed.flatMap(searches.catalog()::find);
@@ -127,14 +178,14 @@ public final class FloorDesigner {
                 ? MemberReduction.none(reduction).apply(loads) : null;
         Searches.Sized sized;
         if (fixedSection.isPresent()) {
-            sized = searches.check(fixedSection.get(), span, caseLoads, deflectionLoads, criteria);
+            sized = searches.check(fixedSection.get(), span, a, b, caseLoads, deflectionLoads, criteria);
         } else {
             if (fixed.isPresent()) {
                 problems.add(new Problem(Problem.Severity.ERROR, "unknown-section", "floor " + floor.id(), m.id(),
                         "member " + m.id() + ": section " + fixed.get() + " is not in the catalog " + searches.catalog().name()
                                 + "; the member was sized instead", List.of(m.start(), m.end())));
             }
-            sized = searches.search(span, caseLoads, deflectionLoads, criteria,
+            sized = searches.search(span, a, b, caseLoads, deflectionLoads, criteria,
                     m.kind() == MemberKind.GIRDER ? rules.girders() : rules.beams());
         }
         BeamDesign d = sized.design();
@@ -153,12 +204,15 @@ public final class FloorDesigner {
         MemberResult r = m.result();
         Handoff h = m.handoff();
         for (int end = 0; end < 2; end++) {
-            Support s = ends.at(end);
+            // an overhanging member's reactions are at its supports: the one it passes over replaces its free end
+            Support s = ends.overhangs() ? (ends.free() == 0 ? (end == 0 ? ends.over() : ends.end())
+                    : (end == 0 ? ends.start() : ends.over())) : ends.at(end);
             double[] rx = end == 0 ? r.startReaction() : r.endReaction();
             // the deck area actually delivered passes on (never a girder's half-bay A_T, which would count
             // the same deck twice in the columns' A_T)
             double area = end == 0 ? h.delivered() * h.startShare() : h.delivered() * (1 - h.startShare());
             if (s.member() != null) {
+                rx = withoutUplift(r, s, rx);
                 incoming.computeIfAbsent(s.member(), k -> new ArrayList<>()).add(new Incoming(s.position(), rx, area, h.l0()));
             } else if (s.column() != null) {
                 double[] acc = columnLoads.computeIfAbsent(s.column(), k -> new double[NC]);
@@ -170,6 +224,46 @@ public final class FloorDesigner {
                 for (int c = 0; c < NC; c++) {
                     l0[c] = Math.max(l0[c], h.l0()[c]);
                 }
+            }
+        }
+    }
+
+    /**
+     * A reaction pulling up on the member that supports it (an overhanging member's far end): the beam
+     * designer takes downward loads only, so the upward part is left out of that member's design and
+     * passed straight through to its supports by the lever rule (equilibrium holds), and a located problem
+     * says it was not designed for.
+     */
+    private double[] withoutUplift(MemberResult r, Support s, double[] rx) {
+        double[] out = null;
+        for (int c = 0; c < NC; c++) {
+            if (rx[c] < 0) {
+                out = out == null ? rx.clone() : out;
+                out[c] = 0;
+            }
+        }
+        if (out == null) {
+            return rx;
+        }
+        double[] up = new double[NC + 1];
+        up[0] = s.position();
+        for (int c = 0; c < NC; c++) {
+            up[c + 1] = rx[c] - out[c];
+        }
+        uplifts.computeIfAbsent(s.member(), k -> new ArrayList<>()).add(up);
+        problems.add(new Problem(Problem.Severity.ERROR, "uplift-on-member", "floor " + floor.id(), r.id(), "member " + r.id()
+                + " pulls up on " + s.describe() + " (its overhang outweighs its backspan); an upward reaction on a member is"
+                + " not designed: support that end on a column or shorten the overhang", List.of(r.start(), r.end())));
+        return out;
+    }
+
+    /** Adds the upward reactions received by {@code m} to its reactions at supports a and b, by the lever rule. */
+    private void passThrough(Member m, MemberLoads.Reactions rx, double a, double b) {
+        for (double[] up : uplifts.getOrDefault(m.id(), List.of())) {
+            double fb = Math.max(0, Math.min(1, (up[0] - a) / (b - a)));
+            for (int c = 0; c < NC; c++) {
+                rx.start()[c] += up[c + 1] * (1 - fb);
+                rx.end()[c] += up[c + 1] * fb;
             }
         }
     }

@@ -3,6 +3,7 @@ package org.baywright.takedown;
 import java.util.ArrayList;
 import java.util.List;
 import org.baywright.analysis.DistributedLoad;
+import org.baywright.analysis.OverhangSpan;
 import org.baywright.analysis.PointLoad;
 import org.baywright.analysis.SimpleSpan;
 import org.baywright.analysis.SpanLoad;
@@ -45,6 +46,16 @@ record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea
 
     /** Assembles the loads of member {@code m} of {@code floor}. */
     static MemberLoads of(Member m, Floor floor, FloorTributary trib, List<Incoming> incoming, boolean partitionAsDead) {
+        return of(m, floor, trib, incoming, partitionAsDead, 0, m.length());
+    }
+
+    /**
+     * Assembles the loads of member {@code m} on supports at {@code a} and {@code b} (m from its start;
+     * 0 and its length for a simple span, else an overhanging member): the area passed to each support
+     * follows the statics of the member on those supports.
+     */
+    static MemberLoads of(Member m, Floor floor, FloorTributary trib, List<Incoming> incoming, boolean partitionAsDead,
+            double a, double b) {
         double span = m.length();
         List<List<SpanLoad>> comp = new ArrayList<>();
         for (int c = 0; c < NC; c++) {
@@ -77,9 +88,15 @@ record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea
                 bracePoints.add(s / span);
             }
         }
-        SimpleSpan flow = SimpleSpan.of(span, areaFlow);
         double at = own + incomingArea;
-        return new MemberLoads(comp, l0, own, at, at > 0 ? flow.leftReaction() / at : 0.5, bracePoints);
+        double share;
+        if (a == 0 && b == span) {
+            share = at > 0 ? SimpleSpan.of(span, areaFlow).leftReaction() / at : 0.5;
+        } else {
+            // an overhanging member: the area goes to its two supports by the lever rule (kept within [0, 1])
+            share = at > 0 ? Math.max(0, Math.min(1, OverhangSpan.of(span, a, b, areaFlow).reactionA() / at)) : 0.5;
+        }
+        return new MemberLoads(comp, l0, own, at, share, bracePoints);
     }
 
     /** The deck: its width profile into the area flow, each area load through its widths by component. */
@@ -183,6 +200,28 @@ record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea
         double sw = section == null ? 0 : section.weight() * span / 2;
         r0[Component.D.ordinal()] += sw;
         r1[Component.D.ordinal()] += sw;
+        return new Reactions(r0, r1);
+    }
+
+    /**
+     * Reactions of an overhanging member at its supports {@code a} and {@code b} by component (the
+     * statics of {@link OverhangSpan}): {@code start} at a, {@code end} at b; own weight in D.
+     */
+    Reactions reactions(double span, Section section, double a, double b) {
+        double[] r0 = new double[NC];
+        double[] r1 = new double[NC];
+        for (int c = 0; c < NC; c++) {
+            List<SpanLoad> l = new ArrayList<>(byComponent.get(c));
+            if (c == Component.D.ordinal() && section != null) {
+                l.add(DistributedLoad.full(span, section.weight()));
+            }
+            if (l.isEmpty()) {
+                continue;
+            }
+            OverhangSpan s = OverhangSpan.of(span, a, b, l);
+            r0[c] = s.reactionA();
+            r1[c] = s.reactionB();
+        }
         return new Reactions(r0, r1);
     }
 

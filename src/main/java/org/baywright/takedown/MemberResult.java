@@ -17,8 +17,9 @@ import org.baywright.plan.Point;
  * @param liveFactor reduction factor applied to its ordinary floor live load L, ASCE 7-16 §4.7 (1 = none)
  * @param roofLiveFactor reduction factor applied to its roof live load Lr, ASCE 7-16 §4.8.2: R1·R2, or
  *     12 psf / L0 where that minimum governed (1 = none, or no roof live load)
- * @param startReaction reactions at the start end by component, unreduced, self-weight in D, N
- * @param endReaction reactions at the end, N
+ * @param startReaction reactions at the start end by component, unreduced, self-weight in D, N; for a
+ *     member that overhangs a support ({@link #overhangs()}), at its first support
+ * @param endReaction reactions at the end, N; for an overhanging member, at its second support
  * @param startSupport id of what supports the start ("column C-A1", "member G-1"), or empty
  * @param endSupport id of what supports the end, or empty
  * @param tributary the tributary polygons for drawing
@@ -41,8 +42,17 @@ public record MemberResult(String id, String floor, MemberKind kind, Point start
             return null;
         }
         org.baywright.calc.Calc calc = new org.baywright.calc.Calc();
-        new org.baywright.design.BeamDesigner(loads, criteria).check(design.section(), calc);
+        if (loads.isOverhanging()) {
+            new org.baywright.design.OverhangDesigner(loads, criteria).check(design.section(), calc);
+        } else {
+            new org.baywright.design.BeamDesigner(loads, criteria).check(design.section(), calc);
+        }
         return calc;
+    }
+
+    /** True when the member overhangs a support (a cantilever with a backspan). */
+    public boolean overhangs() {
+        return loads != null && loads.isOverhanging();
     }
 
     /** The chosen section designation, or empty. */

@@ -11,6 +11,7 @@ import org.baywright.design.BeamCriteria;
 import org.baywright.design.BeamDesign;
 import org.baywright.design.BeamDesigner;
 import org.baywright.design.BeamLoads;
+import org.baywright.design.OverhangDesigner;
 import org.baywright.design.SearchFilter;
 import org.baywright.load.LoadCase;
 
@@ -27,7 +28,7 @@ public final class Searches {
      * The inputs that fix the outcome of a search: span, service loads by load case, criteria and filter
      * (the catalog is the run's). Equal keys give equal designs.
      */
-    private record Key(double span, List<List<SpanLoad>> loads, List<List<SpanLoad>> deflectionLoads, BeamCriteria criteria,
+    private record Key(double span, double a, double b, List<List<SpanLoad>> loads, List<List<SpanLoad>> deflectionLoads, BeamCriteria criteria,
             SearchFilter filter) {
     }
 
@@ -49,11 +50,21 @@ public final class Searches {
      */
     Sized search(double span, Map<LoadCase, List<SpanLoad>> caseLoads, Map<LoadCase, List<SpanLoad>> deflectionLoads,
             BeamCriteria criteria, SearchFilter filter) {
-        Key key = new Key(span, byCase(caseLoads), deflectionLoads == null ? null : byCase(deflectionLoads), criteria, filter);
+        return search(span, 0, span, caseLoads, deflectionLoads, criteria, filter);
+    }
+
+    /**
+     * As {@link #search(double, Map, Map, BeamCriteria, SearchFilter)} for a member on supports at
+     * {@code a} and {@code b} (m from its start): an overhanging member unless they are its ends.
+     */
+    Sized search(double span, double a, double b, Map<LoadCase, List<SpanLoad>> caseLoads,
+            Map<LoadCase, List<SpanLoad>> deflectionLoads, BeamCriteria criteria, SearchFilter filter) {
+        Key key = new Key(span, a, b, byCase(caseLoads), deflectionLoads == null ? null : byCase(deflectionLoads), criteria, filter);
         Sized sized = done.get(key);
         if (sized == null) {
-            BeamLoads bl = loads(span, caseLoads, deflectionLoads);
-            sized = new Sized(bl, new BeamDesigner(bl, criteria).search(catalog, filter));
+            BeamLoads bl = loads(span, a, b, caseLoads, deflectionLoads);
+            sized = new Sized(bl, bl.isOverhanging() ? new OverhangDesigner(bl, criteria).search(catalog, filter)
+                    : new BeamDesigner(bl, criteria).search(catalog, filter));
             Sized raced = done.putIfAbsent(key, sized);
             sized = raced != null ? raced : sized;
         }
@@ -68,16 +79,23 @@ public final class Searches {
         return byCase;
     }
 
-    private static BeamLoads loads(double span, Map<LoadCase, List<SpanLoad>> caseLoads,
+    private static BeamLoads loads(double span, double a, double b, Map<LoadCase, List<SpanLoad>> caseLoads,
             Map<LoadCase, List<SpanLoad>> deflectionLoads) {
-        BeamLoads bl = BeamLoads.of(span, caseLoads);
+        BeamLoads bl = a == 0 && b == span ? BeamLoads.of(span, caseLoads) : BeamLoads.overhanging(span, a, b, caseLoads);
         return deflectionLoads == null ? bl : bl.withDeflectionLoads(deflectionLoads);
     }
 
     /** The check of a fixed section for these loads (deflection loads as for {@link #search}). */
     Sized check(Section fixed, double span, Map<LoadCase, List<SpanLoad>> caseLoads,
             Map<LoadCase, List<SpanLoad>> deflectionLoads, BeamCriteria criteria) {
-        BeamLoads bl = loads(span, caseLoads, deflectionLoads);
-        return new Sized(bl, new BeamDesigner(bl, criteria).checkFixed(fixed));
+        return check(fixed, span, 0, span, caseLoads, deflectionLoads, criteria);
+    }
+
+    /** The check of a fixed section on supports at {@code a} and {@code b} (an overhanging member unless they are its ends). */
+    Sized check(Section fixed, double span, double a, double b, Map<LoadCase, List<SpanLoad>> caseLoads,
+            Map<LoadCase, List<SpanLoad>> deflectionLoads, BeamCriteria criteria) {
+        BeamLoads bl = loads(span, a, b, caseLoads, deflectionLoads);
+        return new Sized(bl, bl.isOverhanging() ? new OverhangDesigner(bl, criteria).checkFixed(fixed)
+                : new BeamDesigner(bl, criteria).checkFixed(fixed));
     }
 }

@@ -21,6 +21,11 @@ import org.baywright.plan.Problem;
  * member passing through it, girders before beams) and the order of design, every member after all the
  * members framing into it (Kahn's algorithm).
  *
+ * <p>An overhanging member: when one end of a member has no support but the member crosses a column or
+ * another member between its ends (a beam drawn past its support), and that free end lies on the slab,
+ * the crossing nearest the free end is its second support and the part beyond it an overhang (a
+ * cantilever with a backspan). The plan file needs no field for it: the geometry says it.
+ *
  * <p>Members of a support loop cannot be ordered: they are reported and left undesigned, and the
  * members they bear on are designed with the load that reaches them (what the loop carries is missing,
  * and the equilibrium check shows it). A zero-length member is reported and left out.
@@ -54,14 +59,28 @@ public record SupportGraph(Map<String, Ends> ends, List<String> order, List<Stri
         }
     }
 
-    /** A member's supports at its start and end. */
-    public record Ends(Support start, Support end) {
+    /**
+     * A member's supports at its start and end; for an overhanging member, the support it passes over
+     * ({@code over}, at {@code overAt} metres from the member's start) and its free end ({@code free}: 0
+     * start, 1 end, -1 when the member does not overhang).
+     */
+    public record Ends(Support start, Support end, Support over, double overAt, int free) {
+        public Ends(Support start, Support end) {
+            this(start, end, Support.NONE, 0, -1);
+        }
+
+        /** The supports: 0 start, 1 end, 2 the support an overhanging member passes over. */
         Support at(int end) {
-            return end == 0 ? start : this.end;
+            return end == 0 ? start : end == 1 ? this.end : over;
         }
 
         boolean supported() {
-            return !start.isNone() && !end.isNone();
+            return overhangs() ? !at(1 - free).isNone() : !start.isNone() && !end.isNone();
+        }
+
+        /** True when the member overhangs the support it passes over. */
+        public boolean overhangs() {
+            return free >= 0 && !over.isNone();
         }
     }
 
@@ -87,7 +106,18 @@ public record SupportGraph(Map<String, Ends> ends, List<String> order, List<Stri
                         "member " + m.id() + " has zero length; its ends must be distinct points", List.of(m.start())));
                 continue;
             }
-            ends.put(m.id(), new Ends(support(in, m, m.start(), problems, units), support(in, m, m.end(), problems, units)));
+            List<Problem> found = new ArrayList<>();
+            Support s0 = support(in, m, m.start(), found, units);
+            Support s1 = support(in, m, m.end(), found, units);
+            Ends e = new Ends(s0, s1);
+            if (s0.isNone() != s1.isNone()) {
+                e = overhang(in, m, s0.isNone() ? 0 : 1, e);
+            }
+            if (e.overhangs()) {
+                found.removeIf(pr -> pr.kind().equals("unsupported-member"));
+            }
+            problems.addAll(found);
+            ends.put(m.id(), e);
         }
         Ordering o = new Ordering(ends);
         List<String> inLoop = o.run();
@@ -118,7 +148,7 @@ public record SupportGraph(Map<String, Ends> ends, List<String> order, List<Stri
         List<String> run() {
             for (Map.Entry<String, Ends> e : ends.entrySet()) {
                 pending.putIfAbsent(e.getKey(), 0);
-                for (int end = 0; end < 2; end++) {
+                for (int end = 0; end < 3; end++) {
                     Support s = e.getValue().at(end);
                     if (s.member() != null) {
                         pending.merge(s.member(), 1, Integer::sum);
@@ -143,7 +173,7 @@ public record SupportGraph(Map<String, Ends> ends, List<String> order, List<Stri
             List<String> inLoop = stuck.stream().filter(id -> reach.get(id).contains(id)).toList();
             // the members a loop bears on are designed with the load that reaches them
             for (String id : inLoop) {
-                for (int end = 0; end < 2; end++) {
+                for (int end = 0; end < 3; end++) {
                     String on = ends.get(id).at(end).member();
                     if (on != null && !inLoop.contains(on) && pending.merge(on, -1, Integer::sum) == 0) {
                         ready.add(on);
@@ -159,7 +189,7 @@ public record SupportGraph(Map<String, Ends> ends, List<String> order, List<Stri
             while (!ready.isEmpty()) {
                 String id = ready.poll();
                 order.add(id);
-                for (int end = 0; end < 2; end++) {
+                for (int end = 0; end < 3; end++) {
                     String on = ends.get(id).at(end).member();
                     if (on != null && pending.merge(on, -1, Integer::sum) == 0) {
                         ready.add(on);
@@ -174,7 +204,7 @@ public record SupportGraph(Map<String, Ends> ends, List<String> order, List<Stri
             Deque<String> todo = new ArrayDeque<>(List.of(id));
             while (!todo.isEmpty()) {
                 Ends e = ends.get(todo.poll());
-                for (int end = 0; end < 2; end++) {
+                for (int end = 0; end < 3; end++) {
                     String on = e.at(end).member();
                     if (on != null && within.contains(on) && seen.add(on)) {
                         todo.add(on);
@@ -219,6 +249,93 @@ public record SupportGraph(Map<String, Ends> ends, List<String> order, List<Stri
                 "member " + m.id() + " has no support at " + units.pointText(p.x(), p.y())
                         + ": no column there and no member passes through that point", List.of(p)));
         return Support.NONE;
+    }
+
+    /**
+     * The overhang of member {@code m} whose end {@code free} has no support: the column or member it
+     * crosses between its ends nearest that end, if the free end lies on the slab; else {@code e} as it is.
+     */
+    private static Ends overhang(FloorInput in, Member m, int free, Ends e) {
+        Point tip = free == 0 ? m.start() : m.end();
+        if (!onSlab(in.floor().slabEdge(), tip)) {
+            return e;
+        }
+        double len = m.length();
+        double tol = Takedown.TOLERANCE;
+        Support best = Support.NONE;
+        double bestAt = Double.NaN;
+        double bestGap = Double.POSITIVE_INFINITY;
+        for (Column c : in.columns()) {
+            double s = projection(m, c.at());
+            if (s > tol && s < len - tol && along(m, s).distance(c.at()) <= tol) {
+                double gap = free == 0 ? s : len - s;
+                if (gap < bestGap) {
+                    best = Support.column(c.id());
+                    bestAt = s;
+                    bestGap = gap;
+                }
+            }
+        }
+        for (Member o : in.members()) {
+            if (o == m || o.length() < tol) {
+                continue;
+            }
+            double[] st = crossing(m, o);
+            if (st == null || !(st[0] > tol && st[0] < len - tol && st[1] > tol && st[1] < o.length() - tol)) {
+                continue;
+            }
+            double gap = free == 0 ? st[0] : len - st[0];
+            // a column at the same point wins; otherwise the crossing nearest the free end
+            if (gap < bestGap - tol || (Math.abs(gap - bestGap) <= tol && best.column() == null && o.kind() == MemberKind.GIRDER)) {
+                best = Support.member(o.id(), st[1]);
+                bestAt = st[0];
+                bestGap = gap;
+            }
+        }
+        if (best.isNone()) {
+            return e;
+        }
+        return new Ends(e.start(), e.end(), best, bestAt, free);
+    }
+
+    /** Inside the slab edge or on it (within {@link Takedown#TOLERANCE}). */
+    private static boolean onSlab(org.baywright.plan.Polygon slab, Point p) {
+        if (slab.contains(p.x(), p.y())) {
+            return true;
+        }
+        List<Point> v = slab.vertices();
+        for (int i = 0, j = v.size() - 1; i < v.size(); j = i++) {
+            Point a = v.get(j);
+            Point b = v.get(i);
+            double dx = b.x() - a.x();
+            double dy = b.y() - a.y();
+            double l2 = dx * dx + dy * dy;
+            double t = l2 == 0 ? 0 : Math.max(0, Math.min(1, ((p.x() - a.x()) * dx + (p.y() - a.y()) * dy) / l2));
+            if (Math.hypot(a.x() + t * dx - p.x(), a.y() + t * dy - p.y()) <= Takedown.TOLERANCE) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** Where segments m and o cross: {distance along m, distance along o}, or null when they do not (or are parallel). */
+    private static double[] crossing(Member m, Member o) {
+        double rx = m.end().x() - m.start().x();
+        double ry = m.end().y() - m.start().y();
+        double sx = o.end().x() - o.start().x();
+        double sy = o.end().y() - o.start().y();
+        double den = rx * sy - ry * sx;
+        if (Math.abs(den) < 1e-12 * Math.hypot(rx, ry) * Math.hypot(sx, sy)) {
+            return null;
+        }
+        double qx = o.start().x() - m.start().x();
+        double qy = o.start().y() - m.start().y();
+        double t = (qx * sy - qy * sx) / den;
+        double u = (qx * ry - qy * rx) / den;
+        if (t < 0 || t > 1 || u < 0 || u > 1) {
+            return null;
+        }
+        return new double[] {t * m.length(), u * o.length()};
     }
 
     private static double projection(Member o, Point p) {

@@ -15,6 +15,8 @@ import org.baywright.plan.Level;
 import org.baywright.plan.LineLoad;
 import org.baywright.plan.LiveLoadUse;
 import org.baywright.plan.LoadValues;
+import org.baywright.plan.Member;
+import org.baywright.plan.MemberKind;
 import org.baywright.plan.Opening;
 import org.baywright.plan.Plan;
 import org.baywright.plan.Point;
@@ -30,9 +32,16 @@ import org.baywright.units.Units;
  *
  * <p>Harbourview Offices: 4 × 3 bays of 30 ft × 35 ft, beams north–south at no more than 10 ft;
  * Level 2 carries a file-storage zone (125 psf) in the north-east bay D–E/3–4; Levels 3 and 4 have a double-height
- * atrium open in bay B–C/2–3; a balcony overhangs the south face between grid lines B and D,
- * 8 ft deep at B tapering to 4 ft at D; cladding on every slab edge; the roof carries two rooftop
+ * atrium open in bay B–C/2–3; a balcony 6 ft deep overhangs the south face between grid lines B
+ * and D (it tapered from 8 ft at B to 4 ft at D until its framing was reworked: with beams square to
+ * grid 1, a sloping edge leaves slivers of deck past the beam tips); cladding on every slab edge; the roof carries two rooftop
  * units.
+ *
+ * <p>The balcony is framed with cantilevered beams and backspans: in bays B–C and C–D the north–south
+ * beams of the bays 1–2 (on grid lines B, C, D and the infill lines at 10 ft) run from the grid-2
+ * girders across grid 1 (the girders G-1-BC and G-1-CD, or the columns on B, C and D) to the balcony
+ * edge, so each is a 35 ft backspan with a 6 ft overhang. The balcony deck spans east–west
+ * between them and stops at the beams on B and D: it has no overhang of its own.
  */
 public final class HarbourviewDemo {
     private HarbourviewDemo() {
@@ -55,38 +64,42 @@ public final class HarbourviewDemo {
         Floor roof = base.floor("roof").orElseThrow();
 
         // slab edge with the balcony: south face between B (x = 30 ft) and D (x = 90 ft)
-        Polygon slab = new Polygon(List.of(new Point(0, 0), new Point(ft(30), 0), new Point(ft(30), ft(-8)),
-                new Point(ft(90), ft(-4)), new Point(ft(90), 0), new Point(ft(120), 0), new Point(ft(120), ft(105)),
+        Polygon slab = new Polygon(List.of(new Point(0, 0), new Point(ft(30), 0), new Point(ft(30), ft(-6)),
+                new Point(ft(90), ft(-6)), new Point(ft(90), 0), new Point(ft(120), 0), new Point(ft(120), ft(105)),
                 new Point(0, ft(105))));
         Polygon grid = Polygon.rectangle(0, 0, ft(120), ft(105));
-        Polygon balcony = new Polygon(List.of(new Point(ft(30), ft(-8)), new Point(ft(90), ft(-4)), new Point(ft(90), 0),
+        Polygon balcony = new Polygon(List.of(new Point(ft(30), ft(-6)), new Point(ft(90), ft(-6)), new Point(ft(90), 0),
                 new Point(ft(30), 0)));
-        List<Deck> decks = List.of(new Deck("DK-main", grid, 0), new Deck("DK-balcony", balcony, 90));
+        List<Deck> decks = List.of(new Deck("DK-main", grid, 0), new Deck("DK-balcony", balcony, 0));
         List<Point> perimeter = new ArrayList<>(slab.vertices());
         perimeter.add(slab.vertices().get(0));
         List<LineLoad> cladding = List.of(new LineLoad("LL-cladding", perimeter, new LoadValues(Units.KLF.toSi(0.4), 0, 0, 0, 0, 0)));
         LoadValues officeLoads = new LoadValues(psf(56), psf(10), psf(50), 0, 0, psf(15));
         AreaLoad office = new AreaLoad("AL-office", slab, officeLoads, LiveLoadUse.ORDINARY);
 
+        List<Member> typicalMembers = balconyFraming(typical.members());
+        List<Member> roofMembers = balconyFraming(roof.members());
+
         // Level 2: file storage in bay D–E / 3–4 (light storage, ASCE 7-16 Table 4.3-1: 125 psf, no partitions)
-        Polygon officeL2 = new Polygon(List.of(new Point(0, 0), new Point(ft(30), 0), new Point(ft(30), ft(-8)),
-                new Point(ft(90), ft(-4)), new Point(ft(90), 0), new Point(ft(120), 0), new Point(ft(120), ft(70)),
+        Polygon officeL2 = new Polygon(List.of(new Point(0, 0), new Point(ft(30), 0), new Point(ft(30), ft(-6)),
+                new Point(ft(90), ft(-6)), new Point(ft(90), 0), new Point(ft(120), 0), new Point(ft(120), ft(70)),
                 new Point(ft(90), ft(70)), new Point(ft(90), ft(105)), new Point(0, ft(105))));
         AreaLoad storage = new AreaLoad("AL-storage", Polygon.rectangle(ft(90), ft(70), ft(120), ft(105)),
                 new LoadValues(psf(56), psf(10), psf(125), 0, 0, 0), LiveLoadUse.ORDINARY);
-        Floor level2 = new Floor("level2", "Level 2 (storage zone)", false, slab, decks, typical.members(), typical.infills(),
+        Floor level2 = new Floor("level2", "Level 2 (storage zone)", false, slab, decks, typicalMembers,
+                withoutBalconyBays(typical.infills()),
                 List.of(), List.of(new AreaLoad("AL-office", officeL2, officeLoads, LiveLoadUse.ORDINARY), storage), cladding,
                 List.of());
 
         // Levels 3–4: atrium open in bay B–C / 2–3; no infill there
         List<Infill> infills = new ArrayList<>();
         for (Infill i : typical.infills()) {
-            if (!i.id().equals("IF-BC-23")) {
+            if (!i.id().equals("IF-BC-23") && !BALCONY_BAYS.contains(i.id())) {
                 infills.add(i);
             }
         }
         Opening atrium = new Opening("OP-atrium", Polygon.rectangle(ft(30), ft(35), ft(60), ft(70)));
-        Floor atriumFloor = new Floor("typical", "Typical floor with atrium", false, slab, decks, typical.members(), infills,
+        Floor atriumFloor = new Floor("typical", "Typical floor with atrium", false, slab, decks, typicalMembers, infills,
                 List.of(atrium), List.of(office), cladding, List.of());
 
         // Roof: two rooftop units (dead load 6 kip each, on the deck)
@@ -94,7 +107,7 @@ public final class HarbourviewDemo {
                 new PointLoadItem("PL-RTU-1", new Point(ft(45), ft(20)), new LoadValues(Units.KIPS.toSi(6), 0, 0, 0, 0, 0)),
                 new PointLoadItem("PL-RTU-2", new Point(ft(75), ft(85)), new LoadValues(Units.KIPS.toSi(6), 0, 0, 0, 0, 0)));
         AreaLoad roofLoad = new AreaLoad("AL-roof", slab, new LoadValues(psf(56), psf(15), 0, psf(20), 0, 0), LiveLoadUse.ORDINARY);
-        Floor roofFloor = new Floor("roof", "Roof", true, slab, decks, roof.members(), roof.infills(), List.of(),
+        Floor roofFloor = new Floor("roof", "Roof", true, slab, decks, roofMembers, withoutBalconyBays(roof.infills()), List.of(),
                 List.of(roofLoad), cladding, units);
 
         List<Level> levels = List.of(
@@ -105,6 +118,43 @@ public final class HarbourviewDemo {
         List<Column> columns = new ArrayList<>(base.columns());
         return new Plan(base.name(), "us", base.settings(), base.grid(), levels, List.of(level2, atriumFloor, roofFloor),
                 columns.stream().map(c -> new Column(c.id(), c.at(), c.grid(), c.topLevel(), Optional.empty())).toList());
+    }
+
+    /** The infills of the bays whose beams now cantilever over grid 1 (drawn one by one instead). */
+    private static final List<String> BALCONY_BAYS = List.of("IF-BC-12", "IF-CD-12");
+
+    private static List<Infill> withoutBalconyBays(List<Infill> infills) {
+        return infills.stream().filter(i -> !BALCONY_BAYS.contains(i.id())).toList();
+    }
+
+    /** y of the balcony edge at x (ft): 6 ft south of grid 1 from B to D. */
+    private static double balconyEdge(double xFt) {
+        return -6;
+    }
+
+    /**
+     * The framing of bays B–D / 1–2 with the balcony: the beams on B, C and D and at the 10 ft infill lines
+     * run from grid 2 past grid 1 to the balcony edge (beams overhanging grid 1).
+     */
+    private static List<Member> balconyFraming(List<Member> members) {
+        List<Member> out = new ArrayList<>();
+        for (Member m : members) {
+            switch (m.id()) {
+                case "B-B-12", "B-C-12", "B-D-12" -> {
+                    double x = Units.FT_.fromSi(m.start().x());
+                    out.add(new Member(m.id(), MemberKind.BEAM, new Point(ft(x), ft(35)), new Point(ft(x), ft(balconyEdge(x))),
+                            Optional.empty()));
+                }
+                default -> out.add(m);
+            }
+        }
+        int n = 1;
+        for (double x : new double[] {40, 50, 70, 80}) {
+            String bay = x < 60 ? "BC" : "CD";
+            out.add(new Member("B-" + bay + "-12-" + (n++ % 2 == 1 ? "a" : "b"), MemberKind.BEAM, new Point(ft(x), ft(35)),
+                    new Point(ft(x), ft(balconyEdge(x))), Optional.empty()));
+        }
+        return out;
     }
 
     public static void main(String[] args) throws Exception {

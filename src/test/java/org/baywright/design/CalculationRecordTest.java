@@ -49,6 +49,19 @@ class CalculationRecordTest {
                     equations += verify(calc, name, checks);
                 }
             }
+            for (DesignMethod m : DesignMethod.values()) {
+                // an overhanging beam (cantilever with a backspan): its sheet, from the same functions
+                double len = Units.FT_.toSi(38);
+                OverhangDesigner o = new OverhangDesigner(BeamLoads.overhanging(len, 0, Units.FT_.toSi(30), Map.of(
+                        LoadCase.D, List.of(DistributedLoad.full(len, Units.KLF.toSi(0.8)), new PointLoad(len, Units.KIPS.toSi(2))),
+                        LoadCase.L, List.of(DistributedLoad.full(len, Units.KLF.toSi(1.0))))),
+                        BeamCriteria.defaults().withMethod(m));
+                Calc calc = new Calc();
+                List<Check> plain = o.check(s, null);
+                List<Check> recorded = o.check(s, calc);
+                checks.add(() -> assertEquals(plain, recorded, name + " " + m + " overhang"));
+                equations += verify(calc, name + " overhang", checks);
+            }
             Calc col = new Calc();
             IShapeCompression.strength(s, Steel.A992.fy(), Steel.A992.e(), Units.FT_.toSi(14), Units.FT_.toSi(14), col);
             equations += verify(col, name + " column", checks);

@@ -742,6 +742,18 @@ public final class PlanPicture {
             }
         }
         lines.add(new double[] {a.x(), a.y(), b.x(), b.y(), hk});
+        // an overhanging member: its reactions are at its supports, and the overhang is marked
+        Pt s0 = r0;
+        Pt s1 = r1;
+        if (m.overhangs()) {
+            double fa = m.loads().supportA() / len;
+            double fb = m.loads().supportB() / len;
+            Pt pa = new Pt(a.x() + dx * fa, a.y() + dy * fa);
+            Pt pb = new Pt(a.x() + dx * fb, a.y() + dy * fb);
+            s0 = flip ? pb : pa;
+            s1 = flip ? pa : pb;
+            overhangMarks(m, a, b, pa, pb, dx / len, dy / len);
+        }
 
         // labels: size above (on the left of the reading direction), ratio and reactions below
         double lenMm = len / k;
@@ -781,10 +793,42 @@ public final class PlanPicture {
         }
         if (reactions != null) {
             double e = endMm * k;
-            label(new Pt(r0.x() + ux * e - nx * offMm * k, r0.y() + uy * e - ny * offMm * k), reactions[0], small, rot,
+            label(new Pt(s0.x() + ux * e - nx * offMm * k, s0.y() + uy * e - ny * offMm * k), reactions[0], small, rot,
                     Anchor.START_TOP);
-            label(new Pt(r1.x() - ux * e - nx * offMm * k, r1.y() - uy * e - ny * offMm * k), reactions[1], small, rot,
+            label(new Pt(s1.x() - ux * e - nx * offMm * k, s1.y() - uy * e - ny * offMm * k), reactions[1], small, rot,
                     Anchor.END_TOP);
+        }
+    }
+
+    /**
+     * The marks of a member overhanging a support (our own symbol): a small filled wedge under the member
+     * at the support it passes over, its point on the member, and a bar across each free end.
+     */
+    private void overhangMarks(MemberResult m, Pt a, Pt b, Pt pa, Pt pb, double ux, double uy) {
+        double len = m.length();
+        double h = 0.9 * t * k;
+        Pen pen = Pen.solid(0.35, Rgb.INK);
+        double nx = -uy;
+        double ny = ux;
+        // the support passed over: a at the start overhang's end, b at the end overhang's start
+        List<Pt> passed = new ArrayList<>();
+        if (m.loads().supportA() > 0) {
+            passed.add(pa);
+        }
+        if (m.loads().supportB() < len) {
+            passed.add(pb);
+        }
+        for (Pt p : passed) {
+            out.add(new Primitive.Path(Layer.MEMBERS, Space.PLAN, List.of(p, new Pt(p.x() - nx * h + ux * h * 0.6,
+                    p.y() - ny * h + uy * h * 0.6), new Pt(p.x() - nx * h - ux * h * 0.6, p.y() - ny * h - uy * h * 0.6)), true,
+                    pen, Rgb.INK, null));
+        }
+        double bar = 0.8 * t * k;
+        if (m.loads().supportA() > 0) {
+            out.add(new Primitive.Line(Layer.MEMBERS, Space.PLAN, a.plus(-nx * bar, -ny * bar), a.plus(nx * bar, ny * bar), pen));
+        }
+        if (m.loads().supportB() < len) {
+            out.add(new Primitive.Line(Layer.MEMBERS, Space.PLAN, b.plus(-nx * bar, -ny * bar), b.plus(nx * bar, ny * bar), pen));
         }
     }
 

@@ -110,8 +110,8 @@ final class MemberGroups {
     }
 
     static boolean sameLoads(BeamLoads a, BeamLoads b) {
-        if (!near(a.span(), b.span())) {
-            return false;
+        if (!near(a.span(), b.span()) || !near(a.supportA(), b.supportA()) || !near(a.supportB(), b.supportB())) {
+            return false; // an overhanging member groups only with one on the same supports
         }
         if (a.separateDeflectionLoads() != b.separateDeflectionLoads()) {
             return false;

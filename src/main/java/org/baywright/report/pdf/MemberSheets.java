@@ -120,11 +120,16 @@ final class MemberSheets {
         facts.add(new String[] {"Section", m.section() + ", " + Fmt.weightPerLength(d.section().weight(), us)
                 + ", d = " + Fmt.v(d.section().depth(), Quantity.SECTION_LENGTH, us)});
         facts.add(new String[] {"Span", Fmt.v(m.length(), Quantity.SPAN_LENGTH, us)
-                + (us == UnitSystem.US ? " (" + UnitSystem.feetInches(m.length(), 16) + ")" : "") + ", simply supported"});
+                + (us == UnitSystem.US ? " (" + UnitSystem.feetInches(m.length(), 16) + ")" : "") + (m.overhangs()
+                        ? ", overhanging a support: backspan " + Fmt.v(loads.supportB() - loads.supportA(), Quantity.SPAN_LENGTH, us)
+                                + ", overhang " + Fmt.v(Math.max(loads.supportA(), m.length() - loads.supportB()), Quantity.SPAN_LENGTH, us)
+                                + " (cantilever with backspan; live load patterned, ASCE 7-16 §4.3.3)"
+                        : ", simply supported")});
         facts.add(new String[] {"First member", m.id() + " from " + Fmt.point(m.start(), us) + " to " + Fmt.point(m.end(), us)});
         facts.add(new String[] {"Supported by", blank(m.startSupport()) + " (start), " + blank(m.endSupport()) + " (end)"});
         facts.add(new String[] {"Method", cr.method() + ", " + cr.steel().name() + ", Fy = " + Fmt.v(cr.steel().fy(), Quantity.STRESS, us)});
-        facts.add(new String[] {"Bracing", cr.bracing().describe()});
+        facts.add(new String[] {"Bracing", m.overhangs() ? "top flange by the deck; bottom flange (in compression over the"
+                + " support and on the overhang) braced at the support only, Cb = 1.0 there (common practice)" : cr.bracing().describe()});
         facts.add(new String[] {"Tributary area", Fmt.v(m.tributaryArea(), Quantity.FLOOR_AREA, us) + " of deck carried directly"});
         facts.add(new String[] {"Live reduction", liveReduction(m, us)});
         facts.add(new String[] {"Deflection limits", FrontMatter.limit(cr.deflection().live()) + " live, "
@@ -226,12 +231,46 @@ final class MemberSheets {
     }
 
     private static void forces(Context cx, MemberResult m) {
+        if (m.overhangs()) {
+            overhangForces(cx, m);
+            return;
+        }
         PageFlow f = cx.flow;
         LoadCombination c = governingCombination(m);
         f.heading3("Shear and moment under " + c.name() + (m.criteria().method() == DesignMethod.LRFD ? ", factored" : "")
                 + (m.criteria().selfWeight() ? ", own weight included" : "") + " (governs flexure)",
                 SpanDiagrams.forceHeight());
         SpanDiagrams.forces(f, factored(m, c), cx.us);
+        f.gap(2);
+    }
+
+    /**
+     * An overhanging member: its statics under each live-load pattern of the combination that governs
+     * flexure (AISC Manual Table 3-23 overhang cases, solved for the actual loads; ASCE 7-16 §4.3.3).
+     */
+    private static void overhangForces(Context cx, MemberResult m) {
+        PageFlow f = cx.flow;
+        UnitSystem us = cx.us;
+        org.baywright.design.OverhangDesigner o = new org.baywright.design.OverhangDesigner(m.loads(), m.criteria());
+        LoadCombination c = governingCombination(m);
+        int ci = Math.max(0, o.combinations().indexOf(c));
+        double w = m.criteria().selfWeight() ? m.design().section().weight() : 0;
+        f.heading3("Overhang statics under " + c.name() + (m.criteria().method() == DesignMethod.LRFD ? ", factored" : "")
+                + (m.criteria().selfWeight() ? ", own weight included" : "") + ", by live-load pattern (ASCE 7-16 §4.3.3) ["
+                + Fmt.unit(Quantity.FORCE, us) + ", " + Fmt.unit(Quantity.MOMENT, us) + "]", 40);
+        Table t = new Table().left("Pattern", 46).right("R1", 12).right("R2", 12).right("M sagging", 14).right("M over support", 16)
+                .fontSize(7f);
+        for (int p = 0; p < o.patternCount(); p++) {
+            org.baywright.analysis.OverhangSpan s = o.statics(ci, p, w);
+            double sag = s.extremeMoment(s.supportA(), s.supportB(), false).value();
+            double hog = s.extremeMoment(0, s.length(), true).value();
+            t.row(o.patternText(p), Fmt.n(s.reactionA(), Quantity.FORCE, us), Fmt.n(s.reactionB(), Quantity.FORCE, us),
+                    Fmt.n(sag, Quantity.MOMENT, us), Fmt.n(hog, Quantity.MOMENT, us));
+        }
+        t.draw(f);
+        f.paragraph(f.small, "R1, R2: reactions at the first and second support (a negative value is uplift). "
+                + org.baywright.design.OverhangDesigner.BRACING_ASSUMPTION + " Tip deflection limits take l = 2 × the overhang"
+                + " (IBC Table 1604.3, footnote).");
         f.gap(2);
     }
 

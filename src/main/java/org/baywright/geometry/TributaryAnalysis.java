@@ -118,6 +118,8 @@ public final class TributaryAnalysis {
         private double loadedArea;
         private Geometry loadedUnion;
         private final Map<String, Double> areaLoadAreas = new java.util.LinkedHashMap<>();
+        /** Per deck, the longest span of each pair of supports and overhang of each support and side. */
+        private final List<DeckSpan> deckSpans = new ArrayList<>();
 
         /** An area to nine significant figures in the plan's unit (an invariant check: the digits matter). */
         private String exact(double squareMetres) {
@@ -200,7 +202,7 @@ public final class TributaryAnalysis {
                         "width profiles integrate to %s but the tributary areas add up to %s",
                         exact(widthSum), exact(tributary)), List.of()));
             }
-            return new FloorTributary(out, loadedArea, tributary, problems, pointShares, lineShares, areaLoadAreas);
+            return new FloorTributary(out, loadedArea, tributary, problems, pointShares, lineShares, areaLoadAreas, deckSpans);
         }
 
         /** Runs a step; an unexpected failure becomes a located problem instead of an exception. */
@@ -396,11 +398,38 @@ public final class TributaryAnalysis {
                             t.chordB() * factor);
                 }
             }
+            List<DeckSpan> spans = spans(ctx);
             drawn.forEach((i, polys) -> drawings.get(i).addAll(polys));
+            deckSpans.addAll(spans);
             undeliveredArea += deckUnsupported;
             decks.add(ctx);
             deckTraps.add(byMember);
             problems.addAll(found);
+        }
+
+        /**
+         * The deck's spans and overhangs, the longest of each pair of members (span) and of each member
+         * and side (overhang), in the order first found.
+         */
+        private List<DeckSpan> spans(DeckContext ctx) {
+            Map<String, List<DeckLayout.Reach>> byKey = new LinkedHashMap<>();
+            for (DeckLayout.Reach r : ctx.layout().reaches()) {
+                byKey.computeIfAbsent(r.a() + "|" + r.b() + "|" + r.side() + "|" + r.backspan(), k -> new ArrayList<>()).add(r);
+            }
+            List<DeckSpan> out = new ArrayList<>();
+            for (List<DeckLayout.Reach> all : byKey.values()) {
+                double longest = all.stream().mapToDouble(DeckLayout.Reach::length).max().orElse(0);
+                // of the places where it is (within the tolerance) longest, the middle one: a constant
+                // span is drawn half-way along its members, not at a corner
+                List<DeckLayout.Reach> at = new ArrayList<>(all.stream().filter(r -> r.length() >= longest - tol).toList());
+                at.sort(java.util.Comparator.comparingDouble(DeckLayout.Reach::v));
+                DeckLayout.Reach r = at.get(at.size() / 2);
+                Point from = ctx.frame().toPlan(r.ua(), r.v());
+                Point to = ctx.frame().toPlan(r.ub(), r.v());
+                out.add(new DeckSpan(ctx.deckId(), r.b() < 0, longest, from, to, placed.get(r.a()).id(),
+                        r.b() < 0 ? "" : placed.get(r.b()).id(), r.backspan()));
+            }
+            return out;
         }
 
         private void reportUnsupported(DeckContext ctx, List<Geometry> parts, boolean noSupports,

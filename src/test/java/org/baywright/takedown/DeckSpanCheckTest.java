@@ -229,6 +229,30 @@ class DeckSpanCheckTest {
                         .max().orElse(0), EPS));
     }
 
+    /** The floor's deck drawn as two outlines meeting at x = 25 ft (mid-bay, on no member), spanning at the angles given. */
+    private static Plan splitDeck(double west, double east) {
+        return withFloor(regular(10, 30), f -> with(f, f.slabEdge(), List.of(
+                new Deck("DK-W", Polygon.rectangle(0, 0, ft(25), ft(30)), west),
+                new Deck("DK-E", Polygon.rectangle(ft(25), 0, ft(60), ft(30)), east)), f.members()));
+    }
+
+    @Test
+    void aDeckDrawnInTwoOutlinesWithOneSpanDirectionIsOneDeck() {
+        // same direction: continuous over the joint, the beams at 20 and 30 ft carry a 10 ft span across it
+        Plan same = splitDeck(0, 0);
+        Plan turned = splitDeck(0, 90);
+        List<DeckSpan> across = spans(same).stream().filter(s -> !s.overhang() && Math.abs(s.length() - ft(10)) < EPS
+                && s.memberA().equals("IF-AB-12/2") && s.memberB().equals("B-B-12")).toList();
+        assertAll(() -> assertEquals(ft(10), longestSpan(same), EPS),
+                () -> assertEquals(1, across.size(), () -> spans(same).toString()),
+                () -> assertEquals("DK-W", across.get(0).deckId(), "given to the deck holding its middle (x = 25 ft)"),
+                () -> assertEquals(List.of(), problems(same, DeckChecks.DECK_OVERHANG)),
+                () -> assertEquals(List.of(), problems(same, DeckChecks.DECK_CANTILEVER)),
+                // turned east deck: the west deck ends at 25 ft, 5 ft beyond the beam at 20 ft (a span behind it)
+                () -> assertEquals(1, problems(turned, DeckChecks.DECK_OVERHANG).stream()
+                        .filter(p -> p.objectId().equals("DK-W")).count(), () -> problems(turned, DeckChecks.DECK_OVERHANG).toString()));
+    }
+
     @Test
     void membersDrawnOnTheLineAreNotDoubledWhenTheyOnlyPartlyCoverIt() {
         // a member along line B over the first 10 ft of the bay: a member is already there, so none is added

@@ -37,6 +37,12 @@ public final class DeckChecks {
     private DeckChecks() {
     }
 
+    /** True for a problem of this check: its place is a segment (two points) to draw as a line, not as marks. */
+    public static boolean isSegment(Problem p) {
+        return p.where().size() == 2 && (p.kind().equals(DECK_SPAN) || p.kind().equals(DECK_OVERHANG)
+                || p.kind().equals(DECK_CANTILEVER));
+    }
+
     /**
      * The problems of one floor layout's decks.
      *

@@ -265,4 +265,36 @@ class DeckSpanCheckTest {
         List<Member> members = Framing.members(plan, plan.floors().get(0));
         assertEquals(1, onLine(members, ft(30)).size(), () -> members.toString());
     }
+
+    // ------------------------------------------------------------------ the plans in plans/
+
+    @Test
+    void everyPlanInPlansStillLoadsAndOnlyTheDemosBalconyMayBeFlagged() throws java.io.IOException {
+        // the deck limits are new, optional fields: every plan file reads with the defaults and runs.
+        // The demo's balcony deck cantilevers from the girders on grid 1 with nothing behind it
+        // (issue 12 item 4): that is flagged until the demo is reworked with cantilevered beams and
+        // backspans, and nothing else on it is (after the rework, nothing at all).
+        List<java.nio.file.Path> files;
+        try (var walk = java.nio.file.Files.walk(java.nio.file.Path.of("plans"))) {
+            files = walk.filter(f -> f.toString().endsWith(".bay.json")).sorted().toList();
+        }
+        List<org.junit.jupiter.api.function.Executable> checks = new ArrayList<>();
+        checks.add(() -> assertTrue(files.size() >= 2, files::toString));
+        for (java.nio.file.Path f : files) {
+            var read = org.baywright.io.PlanFiles.read(f);
+            checks.add(() -> assertTrue(read.ok(), () -> f + ": " + read.problems()));
+            if (!read.ok()) {
+                continue;
+            }
+            List<Problem> deck = PlanRun.run(read.plan().orElseThrow(), CATALOG).takedown().problems().stream()
+                    .filter(DeckChecks::isSegment).toList();
+            if (f.getFileName().toString().startsWith("harbourview")) {
+                checks.add(() -> assertTrue(deck.stream().allMatch(p -> p.kind().equals(DeckChecks.DECK_CANTILEVER)
+                        && p.objectId().equals("DK-balcony")), () -> f + ": " + deck));
+            } else {
+                checks.add(() -> assertEquals(List.of(), deck, f.toString()));
+            }
+        }
+        assertAll(checks);
+    }
 }

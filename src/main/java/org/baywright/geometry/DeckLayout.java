@@ -167,8 +167,9 @@ final class DeckLayout {
 
     /**
      * Every span between neighbouring supports and every overhang beyond the outermost support of each
-     * piece, at both lines of each strip thicker than the tolerance (supports and edges are straight
-     * within a strip, so the longest is at one of them). Spans and overhangs not longer than the
+     * piece, at both lines and the middle of each strip thicker than the tolerance (supports and edges
+     * are straight within a strip, so the longest is at one of its lines; the middle gives a span that
+     * does not vary a place half-way along it). Spans and overhangs not longer than the
      * tolerance (coincident members, a member on the edge) are left out.
      */
     List<Reach> reaches() {
@@ -185,7 +186,7 @@ final class DeckLayout {
                     continue;
                 }
                 boolean backspan = s.get(n - 1).line().at(mid) - s.get(0).line().at(mid) > tol;
-                for (double v : new double[] {strip.va(), strip.vb()}) {
+                for (double v : new double[] {strip.va(), mid, strip.vb()}) {
                     for (int i = 0; i + 1 < n; i++) {
                         double ua = s.get(i).line().at(v);
                         double ub = s.get(i + 1).line().at(v);

@@ -156,6 +156,61 @@ final class DeckLayout {
     }
 
     /**
+     * A span or overhang found in one strip, in the frame: from support {@code a} at {@code ua} to
+     * support {@code b} (or, for an overhang, {@code b = -1} and the edge) at {@code ub}, at ordinate
+     * {@code v}.
+     *
+     * @param side for an overhang, -1 towards smaller u, +1 towards larger u; 0 for a span
+     */
+    record Reach(int a, int b, int side, double length, double ua, double ub, double v, boolean backspan) {
+    }
+
+    /**
+     * Every span between neighbouring supports and every overhang beyond the outermost support of each
+     * piece, at both lines and the middle of each strip thicker than the tolerance (supports and edges
+     * are straight within a strip, so the longest is at one of its lines; the middle gives a span that
+     * does not vary a place half-way along it). Spans and overhangs not longer than the
+     * tolerance (coincident members, a member on the edge) are left out.
+     */
+    List<Reach> reaches() {
+        List<Reach> out = new ArrayList<>();
+        for (Strip strip : strips) {
+            if (!(strip.vb() - strip.va() > tol)) {
+                continue;
+            }
+            double mid = 0.5 * (strip.va() + strip.vb());
+            for (Piece piece : strip.pieces()) {
+                List<Support> s = piece.supports();
+                int n = s.size();
+                if (n == 0) {
+                    continue;
+                }
+                boolean backspan = s.get(n - 1).line().at(mid) - s.get(0).line().at(mid) > tol;
+                for (double v : new double[] {strip.va(), mid, strip.vb()}) {
+                    for (int i = 0; i + 1 < n; i++) {
+                        double ua = s.get(i).line().at(v);
+                        double ub = s.get(i + 1).line().at(v);
+                        if (ub - ua > tol) {
+                            out.add(new Reach(s.get(i).member(), s.get(i + 1).member(), 0, ub - ua, ua, ub, v, true));
+                        }
+                    }
+                    double u0 = s.get(0).line().at(v);
+                    double left = piece.left().at(v);
+                    if (u0 - left > tol) {
+                        out.add(new Reach(s.get(0).member(), -1, -1, u0 - left, u0, left, v, backspan));
+                    }
+                    double u1 = s.get(n - 1).line().at(v);
+                    double right = piece.right().at(v);
+                    if (right - u1 > tol) {
+                        out.add(new Reach(s.get(n - 1).member(), -1, 1, right - u1, u1, right, v, backspan));
+                    }
+                }
+            }
+        }
+        return out;
+    }
+
+    /**
      * How far along the span a point may lie outside an edge and still be within {@code tol} of it,
      * measured square to the edge: tol·√(1 + (du/dv)²), capped at 60·tol (an edge 1° off the span) so
      * that edges almost along the span do not reach across the deck.

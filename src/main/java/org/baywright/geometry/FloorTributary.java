@@ -18,10 +18,12 @@ import java.util.Map;
  * @param lineShares by line load id: the members that receive it (empty when it is not delivered)
  * @param areaLoadAreas by area load id: the area of its outline lying on the loaded deck, m² (what the
  *     load applies to the structure, independent of how it is shared among members)
+ * @param deckSpans per deck, the longest span between each pair of neighbouring supporting members
+ *     and the longest overhang beyond each outermost one, along the span (see {@link DeckSpan})
  */
 public record FloorTributary(Map<String, MemberTributary> members, double loadedArea, double tributaryArea,
         List<GeometryProblem> problems, Map<String, List<LoadShare>> pointShares,
-        Map<String, List<LineShare>> lineShares, Map<String, Double> areaLoadAreas) {
+        Map<String, List<LineShare>> lineShares, Map<String, Double> areaLoadAreas, List<DeckSpan> deckSpans) {
 
     public FloorTributary {
         members = Collections.unmodifiableMap(new LinkedHashMap<>(members));
@@ -29,6 +31,7 @@ public record FloorTributary(Map<String, MemberTributary> members, double loaded
         pointShares = copy(pointShares);
         lineShares = copy(lineShares);
         areaLoadAreas = Collections.unmodifiableMap(new LinkedHashMap<>(areaLoadAreas));
+        deckSpans = List.copyOf(deckSpans);
     }
 
     /** The problems of one kind (see the constants of {@link GeometryProblem}). */

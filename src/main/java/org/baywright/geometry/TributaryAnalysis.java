@@ -118,6 +118,8 @@ public final class TributaryAnalysis {
         private double loadedArea;
         private Geometry loadedUnion;
         private final Map<String, Double> areaLoadAreas = new java.util.LinkedHashMap<>();
+        /** Per deck, the longest span of each pair of supports and overhang of each support and side. */
+        private final List<DeckSpan> deckSpans = new ArrayList<>();
 
         /** An area to nine significant figures in the plan's unit (an invariant check: the digits matter). */
         private String exact(double squareMetres) {
@@ -151,6 +153,7 @@ public final class TributaryAnalysis {
                 loadWidths.add(new LinkedHashMap<>());
             }
             guard("decks", floor.id(), this::layDecks);
+            guard("deck spans", floor.id(), this::measureSpans);
             guard("area loads", floor.id(), this::areaLoads);
             Map<String, List<LoadShare>> pointShares = new LinkedHashMap<>();
             Map<String, List<LineShare>> lineShares = new LinkedHashMap<>();
@@ -200,7 +203,7 @@ public final class TributaryAnalysis {
                         "width profiles integrate to %s but the tributary areas add up to %s",
                         exact(widthSum), exact(tributary)), List.of()));
             }
-            return new FloorTributary(out, loadedArea, tributary, problems, pointShares, lineShares, areaLoadAreas);
+            return new FloorTributary(out, loadedArea, tributary, problems, pointShares, lineShares, areaLoadAreas, deckSpans);
         }
 
         /** Runs a step; an unexpected failure becomes a located problem instead of an exception. */
@@ -327,9 +330,8 @@ public final class TributaryAnalysis {
             }
         }
 
-        private void layDeck(DeckInput d, Geometry region) {
-            SpanFrame frame = SpanFrame.ofDegrees(d.angle());
-            Geometry inFrame = frame.toFrame(region, shapes.frameFactory);
+        /** The members that may carry a deck spanning in {@code frame}: those not parallel to its span. */
+        private List<DeckLayout.Support> candidates(SpanFrame frame) {
             List<DeckLayout.Support> candidates = new ArrayList<>();
             for (PlacedMember m : placed) {
                 double u1 = frame.u(m.a());
@@ -340,6 +342,43 @@ public final class TributaryAnalysis {
                     candidates.add(new DeckLayout.Support(m.index(), FrameLine.through(u1, v1, u2, v2)));
                 }
             }
+            return candidates;
+        }
+
+        /**
+         * The spans and overhangs of every laid-out deck. Decks with the same span direction that meet
+         * are one continuous deck for this purpose (a deck drawn in two outlines does not end where they
+         * meet): they are laid out together and each span or overhang is given to the deck holding its
+         * middle. A deck alone in its direction keeps its own layout.
+         */
+        private void measureSpans() {
+            Map<Double, List<DeckContext>> byAngle = new LinkedHashMap<>();
+            for (DeckContext c : decks) {
+                double a = c.spanAngle() % 360.0;
+                byAngle.computeIfAbsent(a < 0 ? a + 360.0 : a + 0.0, k -> new ArrayList<>()).add(c);
+            }
+            for (List<DeckContext> group : byAngle.values()) {
+                if (group.size() == 1) {
+                    deckSpans.addAll(spans(group.get(0), group.get(0).layout(), group));
+                    continue;
+                }
+                try {
+                    DeckContext first = group.get(0);
+                    Geometry union = shapes.frameUnion(group.stream().map(DeckContext::region).toList());
+                    DeckLayout together = DeckLayout.build(union, candidates(first.frame()), tol);
+                    deckSpans.addAll(spans(first, together, group));
+                } catch (RuntimeException e) {
+                    for (DeckContext c : group) {
+                        deckSpans.addAll(spans(c, c.layout(), List.of(c)));
+                    }
+                }
+            }
+        }
+
+        private void layDeck(DeckInput d, Geometry region) {
+            SpanFrame frame = SpanFrame.ofDegrees(d.angle());
+            Geometry inFrame = frame.toFrame(region, shapes.frameFactory);
+            List<DeckLayout.Support> candidates = candidates(frame);
             DeckLayout layout = DeckLayout.build(inFrame, candidates, tol);
             DeckContext ctx = new DeckContext(d.id(), d.angle(), frame, layout, inFrame, tol);
 
@@ -401,6 +440,46 @@ public final class TributaryAnalysis {
             decks.add(ctx);
             deckTraps.add(byMember);
             problems.addAll(found);
+        }
+
+        /**
+         * The spans and overhangs of {@code layout} (in {@code frame}'s deck frame), each given to the deck
+         * of {@code owners} holding its middle; per deck the longest of each pair of members (span) and
+         * of each member and side (overhang), in the order first found.
+         */
+        private List<DeckSpan> spans(DeckContext frame, DeckLayout layout, List<DeckContext> owners) {
+            Map<String, List<DeckLayout.Reach>> byKey = new LinkedHashMap<>();
+            Map<String, String> owner = new LinkedHashMap<>();
+            for (DeckLayout.Reach r : layout.reaches()) {
+                String deck = owners.get(0).deckId();
+                if (owners.size() > 1) {
+                    double u = 0.5 * (r.ua() + r.ub());
+                    for (DeckContext c : owners) {
+                        if (c.layout().locate(u, r.v()) != null) {
+                            deck = c.deckId();
+                            break;
+                        }
+                    }
+                }
+                String key = deck + "|" + r.a() + "|" + r.b() + "|" + r.side() + "|" + r.backspan();
+                byKey.computeIfAbsent(key, k -> new ArrayList<>()).add(r);
+                owner.put(key, deck);
+            }
+            List<DeckSpan> out = new ArrayList<>();
+            for (Map.Entry<String, List<DeckLayout.Reach>> e : byKey.entrySet()) {
+                List<DeckLayout.Reach> all = e.getValue();
+                double longest = all.stream().mapToDouble(DeckLayout.Reach::length).max().orElse(0);
+                // of the places where it is (within the tolerance) longest, the middle one: a constant
+                // span is drawn half-way along its members, not at a corner
+                List<DeckLayout.Reach> at = new ArrayList<>(all.stream().filter(r -> r.length() >= longest - tol).toList());
+                at.sort(java.util.Comparator.comparingDouble(DeckLayout.Reach::v));
+                DeckLayout.Reach r = at.get(at.size() / 2);
+                Point from = frame.frame().toPlan(r.ua(), r.v());
+                Point to = frame.frame().toPlan(r.ub(), r.v());
+                out.add(new DeckSpan(owner.get(e.getKey()), r.b() < 0, longest, from, to, placed.get(r.a()).id(),
+                        r.b() < 0 ? "" : placed.get(r.b()).id(), r.backspan()));
+            }
+            return out;
         }
 
         private void reportUnsupported(DeckContext ctx, List<Geometry> parts, boolean noSupports,

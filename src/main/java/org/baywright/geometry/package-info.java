@@ -35,6 +35,10 @@
  *       where two members meet, the one the point is inside of wins over one it is at the end of (a load
  *       at a beam's end on a girder goes to the girder). Otherwise the lever rule between the supports
  *       on either side along the span, all to the outer support on an overhang.</li>
+ *   <li><b>Deck spans.</b> The same decomposition measures, along the span, each span between
+ *       neighbouring supports and each overhang beyond the outermost one
+ *       ({@link org.baywright.geometry.DeckSpan}, on {@link org.baywright.geometry.FloorTributary#deckSpans()});
+ *       decks of one span direction that meet are measured as one deck. Limits are not checked here.</li>
  *   <li><b>Line loads.</b> Portions lying along a member (within the tolerance) go to it with factor 1.
  *       The rest is cut where the supports on either side may change and shared by the lever rule. A
  *       portion running along the span maps onto a single point of each member: its share is a point

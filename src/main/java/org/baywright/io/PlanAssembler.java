@@ -488,7 +488,30 @@ final class PlanAssembler {
             problems.error("out-of-range", p + "/spanAngle", id, "spanAngle must be a finite number of degrees");
             return null;
         }
-        return outline == null || d.spanAngle() == null || d.id() == null ? null : new Deck(id, outline, d.spanAngle());
+        double maxSpan = deckLimit(d.maxSpan(), p + "/maxSpan", id, "maxSpan", Deck.DEFAULT_MAX_SPAN);
+        double maxOverhang = deckLimit(d.maxOverhang(), p + "/maxOverhang", id, "maxOverhang", Deck.DEFAULT_MAX_OVERHANG);
+        if (Double.isNaN(maxSpan) || Double.isNaN(maxOverhang)) {
+            return null;
+        }
+        return outline == null || d.spanAngle() == null || d.id() == null ? null
+                : new Deck(id, outline, d.spanAngle(), maxSpan, maxOverhang);
+    }
+
+    /** A deck's span or overhang limit, m: the default when absent, NaN when wrong (reported). */
+    private double deckLimit(String text, String p, String id, String label, double def) {
+        if (text == null) {
+            return def;
+        }
+        double v = length(text, p, id, label);
+        if (Double.isNaN(v)) {
+            return v;
+        }
+        if (!(v > 0)) {
+            problems.error("out-of-range", p, id, label + ": \"" + ShapeCheck.clip(text)
+                    + "\" must be a length greater than zero, from the deck maker's tables");
+            return Double.NaN;
+        }
+        return v;
     }
 
     private Member member(MemberDoc m, String p) {

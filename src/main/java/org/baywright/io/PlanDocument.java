@@ -66,7 +66,8 @@ final class PlanDocument {
     }
 
     record DeckDoc(@Required String id, @Required @QuantityOf(Dimension.LENGTH) List<List<String>> outline,
-            @Required Double spanAngle) {
+            @Required Double spanAngle, @QuantityOf(Dimension.LENGTH) String maxSpan,
+            @QuantityOf(Dimension.LENGTH) String maxOverhang) {
     }
 
     record MemberDoc(@Required String id, @Required String kind,

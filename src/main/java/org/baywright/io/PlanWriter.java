@@ -95,7 +95,10 @@ final class PlanWriter {
     }
 
     private DeckDoc deck(Deck d) {
-        return new DeckDoc(d.id(), polygon(d.outline()), finite(d.spanAngle()));
+        // the limits are written only when the user gave them, so a plan with the defaults reads as before
+        boolean byDefault = d.defaultLimits();
+        return new DeckDoc(d.id(), polygon(d.outline()), finite(d.spanAngle()), byDefault ? null : length(d.maxSpan()),
+                byDefault ? null : length(d.maxOverhang()));
     }
 
     private MemberDoc member(Member m) {

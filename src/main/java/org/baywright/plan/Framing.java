@@ -12,6 +12,15 @@ import java.util.Optional;
  * evenly spaced across the bay: {@code count} beams at spacing (bay width)/(count + 1), or, by maximum
  * spacing, the fewest beams whose spacing does not exceed it. Generated ids are the infill's id with
  * the beam's number, e.g. {@code IF-AB-12/1}.
+ *
+ * <p>The spacing is measured from the bay's sides, so the deck reaches the spacing the user gave only if
+ * something carries it on those sides too: the two grid lines of the bay parallel to the beams (the
+ * column lines). An infill therefore also places a <em>line beam</em> on each of those sides, from girder
+ * line to girder line, unless a member already lies along that side (a member drawn there, or the line
+ * beam of an earlier infill of the floor sharing the side): two beams are never placed on one line. Line
+ * beams are named by the side: {@code IF-AB-12/W}, {@code /E} (beams along y) or {@code /S}, {@code /N}
+ * (beams along x). Without them an infill at 10 ft in a 30 ft bay would leave the deck spanning 20 ft
+ * across the column line between two bays.
  */
 public final class Framing {
     private Framing() {
@@ -20,17 +29,32 @@ public final class Framing {
     /** The most beams one infill may generate; a plan asking for more is refused with a located problem. */
     public static final int MAX_INFILL_BEAMS = 1000;
 
-    /** All members of a floor: explicit ones first, then infill beams in order. */
+    /**
+     * Distance, m, within which a member counts as lying on a bay's side line (1 mm: far below any
+     * drawing precision, far above the rounding of coordinates read from a file).
+     */
+    public static final double ON_LINE = 1e-3;
+
+    /** All members of a floor: explicit ones first, then each infill's beams in order (line beams deduplicated). */
     public static List<Member> members(Plan plan, Floor floor) {
         List<Member> out = new ArrayList<>(floor.members());
         for (Infill inf : floor.infills()) {
-            out.addAll(infillBeams(plan, inf));
+            out.addAll(infillBeams(plan, inf, out));
         }
         return out;
     }
 
-    /** The beams one infill generates (empty if its grid lines are unknown; validation reports that). */
+    /** The beams one infill generates on its own: its beams and both line beams (empty if its grid lines are unknown). */
     public static List<Member> infillBeams(Plan plan, Infill inf) {
+        return infillBeams(plan, inf, List.of());
+    }
+
+    /**
+     * The beams one infill generates among the members already on the floor: its evenly spaced beams,
+     * then a line beam on each side of the bay parallel to them where no member of {@code existing} lies
+     * along that side (empty if its grid lines are unknown; validation reports that).
+     */
+    public static List<Member> infillBeams(Plan plan, Infill inf, List<Member> existing) {
         Optional<GridLine> gx0 = plan.gridLine(inf.x0());
         Optional<GridLine> gx1 = plan.gridLine(inf.x1());
         Optional<GridLine> gy0 = plan.gridLine(inf.y0());
@@ -52,7 +76,41 @@ public final class Framing {
             Point e = alongX ? new Point(xb, c) : new Point(c, yb);
             out.add(new Member(inf.id() + "/" + i, MemberKind.BEAM, s, e, Optional.empty()));
         }
+        double lo = alongX ? xa : ya;
+        double hi = alongX ? xb : yb;
+        double[] sides = alongX ? new double[] {ya, yb} : new double[] {xa, xb};
+        String[] names = alongX ? new String[] {"S", "N"} : new String[] {"W", "E"};
+        for (int k = 0; k < 2; k++) {
+            double c = sides[k];
+            if (k == 1 && !(c - sides[0] > ON_LINE) || occupied(existing, alongX, c, lo, hi)) {
+                continue;
+            }
+            Point s = alongX ? new Point(lo, c) : new Point(c, lo);
+            Point e = alongX ? new Point(hi, c) : new Point(c, hi);
+            out.add(new Member(inf.id() + "/" + names[k], MemberKind.BEAM, s, e, Optional.empty()));
+        }
         return out;
+    }
+
+    /**
+     * True when a member lies along the line {@code y = c} ({@code alongX}) or {@code x = c} over part of
+     * {@code [lo, hi]} longer than {@link #ON_LINE}.
+     */
+    private static boolean occupied(List<Member> members, boolean alongX, double c, double lo, double hi) {
+        for (Member m : members) {
+            double a0 = alongX ? m.start().y() : m.start().x();
+            double a1 = alongX ? m.end().y() : m.end().x();
+            if (Math.abs(a0 - c) > ON_LINE || Math.abs(a1 - c) > ON_LINE) {
+                continue;
+            }
+            double s0 = alongX ? m.start().x() : m.start().y();
+            double s1 = alongX ? m.end().x() : m.end().y();
+            double overlap = Math.min(hi, Math.max(s0, s1)) - Math.max(lo, Math.min(s0, s1));
+            if (overlap > ON_LINE) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /**

@@ -136,7 +136,7 @@ public final class PlanEdits {
                     .toList();
             List<Infill> infills = f.infills().stream().filter(i -> !removed.contains(i.x0()) && !removed.contains(i.x1())
                     && !removed.contains(i.y0()) && !removed.contains(i.y1())).toList();
-            List<Deck> decks = f.decks().stream().map(d -> new Deck(d.id(), movePoly.apply(d.outline()), d.spanAngle()))
+            List<Deck> decks = f.decks().stream().map(d -> new Deck(d.id(), movePoly.apply(d.outline()), d.spanAngle(), d.maxSpan(), d.maxOverhang()))
                     .filter(d -> area(d.outline()) > SAME).toList();
             List<Opening> openings = f.openings().stream().filter(o -> o.outline().vertices().stream().allMatch(kept))
                     .map(o -> new Opening(o.id(), movePoly.apply(o.outline()))).toList();
@@ -489,7 +489,7 @@ public final class PlanEdits {
             if (f.decks().stream().noneMatch(d -> d.id().equals(deckId))) {
                 throw new IllegalArgumentException("floor " + floorId + " has no deck " + deckId);
             }
-            List<Deck> ds = f.decks().stream().map(d -> d.id().equals(deckId) ? new Deck(d.id(), d.outline(), a) : d).toList();
+            List<Deck> ds = f.decks().stream().map(d -> d.id().equals(deckId) ? new Deck(d.id(), d.outline(), a, d.maxSpan(), d.maxOverhang()) : d).toList();
             return new Floor(f.id(), f.name(), f.roof(), f.slabEdge(), ds, f.members(), f.infills(), f.openings(),
                     f.areaLoads(), f.lineLoads(), f.pointLoads());
         });
@@ -586,7 +586,7 @@ public final class PlanEdits {
         UnaryOperator<Point> mv = q -> new Point(q.x() + dx, q.y() + dy);
         UnaryOperator<Polygon> mvp = poly -> new Polygon(poly.vertices().stream().map(mv).toList());
         Plan edited = editFloor(p, floorId, f -> new Floor(f.id(), f.name(), f.roof(), f.slabEdge(),
-                f.decks().stream().map(d -> ids.contains(d.id()) ? new Deck(d.id(), mvp.apply(d.outline()), d.spanAngle()) : d)
+                f.decks().stream().map(d -> ids.contains(d.id()) ? new Deck(d.id(), mvp.apply(d.outline()), d.spanAngle(), d.maxSpan(), d.maxOverhang()) : d)
                         .toList(),
                 f.members().stream().map(m -> ids.contains(m.id())
                         ? new Member(m.id(), m.kind(), mv.apply(m.start()), mv.apply(m.end()), m.fixedSection()) : m).toList(),

@@ -133,7 +133,7 @@ public final class Variations {
     }
 
     private static Floor mapFloor(Floor fl, UnaryOperator<Point> f) {
-        List<Deck> decks = fl.decks().stream().map(d -> new Deck(d.id(), poly(d.outline(), f), d.spanAngle())).toList();
+        List<Deck> decks = fl.decks().stream().map(d -> new Deck(d.id(), poly(d.outline(), f), d.spanAngle(), d.maxSpan(), d.maxOverhang())).toList();
         List<Member> members = fl.members().stream()
                 .map(mb -> new Member(mb.id(), mb.kind(), f.apply(mb.start()), f.apply(mb.end()), mb.fixedSection())).toList();
         List<Opening> openings = fl.openings().stream().map(o -> new Opening(o.id(), poly(o.outline(), f))).toList();
@@ -201,7 +201,7 @@ public final class Variations {
             List<GridLine.Axis> old = fl.infills().stream().map(Infill::direction).distinct().toList();
             List<Deck> decks = fl.decks().stream().map(d -> {
                 boolean turn = old.isEmpty() || old.stream().anyMatch(a -> sameLine(d.spanAngle(), deckAngleOnto(a)));
-                return turn ? new Deck(d.id(), d.outline(), deckAngleOnto(direction)) : d;
+                return turn ? new Deck(d.id(), d.outline(), deckAngleOnto(direction), d.maxSpan(), d.maxOverhang()) : d;
             }).toList();
             List<Member> members = fl.members().stream().map(m -> {
                 boolean northSouth = Math.abs(m.start().x() - m.end().x()) <= TOL && onAny(m.start().x(), xs);

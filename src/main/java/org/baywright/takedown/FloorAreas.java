@@ -9,7 +9,8 @@ import org.baywright.plan.Problem;
 
 /**
  * The second stage, per floor layout: the tributary areas of its members (one-way deck along the span
- * direction), with the geometry's coverage problems located on the floor.
+ * direction), with the geometry's coverage problems located on the floor and the decks' span and
+ * overhang checks ({@link DeckChecks}).
  */
 public record FloorAreas(FloorTributary tributary, List<Problem> problems) {
     public FloorAreas {
@@ -27,6 +28,7 @@ public record FloorAreas(FloorTributary tributary, List<Problem> problems) {
             problems.add(new Problem(Problem.Severity.ERROR, g.kind(), "floor " + in.floor().id(), g.objectId(), g.message(),
                     g.where()));
         }
+        problems.addAll(DeckChecks.check(in.floor(), trib.deckSpans(), units));
         return new FloorAreas(trib, problems);
     }
 }

@@ -47,7 +47,7 @@ public record FloorInput(Floor floor, List<Member> members, List<Problem> leftOu
                         + " beams (give a smaller count or a larger maxSpacing); it was left out"));
                 continue;
             }
-            out.addAll(Framing.infillBeams(plan, inf));
+            out.addAll(Framing.infillBeams(plan, inf, out));
         }
         List<Column> columns = plan.columns().stream().filter(c -> present.contains(c.id())).toList();
         return new FloorInput(floor, out, left, columns);

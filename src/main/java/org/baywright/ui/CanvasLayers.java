@@ -26,6 +26,7 @@ import org.baywright.plan.Point;
 import org.baywright.plan.PointLoadItem;
 import org.baywright.plan.Polygon;
 import org.baywright.plan.Problem;
+import org.baywright.takedown.DeckChecks;
 import org.baywright.report.drawing.Cividis;
 import org.baywright.report.drawing.Rgb;
 import org.baywright.takedown.MemberResult;
@@ -150,6 +151,16 @@ final class CanvasLayers {
                 continue; // drawn on the levels of its own floor layout
             }
             boolean hot = pr.equals(shown);
+            if (DeckChecks.isSegment(pr)) {
+                // a deck span or overhang: the reach itself, from the member to the member or edge
+                Point a = pr.where().get(0);
+                Point b = pr.where().get(1);
+                g.setStroke(PROBLEM);
+                g.setLineWidth(hot ? 3 : 2);
+                g.setLineDashes(8, 4);
+                g.strokeLine(view.screenX(a.x()), view.screenY(a.y()), view.screenX(b.x()), view.screenY(b.y()));
+                g.setLineDashes();
+            }
             for (Point q : pr.where()) {
                 double x = view.screenX(q.x());
                 double y = view.screenY(q.y());

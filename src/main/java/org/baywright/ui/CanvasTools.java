@@ -136,14 +136,8 @@ public final class CanvasTools {
 
     /** The floor's members, infill beams included. */
     private List<Member> members(Floor f) {
-        List<Member> out = new ArrayList<>(f.members());
         Plan p = model.plan();
-        if (p != null) {
-            for (var inf : f.infills()) {
-                out.addAll(Framing.infillBeams(p, inf));
-            }
-        }
-        return out;
+        return p == null ? new ArrayList<>(f.members()) : new ArrayList<>(Framing.members(p, f));
     }
 
     /** The pointer moved with no button down. */

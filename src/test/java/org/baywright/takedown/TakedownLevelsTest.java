@@ -43,7 +43,8 @@ class TakedownLevelsTest {
     /**
      * Two 30 × 30 ft bays side by side, one floor layout at two levels. A 60 ft girder G-1 runs along
      * y = 0 over the middle column C-B1, which stops at Level 2. At Level 2 the beam on grid B bears on
-     * C-B1; at Level 3 it bears on G-1, which must then carry it.
+     * C-B1; at Level 3 it bears on G-1, which must then carry it. The deck spans the 30 ft between the
+     * beams, so it is given a 30 ft span limit (this test is about levels, not the deck's span).
      */
     private static Plan plan() {
         double w = ft(30);
@@ -55,7 +56,7 @@ class TakedownLevelsTest {
                 new Member("B-A", MemberKind.BEAM, new Point(0, 0), new Point(0, d), Optional.empty()),
                 new Member("B-B", MemberKind.BEAM, new Point(w, 0), new Point(w, d), Optional.empty()),
                 new Member("B-C", MemberKind.BEAM, new Point(2 * w, 0), new Point(2 * w, d), Optional.empty()));
-        Floor floor = new Floor("typical", "Typical", false, slab, List.of(new Deck("DK", slab, 0)), members, List.of(),
+        Floor floor = new Floor("typical", "Typical", false, slab, List.of(new Deck("DK", slab, 0).withLimits(w, Deck.DEFAULT_MAX_OVERHANG)), members, List.of(),
                 List.of(), List.of(new AreaLoad("AL", slab, new LoadValues(Units.PSF.toSi(50), 0, Units.PSF.toSi(50), 0, 0, 0),
                         LiveLoadUse.ORDINARY)), List.of(), List.of());
         List<Column> columns = List.of(new Column("C-A1", new Point(0, 0), "A-1", "", Optional.empty()),

@@ -53,7 +53,8 @@ class StudyPanelFxTest {
 
     @Start
     void start(Stage stage) {
-        plan = PlanFiles.read(Path.of("plans", "examples", "two-bay.bay.json")).plan().orElseThrow();
+        plan = withDeckOverhang(PlanFiles.read(Path.of("plans", "examples", "two-bay.bay.json")).plan().orElseThrow(),
+                org.baywright.units.Units.FT_.toSi(5));
         panel = new StudyPanel(() -> plan, opened::add);
         stage.setScene(new Scene(panel, 1240, 780));
         stage.show();
@@ -82,6 +83,18 @@ class StudyPanelFxTest {
     private static XYChart.Series<Number, Number> series(ScatterChart<Number, Number> chart, String name) {
         return chart.getData().stream().filter(x -> x.getName().equals(name)).findFirst()
                 .orElseThrow(() -> new AssertionError("no series " + name));
+    }
+
+    /**
+     * The plan with every deck allowed to overhang {@code overhang}: the example's opening is not framed,
+     * so at 6 and 8 ft spacing the deck overhangs up to 4 ft into it, over the 2 ft default; this test is
+     * about the panel, which needs variants without problems to draw a Pareto front.
+     */
+    private static Plan withDeckOverhang(Plan p, double overhang) {
+        List<org.baywright.plan.Floor> floors = p.floors().stream().map(f -> new org.baywright.plan.Floor(f.id(), f.name(),
+                f.roof(), f.slabEdge(), f.decks().stream().map(d -> d.withLimits(d.maxSpan(), overhang)).toList(), f.members(),
+                f.infills(), f.openings(), f.areaLoads(), f.lineLoads(), f.pointLoads())).toList();
+        return new Plan(p.name(), p.units(), p.settings(), p.grid(), p.levels(), floors, p.columns());
     }
 
     private static String text(FxRobot robot, String id) {

@@ -189,8 +189,9 @@ public final class Variations {
 
     /**
      * Every infill spans in {@code direction}. On each floor, a deck that spanned onto the old infill
-     * beams is turned to span onto the new ones (a deck at any other angle, a cantilever balcony spanning
-     * onto an edge girder, keeps its angle; on a floor without infills every deck is turned). Members
+     * beams (its angle spans onto them and it covers an infilled bay) is turned to span onto the new ones;
+     * a deck at any other angle, or outside every infilled bay (a balcony spanning between its own
+     * cantilevered beams), keeps its angle; on a floor without infills every deck is turned. Members
      * lying on a grid line become girders when perpendicular to the new beams and beams when parallel.
      */
     public static Plan beamDirection(Plan plan, GridLine.Axis direction) {
@@ -199,8 +200,10 @@ public final class Variations {
         List<Floor> floors = new ArrayList<>();
         for (Floor fl : plan.floors()) {
             List<GridLine.Axis> old = fl.infills().stream().map(Infill::direction).distinct().toList();
+            List<Point> bayCentres = fl.infills().stream().map(i -> bayCentre(plan, i)).filter(java.util.Objects::nonNull).toList();
             List<Deck> decks = fl.decks().stream().map(d -> {
-                boolean turn = old.isEmpty() || old.stream().anyMatch(a -> sameLine(d.spanAngle(), deckAngleOnto(a)));
+                boolean turn = old.isEmpty() || old.stream().anyMatch(a -> sameLine(d.spanAngle(), deckAngleOnto(a)))
+                        && bayCentres.stream().anyMatch(c -> d.outline().contains(c.x(), c.y()));
                 return turn ? new Deck(d.id(), d.outline(), deckAngleOnto(direction), d.maxSpan(), d.maxOverhang()) : d;
             }).toList();
             List<Member> members = fl.members().stream().map(m -> {
@@ -220,6 +223,18 @@ public final class Variations {
                     fl.areaLoads(), fl.lineLoads(), fl.pointLoads()));
         }
         return new Plan(plan.name(), plan.units(), plan.settings(), plan.grid(), plan.levels(), floors, plan.columns(), plan.notes());
+    }
+
+    /** The centre of an infill's bay, or null when a grid line is unknown. */
+    private static Point bayCentre(Plan plan, Infill i) {
+        var x0 = plan.gridLine(i.x0());
+        var x1 = plan.gridLine(i.x1());
+        var y0 = plan.gridLine(i.y0());
+        var y1 = plan.gridLine(i.y1());
+        if (x0.isEmpty() || x1.isEmpty() || y0.isEmpty() || y1.isEmpty()) {
+            return null;
+        }
+        return new Point((x0.get().offset() + x1.get().offset()) / 2, (y0.get().offset() + y1.get().offset()) / 2);
     }
 
     private static boolean onAny(double v, List<Double> offsets) {

@@ -21,15 +21,31 @@ import java.util.List;
  * @param catalog catalog file, or empty for the built-in W shapes
  * @param deflectionLiveReduced check deflection under the live load as reduced for strength (true) or
  *     unreduced (false, the default: common practice checks serviceability under unreduced live load)
+ * @param connectionEccentricity how far beyond the column face a beam or girder reaction acts, m: the column
+ *     moment is the reaction times d/2 + this (a connection to a flange) or tw/2 + this (to the web); default
+ *     3 in, common practice
  */
 public record DesignSettings(String method, double fy, double liveDeflection, double totalDeflection,
         List<String> beamSeries, List<String> girderSeries, List<String> columnSeries, double maxBeamDepth,
         int spliceEvery, boolean liveLoadReduction, boolean partitionAsDead, boolean girderAreaDelivered,
-        String catalog, boolean deflectionLiveReduced) {
+        String catalog, boolean deflectionLiveReduced, double connectionEccentricity) {
+    /** The default distance from the column face to a reaction: 3 in (common practice). */
+    public static final double DEFAULT_CONNECTION_ECCENTRICITY = 3 * 0.0254;
+
     public DesignSettings {
         beamSeries = List.copyOf(beamSeries);
         girderSeries = List.copyOf(girderSeries);
         columnSeries = List.copyOf(columnSeries);
+    }
+
+    /** The settings with the default connection eccentricity. */
+    public DesignSettings(String method, double fy, double liveDeflection, double totalDeflection, List<String> beamSeries,
+            List<String> girderSeries, List<String> columnSeries, double maxBeamDepth, int spliceEvery,
+            boolean liveLoadReduction, boolean partitionAsDead, boolean girderAreaDelivered, String catalog,
+            boolean deflectionLiveReduced) {
+        this(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries, maxBeamDepth, spliceEvery,
+                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced,
+                DEFAULT_CONNECTION_ECCENTRICITY);
     }
 
     /** The settings with deflection checked under unreduced live load (the default). */
@@ -49,43 +65,43 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
     /** The same settings with another design method ("lrfd" or "asd"). */
     public DesignSettings withMethod(String newMethod) {
         return new DesignSettings(newMethod, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, connectionEccentricity);
     }
 
     /** The same settings with another yield stress, Pa. */
     public DesignSettings withFy(double newFy) {
         return new DesignSettings(method, newFy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, connectionEccentricity);
     }
 
     /** The same settings with other deflection limits (span ratios, 0 = off). */
     public DesignSettings withDeflection(double live, double total) {
         return new DesignSettings(method, fy, live, total, beamSeries, girderSeries, columnSeries, maxBeamDepth, spliceEvery,
-                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
+                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, connectionEccentricity);
     }
 
     /** The same settings with other series allowed for beams and for girders (empty = all). */
     public DesignSettings withBeamSeries(List<String> beams, List<String> girders) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beams, girders, columnSeries, maxBeamDepth,
-                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, connectionEccentricity);
     }
 
     /** The same settings with other series allowed for columns. */
     public DesignSettings withColumnSeries(List<String> series) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, series, maxBeamDepth,
-                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, connectionEccentricity);
     }
 
     /** The same settings with another depth limit for beams and girders, m (0 = none). */
     public DesignSettings withMaxBeamDepth(double depth) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries, depth,
-                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, connectionEccentricity);
     }
 
     /** The same settings with column splices every {@code levels} levels. */
     public DesignSettings withSpliceEvery(int levels) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, levels, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced);
+                maxBeamDepth, levels, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, connectionEccentricity);
     }
 
     /**
@@ -97,7 +113,7 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
      */
     public DesignSettings withLiveLoad(boolean reduce, boolean partitionsAsDead, boolean girderDelivered) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, reduce, partitionsAsDead, girderDelivered, catalog, deflectionLiveReduced);
+                maxBeamDepth, spliceEvery, reduce, partitionsAsDead, girderDelivered, catalog, deflectionLiveReduced, connectionEccentricity);
     }
 
     /**
@@ -105,12 +121,19 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
      */
     public DesignSettings withDeflectionLiveReduced(boolean reduced) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, reduced);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, reduced, connectionEccentricity);
     }
 
     /** The same settings with another catalog file (empty: the built-in W shapes). */
     public DesignSettings withCatalog(String file) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, file, deflectionLiveReduced);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, file, deflectionLiveReduced, connectionEccentricity);
+    }
+
+    /** The same settings with another distance from the column face to a reaction, m. */
+    public DesignSettings withConnectionEccentricity(double a) {
+        return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced,
+                a);
     }
 }

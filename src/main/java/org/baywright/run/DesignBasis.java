@@ -39,10 +39,11 @@ import org.baywright.units.UnitSystem;
  * @param girders the sections a girder may be
  * @param columnSeries the series allowed for columns (empty = all)
  * @param spliceEvery column tiers: a splice every this many levels
+ * @param connectionEccentricity how far beyond the column face a reaction acts, m (column moments; common practice)
  */
 public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, String catalogFile, UnitSystem units,
         DeflectionLimits deflection, LiveLoadRules liveLoad, SearchFilter beams, SearchFilter girders,
-        List<String> columnSeries, int spliceEvery) {
+        List<String> columnSeries, int spliceEvery, double connectionEccentricity) {
 
     public DesignBasis {
         columnSeries = List.copyOf(columnSeries);
@@ -68,7 +69,7 @@ public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, Str
                 new DeflectionLimits(s.liveDeflection(), s.totalDeflection()), new LiveLoadRules(s.liveLoadReduction(), s.partitionAsDead(), s.girderAreaDelivered(),
                         s.deflectionLiveReduced()),
                 filter(s.beamSeries(), s.maxBeamDepth()), filter(s.girderSeries(), s.maxBeamDepth()), s.columnSeries(),
-                s.spliceEvery());
+                s.spliceEvery(), s.connectionEccentricity());
     }
 
     /** The design method a plan's settings name: LRFD when they name none. */
@@ -121,7 +122,7 @@ public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, Str
     /** The same basis with another catalog (e.g. one a command line names). */
     public DesignBasis withCatalog(Catalog other) {
         return new DesignBasis(method, steel, other, catalogFile, units, deflection, liveLoad, beams, girders, columnSeries,
-                spliceEvery);
+                spliceEvery, connectionEccentricity);
     }
 
     /** What the design of a floor layout reads from the basis (besides the catalog). */
@@ -131,7 +132,7 @@ public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, Str
 
     /** The designer of column tiers: the catalog's non-slender shapes of the allowed series. */
     public ColumnDesigner columnDesigner() {
-        return new ColumnDesigner(catalog, steel, method, columnSeries);
+        return new ColumnDesigner(catalog, steel, method, columnSeries, connectionEccentricity);
     }
 
     /** How column lines are tiered and reduced. */

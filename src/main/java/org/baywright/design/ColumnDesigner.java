@@ -514,10 +514,10 @@ public final class ColumnDesigner {
             if (offP > offN) {
                 removed = p[li];
                 text = "L off the " + pos.label() + " face at " + j.level();
-            } else {
+            } else if (n[li] != 0) {
                 removed = n[li];
                 text = "L off the " + neg.label() + " face at " + j.level();
-            }
+            } // else: live load on one side only, where removing it makes the moment smaller (all spans loaded)
         }
         if (calc != null) {
             String axis = alongX ? "x" : "y";

@@ -497,7 +497,8 @@ public final class ColumnDesigner {
      * The factored net moment at floor {@code j} from the members along plan x ({@code alongX}) or y: (Rp − Rn)·e,
      * with live load removed from the side that makes it larger when {@code pattern}.
      */
-    private NetMoment net(Joint j, boolean alongX, double e, LoadCombination c, boolean pattern, String end, Calc calc) {
+    private NetMoment net(Joint j, boolean alongX, double e, LoadCombination c, boolean pattern, String end, Calc sheet) {
+        Calc calc = j.reactions().isEmpty() ? null : sheet; // a floor without reactions (or the foundation) prints nothing
         Face pos = alongX ? Face.POS_X : Face.POS_Y;
         Face neg = alongX ? Face.NEG_X : Face.NEG_Y;
         double[] p = faceSum(j, pos);

@@ -134,6 +134,9 @@ final class PlanAssembler {
 
     // ---- settings
 
+    /** The largest distance from a column face to a reaction a plan may give, m (24 in). */
+    private static final double MAX_CONNECTION_ECCENTRICITY = 24 * 0.0254;
+
     private DesignSettings settings(SettingsDoc s) {
         DesignSettings def = DesignSettings.defaults();
         if (s == null) {
@@ -192,8 +195,17 @@ final class PlanAssembler {
                         + "the built-in W shapes");
             }
         }
+        double eccentricity = def.connectionEccentricity();
+        if (s.connectionEccentricity() != null) {
+            eccentricity = length(s.connectionEccentricity(), p + "/connectionEccentricity", "", "connectionEccentricity");
+            if (eccentricity < 0 || eccentricity > MAX_CONNECTION_ECCENTRICITY) {
+                problems.error("out-of-range", p + "/connectionEccentricity", "", "connectionEccentricity: \""
+                        + s.connectionEccentricity() + "\" is not allowed; give the distance from the column face to a"
+                        + " beam reaction, from 0 to 24 in (600 mm), e.g. \"3in\"");
+            }
+        }
         return new DesignSettings(method, fy, live, total, beamSeries, girderSeries, columnSeries, maxDepth, spliceEvery,
-                reduction, partitionAsDead, delivered, catalog, deflectionReduced);
+                reduction, partitionAsDead, delivered, catalog, deflectionReduced, eccentricity);
     }
 
     private double ratio(Double value, String pointer, String label, double def) {

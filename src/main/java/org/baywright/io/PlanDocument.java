@@ -43,7 +43,8 @@ final class PlanDocument {
     record SettingsDoc(String method, @QuantityOf(Dimension.STRESS) String fy, DeflectionDoc deflection, String deflectionLiveLoad,
             List<String> beamSeries, List<String> girderSeries, List<String> columnSeries,
             @JsonInclude(JsonInclude.Include.ALWAYS) @QuantityOf(Dimension.LENGTH) String maxBeamDepth,
-            Integer spliceEvery, Boolean liveLoadReduction, String partition, String girderArea, String catalog) {
+            Integer spliceEvery, Boolean liveLoadReduction, String partition, String girderArea, String catalog,
+            @QuantityOf(Dimension.LENGTH) String connectionEccentricity) {
     }
 
     /** Deflection limits as span/deflection ratios; 0 switches a check off. */

@@ -73,7 +73,8 @@ final class PlanWriter {
                 s.deflectionLiveReduced() ? "reduced" : "unreduced", s.beamSeries(), s.girderSeries(),
                 s.columnSeries(), s.maxBeamDepth() == 0 ? null : q(s.maxBeamDepth(), units.smallLength()), s.spliceEvery(),
                 s.liveLoadReduction(), s.partitionAsDead() ? "dead" : "live", s.girderAreaDelivered() ? "delivered" : "half-bay",
-                s.catalog());
+                s.catalog(), s.connectionEccentricity() == DesignSettings.DEFAULT_CONNECTION_ECCENTRICITY ? null
+                        : q(s.connectionEccentricity(), units.smallLength()));
     }
 
     private GridLineDoc gridLine(GridLine g) {

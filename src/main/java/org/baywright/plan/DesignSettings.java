@@ -25,11 +25,18 @@ import java.util.Map;
  *     unreduced (false, the default: common practice checks serviceability under unreduced live load)
  * @param roofCeilings what the members of each roof floor layout carry below them, by floor id (IBC Table
  *     1604.3 roof rows); a roof layout not listed takes {@link RoofCeiling#DEFAULT}
+ * @param connectionEccentricity how far beyond the column face a beam or girder reaction acts, m: the column
+ *     moment is the reaction times d/2 + this (a connection to a flange) or tw/2 + this (to the web); default
+ *     3 in, common practice
  */
 public record DesignSettings(String method, double fy, double liveDeflection, double totalDeflection,
         List<String> beamSeries, List<String> girderSeries, List<String> columnSeries, double maxBeamDepth,
         int spliceEvery, boolean liveLoadReduction, boolean partitionAsDead, boolean girderAreaDelivered,
-        String catalog, boolean deflectionLiveReduced, Map<String, RoofCeiling> roofCeilings) {
+        String catalog, boolean deflectionLiveReduced, Map<String, RoofCeiling> roofCeilings,
+        double connectionEccentricity) {
+    /** The default distance from the column face to a reaction: 3 in (common practice). */
+    public static final double DEFAULT_CONNECTION_ECCENTRICITY = 3 * 0.0254;
+
     public DesignSettings {
         beamSeries = List.copyOf(beamSeries);
         girderSeries = List.copyOf(girderSeries);
@@ -43,7 +50,28 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
             boolean liveLoadReduction, boolean partitionAsDead, boolean girderAreaDelivered, String catalog,
             boolean deflectionLiveReduced) {
         this(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries, maxBeamDepth, spliceEvery,
-                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, Map.of());
+                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, Map.of(),
+                DEFAULT_CONNECTION_ECCENTRICITY);
+    }
+
+    /** The settings with these roof ceilings and the default connection eccentricity. */
+    public DesignSettings(String method, double fy, double liveDeflection, double totalDeflection, List<String> beamSeries,
+            List<String> girderSeries, List<String> columnSeries, double maxBeamDepth, int spliceEvery,
+            boolean liveLoadReduction, boolean partitionAsDead, boolean girderAreaDelivered, String catalog,
+            boolean deflectionLiveReduced, Map<String, RoofCeiling> roofCeilings) {
+        this(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries, maxBeamDepth, spliceEvery,
+                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings,
+                DEFAULT_CONNECTION_ECCENTRICITY);
+    }
+
+    /** The settings with every roof at the default ceiling and this connection eccentricity, m. */
+    public DesignSettings(String method, double fy, double liveDeflection, double totalDeflection, List<String> beamSeries,
+            List<String> girderSeries, List<String> columnSeries, double maxBeamDepth, int spliceEvery,
+            boolean liveLoadReduction, boolean partitionAsDead, boolean girderAreaDelivered, String catalog,
+            boolean deflectionLiveReduced, double connectionEccentricity) {
+        this(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries, maxBeamDepth, spliceEvery,
+                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, Map.of(),
+                connectionEccentricity);
     }
 
     /** What the members of roof floor layout {@code floorId} carry below them: as set, else the default. */
@@ -62,7 +90,7 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
     public DesignSettings withRoofCeilings(Map<String, RoofCeiling> ceilings) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
                 maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced,
-                ceilings);
+                ceilings, connectionEccentricity);
     }
 
     /** The settings with deflection checked under unreduced live load (the default). */
@@ -82,43 +110,43 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
     /** The same settings with another design method ("lrfd" or "asd"). */
     public DesignSettings withMethod(String newMethod) {
         return new DesignSettings(newMethod, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity);
     }
 
     /** The same settings with another yield stress, Pa. */
     public DesignSettings withFy(double newFy) {
         return new DesignSettings(method, newFy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity);
     }
 
     /** The same settings with other deflection limits (span ratios, 0 = off). */
     public DesignSettings withDeflection(double live, double total) {
         return new DesignSettings(method, fy, live, total, beamSeries, girderSeries, columnSeries, maxBeamDepth, spliceEvery,
-                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings);
+                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity);
     }
 
     /** The same settings with other series allowed for beams and for girders (empty = all). */
     public DesignSettings withBeamSeries(List<String> beams, List<String> girders) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beams, girders, columnSeries, maxBeamDepth,
-                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings);
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity);
     }
 
     /** The same settings with other series allowed for columns. */
     public DesignSettings withColumnSeries(List<String> series) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, series, maxBeamDepth,
-                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings);
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity);
     }
 
     /** The same settings with another depth limit for beams and girders, m (0 = none). */
     public DesignSettings withMaxBeamDepth(double depth) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries, depth,
-                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings);
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity);
     }
 
     /** The same settings with column splices every {@code levels} levels. */
     public DesignSettings withSpliceEvery(int levels) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, levels, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings);
+                maxBeamDepth, levels, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity);
     }
 
     /**
@@ -130,7 +158,7 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
      */
     public DesignSettings withLiveLoad(boolean reduce, boolean partitionsAsDead, boolean girderDelivered) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, reduce, partitionsAsDead, girderDelivered, catalog, deflectionLiveReduced, roofCeilings);
+                maxBeamDepth, spliceEvery, reduce, partitionsAsDead, girderDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity);
     }
 
     /**
@@ -138,12 +166,19 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
      */
     public DesignSettings withDeflectionLiveReduced(boolean reduced) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, reduced, roofCeilings);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, reduced, roofCeilings, connectionEccentricity);
+    }
+
+    /** The same settings with another distance from the column face to a reaction, m. */
+    public DesignSettings withConnectionEccentricity(double a) {
+        return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced,
+                roofCeilings, a);
     }
 
     /** The same settings with another catalog file (empty: the built-in W shapes). */
     public DesignSettings withCatalog(String file) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, file, deflectionLiveReduced, roofCeilings);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, file, deflectionLiveReduced, roofCeilings, connectionEccentricity);
     }
 }

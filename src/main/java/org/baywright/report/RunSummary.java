@@ -233,9 +233,28 @@ public final class RunSummary {
                 sj.put("available", us.force().fromSi(s.available()));
                 sj.put("ratio", s.ratio());
                 sj.put("combination", s.combination());
+                org.baywright.design.ColumnDesigner.Interaction in = s.interaction();
+                if (in != null) {
+                    Map<String, Object> ij = new LinkedHashMap<>();
+                    ij.put("ratio", in.ratio());
+                    ij.put("combination", in.combination());
+                    ij.put("pattern", in.pattern());
+                    ij.put("webAlong", in.webAlongX() ? "x" : "y");
+                    ij.put("required", us.force().fromSi(in.pr()));
+                    ij.put("available", us.force().fromSi(in.pc()));
+                    ij.put("mrx", us.moment().fromSi(in.mrx()));
+                    ij.put("mry", us.moment().fromSi(in.mry()));
+                    ij.put("mcx", us.moment().fromSi(in.mcx()));
+                    ij.put("mcy", us.moment().fromSi(in.mcy()));
+                    ij.put("b1x", in.b1x());
+                    ij.put("b1y", in.b1y());
+                    sj.put("interaction", ij);
+                }
                 storeys.add(sj);
             }
             tj.put("storeys", storeys);
+            tj.put("interactionRatio", t.storeys().stream().filter(s -> s.interaction() != null)
+                    .mapToDouble(s -> s.interaction().ratio()).max().orElse(Double.NaN));
             tiers.add(tj);
         }
         j.put("tiers", tiers);

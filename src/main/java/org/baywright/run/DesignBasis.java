@@ -47,10 +47,12 @@ import org.baywright.units.UnitSystem;
  * @param girders the sections a girder may be
  * @param columnSeries the series allowed for columns (empty = all)
  * @param spliceEvery column tiers: a splice every this many levels
+ * @param connectionEccentricity how far beyond the column face a reaction acts, m (column moments; common practice)
  */
 public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, String catalogFile, UnitSystem units,
         DeflectionLimits deflection, LiveLoadRules liveLoad, SearchFilter beams, SearchFilter girders,
-        List<String> columnSeries, int spliceEvery, Map<String, DeflectionLimits> roofDeflection) {
+        List<String> columnSeries, int spliceEvery, Map<String, DeflectionLimits> roofDeflection,
+        double connectionEccentricity) {
 
     public DesignBasis {
         columnSeries = List.copyOf(columnSeries);
@@ -77,7 +79,7 @@ public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, Str
                 new DeflectionLimits(s.liveDeflection(), s.totalDeflection()), new LiveLoadRules(s.liveLoadReduction(), s.partitionAsDead(), s.girderAreaDelivered(),
                         s.deflectionLiveReduced()),
                 filter(s.beamSeries(), s.maxBeamDepth()), filter(s.girderSeries(), s.maxBeamDepth()), s.columnSeries(),
-                s.spliceEvery(), roofDeflection(plan));
+                s.spliceEvery(), roofDeflection(plan), s.connectionEccentricity());
     }
 
     /** The deflection limits of the members of every roof layout of a plan, by floor id. */
@@ -164,7 +166,7 @@ public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, Str
     /** The same basis with another catalog (e.g. one a command line names). */
     public DesignBasis withCatalog(Catalog other) {
         return new DesignBasis(method, steel, other, catalogFile, units, deflection, liveLoad, beams, girders, columnSeries,
-                spliceEvery, roofDeflection);
+                spliceEvery, roofDeflection, connectionEccentricity);
     }
 
     /** What the design of a floor (not roof) layout reads from the basis (besides the catalog). */
@@ -179,7 +181,7 @@ public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, Str
 
     /** The designer of column tiers: the catalog's non-slender shapes of the allowed series. */
     public ColumnDesigner columnDesigner() {
-        return new ColumnDesigner(catalog, steel, method, columnSeries);
+        return new ColumnDesigner(catalog, steel, method, columnSeries, connectionEccentricity);
     }
 
     /** How column lines are tiered and reduced. */

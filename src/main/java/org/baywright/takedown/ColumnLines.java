@@ -4,6 +4,9 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.baywright.design.ColumnDesigner;
+import org.baywright.design.ColumnDesigner.Face;
+import org.baywright.design.ColumnDesigner.FaceReaction;
+import org.baywright.design.ColumnDesigner.Joint;
 import org.baywright.design.ColumnDesigner.StoreyCheck;
 import org.baywright.design.ColumnDesigner.StoreyDemand;
 import org.baywright.design.ColumnDesigner.TierDemand;
@@ -21,7 +24,8 @@ import org.baywright.takedown.SlabEdges.ColumnPosition;
  * The fifth stage: the column lines. Axial loads are summed from the top level down, live load reduced by
  * the cumulative A_T of the floors supported (ASCE 7-16 §4.7.2; roof live by §4.8), and each tier
  * between splices (every {@code spliceEvery} levels, counted from the foundation) sized by {@link
- * ColumnDesigner}.
+ * ColumnDesigner} for the axial load and the moments of the reactions' connection eccentricities (AISC 360-16
+ * H1.1 with B1): each member's reaction at each level is handed over with the face of the column it meets.
  *
  * @param lines in the plan's order of columns
  * @param problems in the same order: fixed sections not allowed, tiers no section passes
@@ -81,16 +85,19 @@ public record ColumnLines(List<Line> lines, List<Problem> problems) {
         Floor ref = levels.isEmpty() ? null : levels.get(0).floor();
         ColumnPosition pos = SlabEdges.column(plan, c, ref, Takedown.CANTILEVER_SLAB, Takedown.TOLERANCE);
         List<Carried> carried = carried(c, levels, top + 1);
+        List<List<FaceReaction>> reactions = reactions(c, levels, top + 1);
         int every = Math.max(1, rules.spliceEvery());
         List<TierDemand> demands = new ArrayList<>();
         for (int b = 0; b <= top; b += every) {
             List<StoreyDemand> storeys = new ArrayList<>();
             for (int i = b; i <= Math.min(top, b + every - 1); i++) {
-                storeys.add(demand(lv.get(i), carried.get(i), pos.kll(), rules.reduce()));
+                Joint upper = new Joint(lv.get(i).name(), reactions.get(i), i < top ? lv.get(i + 1).storeyHeight() : 0);
+                Joint lower = i == 0 ? Joint.NONE : new Joint(lv.get(i - 1).name(), reactions.get(i - 1), lv.get(i - 1).storeyHeight());
+                storeys.add(demand(lv.get(i), carried.get(i), pos.kll(), rules.reduce(), upper, lower));
             }
             demands.add(new TierDemand(storeys));
         }
-        List<TierDesign> designed = designer.design(demands, c.fixedSection());
+        List<TierDesign> designed = designer.design(demands, c.fixedSection(), ColumnDesigner.webAlongX(demands));
         List<ColumnTier> tiers = new ArrayList<>();
         for (int t = 0; t < designed.size(); t++) {
             tiers.add(tier(demands.get(t), designed.get(t), carried, t * every));
@@ -144,8 +151,28 @@ public record ColumnLines(List<Line> lines, List<Problem> problems) {
         return List.of(out);
     }
 
+    /**
+     * The reactions the members deliver to the column at each level (by load case, unreduced), with the face
+     * each meets, bottom level first.
+     */
+    private static List<List<FaceReaction>> reactions(Column c, List<LevelDesign> levels, int n) {
+        List<List<FaceReaction>> out = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            FloorDesign fd = i < levels.size() ? levels.get(i).design() : null;
+            List<FloorDesign.ColumnReaction> rs = fd == null ? null : fd.columnReactions().get(c.id());
+            List<FaceReaction> at = new ArrayList<>();
+            if (rs != null) {
+                for (FloorDesign.ColumnReaction r : rs) {
+                    at.add(new FaceReaction(r.member(), Face.of(r.dx(), r.dy()), Component.byCase(r.loads())));
+                }
+            }
+            out.add(List.copyOf(at));
+        }
+        return out;
+    }
+
     /** A storey's demand by load case, unreduced and with live load reduced by the cumulative A_T. */
-    private static StoreyDemand demand(Level level, Carried s, double kll, boolean reduce) {
+    private static StoreyDemand demand(Level level, Carried s, double kll, boolean reduce, Joint top, Joint bottom) {
         double[] comp = s.loads();
         double[] reduced = comp.clone();
         if (reduce) {
@@ -160,7 +187,8 @@ public record ColumnLines(List<Line> lines, List<Problem> problems) {
                         s.roofArea(), 0, null).factor();
             }
         }
-        return new StoreyDemand(level.name(), level.storeyHeight(), Component.byCase(comp), Component.byCase(reduced));
+        return new StoreyDemand(level.name(), level.storeyHeight(), Component.byCase(comp), Component.byCase(reduced), top,
+                bottom);
     }
 
     /** A tier as the result shows it; {@code lo} is the index of its bottom level. */
@@ -173,7 +201,7 @@ public record ColumnLines(List<Line> lines, List<Problem> problems) {
             Carried c = carried.get(lo + k);
             names.add(sd.level());
             storeys.add(new StoreyLoad(sd.level(), sd.height(), sc.unreduced(), sc.reduced(), c.floorArea(), c.roofArea(),
-                    c.floors(), sc.required(), sc.available(), sc.ratio(), sc.combination()));
+                    c.floors(), sc.required(), sc.available(), sc.ratio(), sc.combination(), sc.interaction()));
         }
         return new ColumnTier(List.copyOf(names), d.section() == null ? "" : d.section().designation(), d.weight(), d.status(),
                 storeys, d.length(), d.rejected());

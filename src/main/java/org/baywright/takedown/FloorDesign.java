@@ -15,7 +15,26 @@ import org.baywright.plan.Problem;
  * @param loadedArea the floor's loaded area, m²
  * @param areaLoadAreas area load id → the part of it on the loaded floor, m²
  * @param problems the floor's problems in the order found
+ * @param columnReactions column id → each member's reaction on it with the plan direction from the column to the
+ *     member (for the moments of the connection eccentricities)
  */
 public record FloorDesign(List<MemberResult> members, Map<String, double[]> columnLoads, Map<String, Double> columnArea,
-        Map<String, double[]> columnL0, double loadedArea, Map<String, Double> areaLoadAreas, List<Problem> problems) {
+        Map<String, double[]> columnL0, double loadedArea, Map<String, Double> areaLoadAreas, List<Problem> problems,
+        Map<String, List<ColumnReaction>> columnReactions) {
+
+    /**
+     * One member's reaction on a column.
+     *
+     * @param dx plan direction from the column to the member, x component (unit vector)
+     * @param dy y component
+     * @param loads the reaction by {@link Component}, unreduced, N
+     */
+    public record ColumnReaction(String member, double dx, double dy, double[] loads) {
+    }
+
+    /** A floor design without the reactions' directions (no column moments). */
+    public FloorDesign(List<MemberResult> members, Map<String, double[]> columnLoads, Map<String, Double> columnArea,
+            Map<String, double[]> columnL0, double loadedArea, Map<String, Double> areaLoadAreas, List<Problem> problems) {
+        this(members, columnLoads, columnArea, columnL0, loadedArea, areaLoadAreas, problems, Map.of());
+    }
 }

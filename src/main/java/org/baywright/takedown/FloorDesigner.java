@@ -58,6 +58,7 @@ public final class FloorDesigner {
     private final Map<String, double[]> columnLoads = new LinkedHashMap<>();
     private final Map<String, Double> columnArea = new LinkedHashMap<>();
     private final Map<String, double[]> columnL0 = new LinkedHashMap<>();
+    private final Map<String, List<FloorDesign.ColumnReaction>> columnReactions = new LinkedHashMap<>();
     private final List<Problem> problems = new ArrayList<>();
     private FloorTributary halfBay;
 
@@ -95,7 +96,7 @@ public final class FloorDesigner {
         }
         return new FloorDesign(List.copyOf(results.values()), Collections.unmodifiableMap(d.columnLoads),
                 Collections.unmodifiableMap(d.columnArea), Collections.unmodifiableMap(d.columnL0), d.trib.loadedArea(),
-                d.trib.areaLoadAreas(), List.copyOf(d.problems));
+                d.trib.areaLoadAreas(), List.copyOf(d.problems), Collections.unmodifiableMap(d.columnReactions));
     }
 
     /** Designs one member whose framing members are all designed. */
@@ -220,6 +221,12 @@ public final class FloorDesigner {
                     acc[c] += rx[c];
                 }
                 columnArea.merge(s.column(), area, Double::sum);
+                double len = r.length();
+                double sign = end == 0 ? 1 : -1;
+                double dx = len > 0 ? sign * (r.end().x() - r.start().x()) / len : 0;
+                double dy = len > 0 ? sign * (r.end().y() - r.start().y()) / len : 0;
+                columnReactions.computeIfAbsent(s.column(), k -> new ArrayList<>())
+                        .add(new FloorDesign.ColumnReaction(r.id(), dx, dy, rx.clone()));
                 double[] l0 = columnL0.computeIfAbsent(s.column(), k -> new double[NC]);
                 for (int c = 0; c < NC; c++) {
                     l0[c] = Math.max(l0[c], h.l0()[c]);

@@ -131,8 +131,7 @@ public final class SlabEdges {
             }
             if (!neighbour) {
                 exposed++;
-                double edge = floor == null ? 0 : rayToPolygon(c.at(), d[0], d[1], floor.slabEdge());
-                if (!(edge > cantilever)) {
+                if (!(floor != null && cantileverOnSide(c.at(), d[0], d[1], floor.slabEdge(), cantilever))) {
                     allCantilever = false;
                 }
             }
@@ -146,6 +145,27 @@ public final class SlabEdges {
                     : new ColumnPosition(2.0, "corner, with cantilever slab");
         }
         return new ColumnPosition(4.0, where);
+    }
+
+    /**
+     * Whether the slab extends more than {@code cantilever} beyond the column in direction (ux, uy), along the
+     * column's line or just beside it on either side ({@link #PROBE} off the line). The probes beside the line
+     * catch a column at the end of a cantilever slab (a balcony ending at the column): the ray along the
+     * column's own line then runs along the balcony's end edge, and the cantilever slab lies on one side of
+     * the column only. Such a column is taken as an edge column with a cantilever slab (ASCE 7-16 Table 4.7-1,
+     * K_LL = 3; conservative beside K_LL = 4).
+     */
+    private static boolean cantileverOnSide(Point at, double ux, double uy, Polygon slab, double cantilever) {
+        for (int k = -1; k <= 1; k++) {
+            Point from = new Point(at.x() - k * uy * PROBE, at.y() + k * ux * PROBE);
+            if (k != 0 && !contains(slab, new Point(from.x() + ux * PROBE, from.y() + uy * PROBE))) {
+                continue; // beside the column, just beyond it, is not slab: no slab on this side
+            }
+            if (rayToPolygon(from, ux, uy, slab) > cantilever) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static double spanAngle(Floor floor, Point p) {

@@ -15,12 +15,22 @@ package org.baywright.takedown;
  * @param floorsSupported floors with live load supported
  * @param required required strength (Pu or Pa), N
  * @param available available strength of the tier's section, N
- * @param ratio required / available
- * @param combination governing combination
+ * @param ratio the storey's ratio: the larger of the axial ratio (required / available) and the interaction
+ *     ratio of AISC 360-16 H1.1
+ * @param combination governing combination of the axial check
+ * @param interaction the combined axial and flexure check (AISC 360-16 H1.1, moments from the reactions'
+ *     eccentricities amplified by B1) in its governing combination and live-load pattern; null with no section
  */
 public record StoreyLoad(String level, double storeyHeight, double[] unreduced, double[] reduced,
         double reductionArea, double roofArea, int floorsSupported, double required, double available, double ratio,
-        String combination) {
+        String combination, org.baywright.design.ColumnDesigner.Interaction interaction) {
+
+    /** A storey with the axial check alone (no interaction recorded). */
+    public StoreyLoad(String level, double storeyHeight, double[] unreduced, double[] reduced, double reductionArea,
+            double roofArea, int floorsSupported, double required, double available, double ratio, String combination) {
+        this(level, storeyHeight, unreduced, reduced, reductionArea, roofArea, floorsSupported, required, available, ratio,
+                combination, null);
+    }
 
     /** Everything delivered from above, floors and roofs, m². */
     public double deliveredArea() {

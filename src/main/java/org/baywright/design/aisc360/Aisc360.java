@@ -3,7 +3,7 @@ package org.baywright.design.aisc360;
 /**
  * AISC 360-16, Specification for Structural Steel Buildings (ANSI/AISC 360-16). The equations used
  * here are unchanged in the 2022 edition (AISC 360-22) for the clauses implemented: B4.1, E3, F1,
- * F2, F3, G2.1.
+ * F2, F3, F6, G2.1, H1.1 and Appendix 8 (8.2.1, B1).
  *
  * <p>Every function takes canonical SI values (Pa, m, m², m³, m⁴, m⁶, N, N·m) and an optional
  * {@link org.baywright.calc.Calc} recorder; with a recorder it writes the line the calculation sheet

@@ -98,10 +98,10 @@ class CompositePropertiesTest {
         double itr = CompositeStiffness.transformed(c.section(), c.slab(), E, c.ec(), null);
         assertTrue(ilb >= is, c + ": I_LB " + ilb + " < Is " + is);
         assertTrue(ilb <= itr, c + ": I_LB " + ilb + " > I_tr " + itr + " at ΣQn/Cf = " + f);
-        // and I_LB rises with ΣQn
-        CompositeFlexureI3.Result more = CompositeFlexureI3.strength(c.section(), FY, E, c.slab(),
-                Math.min(1, f + 0.1) * full.full(), null);
-        assertTrue(CompositeStiffness.ilb(c.section(), FY, more, null) >= ilb * (1 - 1e-12), c + ": I_LB fell with more studs");
+        // I_LB need not rise with ΣQn, so that is not asserted: C-I3-1 puts the concrete force ΣQn/Fy at d1 below
+        // the top of the slab, and as ΣQn grows the stress block deepens and d1 shrinks; for a shallow steel
+        // section under a deep slab the second effect wins near full composite action (this property found
+        // W4X13 under a 2 in solid slab of 30 in: I_LB at 0.97·Cf below I_LB at 0.87·Cf).
     }
 
     @Provide

@@ -715,6 +715,31 @@ public final class PlanEdits {
         return new Plan(p.name(), units, p.settings(), p.grid(), p.levels(), p.floors(), p.columns(), p.notes());
     }
 
+    /**
+     * The plan with deflection checked under the live load {@code "unreduced"} (the default, common practice)
+     * or as {@code "reduced"} for strength.
+     */
+    public static Plan withDeflectionLiveLoad(Plan p, String which) {
+        boolean reduced = switch (which.toLowerCase(Locale.ROOT)) {
+            case "reduced" -> true;
+            case "unreduced" -> false;
+            default -> throw new IllegalArgumentException("deflection live load is \"reduced\" or \"unreduced\", not " + which);
+        };
+        return new Plan(p.name(), p.units(), p.settings().withDeflectionLiveReduced(reduced), p.grid(), p.levels(), p.floors(),
+                p.columns(), p.notes());
+    }
+
+    /** The plan with every roof floor layout's members carrying {@code ceiling} (IBC Table 1604.3 roof rows). */
+    public static Plan withRoofCeiling(Plan p, RoofCeiling ceiling) {
+        DesignSettings s = p.settings();
+        for (Floor f : p.floors()) {
+            if (f.roof()) {
+                s = s.withRoofCeiling(f.id(), ceiling);
+            }
+        }
+        return new Plan(p.name(), p.units(), s, p.grid(), p.levels(), p.floors(), p.columns(), p.notes());
+    }
+
     /** The plan designed by another method ("lrfd" or "asd"). */
     public static Plan withMethod(Plan p, String method) {
         return new Plan(p.name(), p.units(), p.settings().withMethod(method), p.grid(), p.levels(),

@@ -99,9 +99,28 @@ final class MainMenus {
         Menu method = choiceMenu("Design method", p -> p.settings().method(), PlanEdits::withMethod,
                 new Choice("LRFD", "menu-method-lrfd", "lrfd", "Design method: LRFD"),
                 new Choice("ASD", "menu-method-asd", "asd", "Design method: ASD"));
-        Menu design = new Menu("Design", null, units, method);
+        Menu deflection = choiceMenu("Deflection under live load", p -> p.settings().deflectionLiveReduced() ? "reduced" : "unreduced",
+                PlanEdits::withDeflectionLiveLoad,
+                new Choice("Unreduced live load (serviceability, common practice)", "menu-deflection-unreduced", "unreduced",
+                        "Deflection under unreduced live load"),
+                new Choice("Live load reduced as for strength", "menu-deflection-reduced", "reduced",
+                        "Deflection under reduced live load"));
+        Menu ceiling = choiceMenu("Roof members carry", MainMenus::roofCeiling,
+                (p, v) -> PlanEdits.withRoofCeiling(p, org.baywright.plan.RoofCeiling.valueOf(v)),
+                new Choice("A plaster or stucco ceiling (L/360, L/240)", "menu-roof-plaster", "PLASTER",
+                        "Roof members: plaster ceiling"),
+                new Choice("A non-plaster ceiling (L/240, L/180)", "menu-roof-non-plaster", "NON_PLASTER",
+                        "Roof members: non-plaster ceiling"),
+                new Choice("No ceiling (L/180, L/120)", "menu-roof-none", "NONE", "Roof members: no ceiling"));
+        Menu design = new Menu("Design", null, units, method, new SeparatorMenuItem(), deflection, ceiling);
         design.setId("menu-design");
         return design;
+    }
+
+    /** The ceiling the plan's (first) roof layout carries, as the Roof menu names it. */
+    private static String roofCeiling(Plan p) {
+        return p.floors().stream().filter(f -> f.roof()).findFirst().map(f -> p.settings().roofCeiling(f.id()))
+                .orElse(org.baywright.plan.RoofCeiling.DEFAULT).name();
     }
 
     /** One choice of a radio menu: its text, node id, the plan value it sets and the edit's label. */

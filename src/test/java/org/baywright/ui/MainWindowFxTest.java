@@ -186,4 +186,41 @@ class MainWindowFxTest {
                 .release(javafx.scene.input.KeyCode.Z).release(javafx.scene.input.KeyCode.CONTROL);
         assertEquals(area.values().live(), model.currentFloor().orElseThrow().areaLoads().get(0).values().live(), 1e-9);
     }
+
+    private javafx.scene.control.MenuItem menuItem(String id) {
+        javafx.scene.control.MenuBar bar = (javafx.scene.control.MenuBar) window.root().lookup("#menu-bar");
+        java.util.ArrayDeque<javafx.scene.control.MenuItem> todo = new java.util.ArrayDeque<>(bar.getMenus());
+        while (!todo.isEmpty()) {
+            javafx.scene.control.MenuItem m = todo.pop();
+            if (id.equals(m.getId())) {
+                return m;
+            }
+            if (m instanceof javafx.scene.control.Menu sub) {
+                todo.addAll(sub.getItems());
+            }
+        }
+        throw new AssertionError("no menu item " + id);
+    }
+
+    /**
+     * Design › Roof members carry sets the IBC Table 1604.3 roof row of every roof layout, and Design ›
+     * Deflection under live load the live load of the deflection checks; both undoable edits the run follows.
+     */
+    @Test
+    void theRoofCeilingAndTheDeflectionLiveLoadAreDesignMenuChoices(FxRobot robot) {
+        String roof = model.plan().floors().stream().filter(f -> f.roof()).findFirst().orElseThrow().id();
+        assertEquals(org.baywright.plan.RoofCeiling.DEFAULT, model.plan().settings().roofCeiling(roof));
+        assertTrue(((javafx.scene.control.RadioMenuItem) menuItem("menu-roof-non-plaster")).isSelected());
+        robot.interact(() -> menuItem("menu-roof-plaster").fire());
+        assertEquals(org.baywright.plan.RoofCeiling.PLASTER, model.plan().settings().roofCeiling(roof));
+        var roofMember = model.run().takedown().members().get(roof).get(0);
+        assertEquals(360, roofMember.criteria().deflection().live(), 1e-9, "the run takes the plaster row: L/360 under live load");
+        robot.interact(() -> menuItem("menu-deflection-reduced").fire());
+        assertTrue(model.plan().settings().deflectionLiveReduced());
+        robot.interact(model::undo);
+        robot.interact(model::undo);
+        assertFalse(model.plan().settings().deflectionLiveReduced());
+        assertEquals(org.baywright.plan.RoofCeiling.DEFAULT, model.plan().settings().roofCeiling(roof));
+        assertTrue(((javafx.scene.control.RadioMenuItem) menuItem("menu-roof-non-plaster")).isSelected(), "the menu follows undo");
+    }
 }

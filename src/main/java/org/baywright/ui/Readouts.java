@@ -66,6 +66,26 @@ public final class Readouts {
     }
 
     /**
+     * An overhanging member's parts: "backspan 35.00 ft, overhang 6.00 ft past its second support (tip deflection
+     * limit taken on twice the overhang)".
+     */
+    static String overhang(MemberResult m, UnitSystem us) {
+        double a = m.loads().supportA();
+        double b = m.loads().supportB();
+        double l = m.loads().span();
+        List<String> parts = new ArrayList<>();
+        parts.add("backspan " + UnitSystem.format(b - a, us.length(), 2));
+        if (a > 0) {
+            parts.add("overhang " + UnitSystem.format(a, us.length(), 2) + " before its first support");
+        }
+        if (l - b > 0) {
+            parts.add("overhang " + UnitSystem.format(l - b, us.length(), 2) + " past its second support");
+        }
+        return String.join(", ", parts) + "\n(tip deflection limit on twice the overhang, IBC Table 1604.3 note;"
+                + " K_LL = 1; live load patterned, ASCE 7-16 §4.3.3)";
+    }
+
+    /**
      * The Properties rows of a member: identity, size, status, ratios, the loads on its span and its
      * end reactions. Every force says what it is: the span's loads are service loads with the live
      * load shown both unreduced (L0) and reduced (L, with the member's factor, ASCE 7-16 §4.7) as the
@@ -80,6 +100,9 @@ public final class Readouts {
         rows.add(new Row("Section", m.section().isEmpty() ? "—" : m.section()));
         rows.add(new Row("Status", m.status().label()));
         rows.add(new Row("Length", UnitSystem.format(m.length(), us.length(), 2)));
+        if (m.overhangs()) {
+            rows.add(new Row("Overhang", overhang(m, us)));
+        }
         rows.add(new Row("Tributary area", UnitSystem.format(m.tributaryArea(), us.floorArea(), 0)));
         rows.add(new Row("Reduction area", UnitSystem.format(m.reductionArea(), us.floorArea(), 0)
                 + String.format(java.util.Locale.ROOT, "  (live × %.2f)", m.liveFactor())));

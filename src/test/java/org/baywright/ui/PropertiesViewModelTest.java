@@ -278,4 +278,16 @@ class PropertiesViewModelTest {
         assertTrue(vm.setFixedSize(now, ""));
         assertEquals(g.section(), row("Section"), "blank goes back to the lightest adequate size");
     }
+
+    /** The demo's balcony beams run 35 ft from grid 2 to grid 1 and 6 ft past it (the demo, HarbourviewDemo). */
+    @Test
+    void anOverhangingBeamSaysItsBackspanAndOverhang() {
+        MemberResult m = model.currentMembers().stream().filter(MemberResult::overhangs).findFirst()
+                .orElseThrow(() -> new AssertionError("the demo's level shown has no overhanging beam"));
+        model.select(m.id());
+        String text = row("Overhang");
+        assertTrue(text.startsWith("backspan 35.00 ft, overhang 6.00 ft past its second support"), text);
+        assertTrue(text.contains("K_LL = 1"), text);
+        assertEquals("1", String.valueOf((int) m.kll()), "ASCE 7-16 Table 4.7-1: cantilever members");
+    }
 }

@@ -44,9 +44,14 @@ final class CheckerPages {
                 + " do not depend on them, except snow: the snow load in the plan is taken as the design snow load, with its"
                 + " importance and exposure factors already applied.");
         f.bullet(f.body, "Gravity only. The lateral force-resisting system (bracing or moment frames, diaphragm, collectors)"
-                + " is by others. Columns are designed as leaning columns in a braced frame: axial load only, K = 1, the"
-                + " storey height as unbraced length about both axes.");
-        f.bullet(f.body, "Beams and girders are simple spans of bare steel: no composite action with the slab is counted"
+                + " is by others. Columns are designed as leaning columns in a braced frame, K = 1, the storey height as"
+                + " unbraced length about both axes, for axial load and the moments of the beam and girder reactions at "
+                + Fmt.n(cx.basis().connectionEccentricity(), Quantity.SECTION_LENGTH, cx.us) + " "
+                + Fmt.unit(Quantity.SECTION_LENGTH, cx.us) + " beyond the column face (plan setting; common practice),"
+                + " with live load on one side where that governs (ASCE 7-16 §4.3.3), split between the storeys above and"
+                + " below by stiffness, by AISC 360-16 H1.1 with B1 of Appendix 8 (part \"Column moments and interaction\").");
+        f.bullet(f.body, "Beams and girders are simple spans of bare steel, or spans overhanging one support (a cantilever"
+                + " with its backspan, live load patterned by ASCE 7-16 §4.3.3): no composite action with the slab is counted"
                 + " (conservative for strength and stiffness), and no continuity or end restraint.");
         LiveLoadRules ll = cx.basis().liveLoad();
         f.bullet(f.body, "Deflections are computed on the bare steel section under service loads, with the live load "
@@ -57,9 +62,11 @@ final class CheckerPages {
                 + FrontMatter.limit(st.totalDeflection()) + (cx.basis().roofDeflection().isEmpty() ? "."
                         : " for floor members; roof members by the roof rows of IBC Table 1604.3: "
                                 + FrontMatter.roofDeflection(cx) + "."));
-        f.bullet(f.body, "Deck: its span direction is taken from the plan; the deck itself (its span between the members"
-                + " that carry it, overhangs, and its strength as a form and as a floor) is chosen and checked by the"
-                + " engineer of record from the deck maker's published tables.");
+        f.bullet(f.body, "Deck: its span direction is taken from the plan; its clear span between the members that carry it"
+                + " and its overhang at edges are measured from the plan and checked against the limits the plan gives for"
+                + " each deck (entered from the deck maker's published tables; 15 ft span and 2 ft overhang when none are"
+                + " given, common practice for a 3 in deck), and deck cantilevering with no span behind it is refused. The"
+                + " deck's strength as a form and as a floor is checked by the engineer of record from those tables.");
         f.heading2("Not checked in this package", 30);
         f.bullet(f.body, "Floor vibration from walking, ponding of roofs, wind and seismic loads and drift, fire resistance,"
                 + " connections (their design is delegated; the end reactions are in part \"End reactions\"), torsion of"

@@ -2,6 +2,7 @@ package org.baywright.report.pdf;
 
 import static org.junit.jupiter.api.Assertions.assertAll;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -83,6 +84,11 @@ class CheckerPagesTest {
                 () -> assertTrue(text.contains("Statements for review"), "the statements"),
                 () -> assertTrue(text.contains("lateral force-resisting system"), "lateral system by others"),
                 () -> assertTrue(text.contains("leaning columns in a braced frame"), "columns as leaning columns"),
+                () -> assertTrue(text.replace("\n", " ").contains("moments of the beam and girder reactions at 3 in beyond the column face"),
+                        "the column moments and the eccentricity the design took (connectionEccentricity default, 3 in)"),
+                () -> assertFalse(text.contains("axial load only"), "the statement matches the column design (H1.1)"),
+                () -> assertTrue(text.replace("\n", " ").contains("checked against the limits the plan gives for each deck"),
+                        "the deck span check"),
                 () -> assertTrue(text.contains("Floor vibration from walking"), "what is not checked"),
                 () -> assertTrue(text.contains("with the live load unreduced (common practice for serviceability"),
                         "which live load the deflections use (the demo's default)"),

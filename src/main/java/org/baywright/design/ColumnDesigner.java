@@ -129,12 +129,31 @@ public final class ColumnDesigner {
      * @param farHeight height of the storey on the other side of the floor (above it for the top end of a storey,
      *     below it for the bottom end), m; 0 where there is none (the column stops, or the foundation)
      */
-    public record Joint(String level, List<FaceReaction> reactions, double farHeight) {
+    public record Joint(String level, List<FaceReaction> reactions, double farHeight, double[][] faceSums) {
         /** No floor, no reactions. */
         public static final Joint NONE = new Joint("", List.of(), 0);
 
+        /**
+         * @param faceSums the reactions summed per {@link Face} (ordinal) and load case (ordinal), made by the other
+         *     constructor: the search reads them for every section, combination and pattern
+         */
         public Joint {
             reactions = List.copyOf(reactions);
+        }
+
+        public Joint(String level, List<FaceReaction> reactions, double farHeight) {
+            this(level, reactions, farHeight, sums(reactions));
+        }
+
+        private static double[][] sums(List<FaceReaction> reactions) {
+            double[][] out = new double[Face.values().length][LoadCase.values().length];
+            for (FaceReaction r : reactions) {
+                double[] row = out[r.face().ordinal()];
+                for (int k = 0; k < row.length; k++) {
+                    row[k] += r.loads()[k];
+                }
+            }
+            return out;
         }
     }
 
@@ -448,7 +467,7 @@ public final class ColumnDesigner {
                 if (p != 0 && !anyMoment) {
                     break;
                 }
-                Interaction in = evaluate(d, s, fx, above, webAlongX, pc, combos.get(ci), p, null);
+                Interaction in = evaluate(d, s, fx, above, webAlongX, pc, combos.get(ci), p, null, false);
                 if (best == null || in.ratio() > best.ratio()) {
                     best = in;
                     bestCombo = ci;
@@ -456,8 +475,9 @@ public final class ColumnDesigner {
                 }
             }
         }
-        if (calc != null && best != null) {
-            best = evaluate(d, s, fx, above, webAlongX, pc, combos.get(bestCombo), bestPattern, calc);
+        if (best != null) {
+            // the governing case again, with the words of its pattern (and its sheet when one is recorded)
+            best = evaluate(d, s, fx, above, webAlongX, pc, combos.get(bestCombo), bestPattern, calc, true);
         }
         return best;
     }
@@ -478,15 +498,7 @@ public final class ColumnDesigner {
 
     /** The sums of the reactions on one face, by load case, N. */
     private static double[] faceSum(Joint j, Face f) {
-        double[] out = new double[LoadCase.values().length];
-        for (FaceReaction r : j.reactions()) {
-            if (r.face() == f) {
-                for (int k = 0; k < out.length; k++) {
-                    out[k] += r.loads()[k];
-                }
-            }
-        }
-        return out;
+        return j.faceSums()[f.ordinal()];
     }
 
     /** The net moment at a floor about one plan axis, and the live load a pattern removed there. */
@@ -497,7 +509,8 @@ public final class ColumnDesigner {
      * The factored net moment at floor {@code j} from the members along plan x ({@code alongX}) or y: (Rp − Rn)·e,
      * with live load removed from the side that makes it larger when {@code pattern}.
      */
-    private NetMoment net(Joint j, boolean alongX, double e, LoadCombination c, boolean pattern, String end, Calc sheet) {
+    private NetMoment net(Joint j, boolean alongX, double e, LoadCombination c, boolean pattern, String end, Calc sheet,
+            boolean describe) {
         Calc calc = j.reactions().isEmpty() ? null : sheet; // a floor without reactions (or the foundation) prints nothing
         Face pos = alongX ? Face.POS_X : Face.POS_Y;
         Face neg = alongX ? Face.NEG_X : Face.NEG_Y;
@@ -508,24 +521,26 @@ public final class ColumnDesigner {
         double rn = Combinations.combine(c, n);
         int li = LoadCase.L.ordinal();
         double removed = 0;
-        String text = "";
+        Face offFace = null;
         if (pattern && gl != 0 && (p[li] != 0 || n[li] != 0)) {
             double offP = Math.abs(rp - gl * p[li] - rn);
             double offN = Math.abs(rp - (rn - gl * n[li]));
             if (offP > offN) {
                 removed = p[li];
-                text = "L off the " + pos.label() + " face at " + j.level();
+                offFace = pos;
             } else if (n[li] != 0) {
                 removed = n[li];
-                text = "L off the " + neg.label() + " face at " + j.level();
+                offFace = neg;
             } // else: live load on one side only, where removing it makes the moment smaller (all spans loaded)
         }
+        // the pattern's words only where they are read: the sheet, and the governing case's result
+        String text = offFace == null || (calc == null && !describe) ? "" : "L off the " + offFace.label() + " face at " + j.level();
         if (calc != null) {
             String axis = alongX ? "x" : "y";
             String[] syms = {"D", "L", "Lr", "S"};
             for (Face f : new Face[] {pos, neg}) {
                 double[] sum = f == pos ? p : n;
-                boolean off = !text.isEmpty() && removed == sum[li] && text.contains(f.label());
+                boolean off = offFace == f;
                 StringBuilder formula = new StringBuilder();
                 List<Arg> args = new ArrayList<>();
                 for (LoadCase lc : LoadCase.values()) {
@@ -540,7 +555,7 @@ public final class ColumnDesigner {
                 calc.eq("R_" + end + (f.sign() > 0 ? "p" : "n") + axis, formula.length() == 0 ? "0" : formula.toString(),
                         c.reference() + (off ? ", " + CLAUSE_PATTERN : ""), v, Quantity.FORCE, args.toArray(new Arg[0]));
             }
-            if (!text.isEmpty()) {
+            if (offFace != null) {
                 Calc.branch(calc, "pattern live load: " + text + " makes the net moment about the " + axis
                         + " faces larger", CLAUSE_PATTERN);
             }
@@ -548,7 +563,7 @@ public final class ColumnDesigner {
         double rpp = rp;
         double rnn = rn;
         if (removed != 0) {
-            if (text.contains(pos.label())) {
+            if (offFace == pos) {
                 rpp -= gl * removed;
             } else {
                 rnn -= gl * removed;
@@ -607,7 +622,7 @@ public final class ColumnDesigner {
 
     /** One combination and live-load pattern of a storey (pattern: bit 1 the x faces, bit 2 the y faces). */
     private Interaction evaluate(StoreyDemand d, Section s, Flexure fx, Section above, boolean webAlongX, double pc,
-            LoadCombination c, int pattern, Calc calc) {
+            LoadCombination c, int pattern, Calc calc, boolean describe) {
         double h = d.height();
         double a = eccentricity;
         double ef = s.depth() / 2 + a;
@@ -636,10 +651,10 @@ public final class ColumnDesigner {
         double ey = webAlongX ? ew : ef;
         boolean px = (pattern & 1) != 0;
         boolean py = (pattern & 2) != 0;
-        NetMoment tx = net(d.top(), true, ex, c, px, "t", calc);
-        NetMoment ty = net(d.top(), false, ey, c, py, "t", calc);
-        NetMoment bx = net(d.bottom(), true, ex, c, px, "b", calc);
-        NetMoment by = net(d.bottom(), false, ey, c, py, "b", calc);
+        NetMoment tx = net(d.top(), true, ex, c, px, "t", calc, describe);
+        NetMoment ty = net(d.top(), false, ey, c, py, "t", calc, describe);
+        NetMoment bx = net(d.bottom(), true, ex, c, px, "b", calc, describe);
+        NetMoment by = net(d.bottom(), false, ey, c, py, "b", calc, describe);
         double[] reduced = d.reduced();
         int li = LoadCase.L.ordinal();
         double fl = d.unreduced()[li] > 0 ? reduced[li] / d.unreduced()[li] : 1;

@@ -52,11 +52,7 @@ public final class Combinations {
      * the sum of factor × value, taken in the order of {@link LoadCase}.
      */
     public static double combine(LoadCombination c, double[] byCase) {
-        double v = 0;
-        for (LoadCase lc : LoadCase.values()) {
-            v += c.factor(lc) * byCase[lc.ordinal()];
-        }
-        return v;
+        return c.combine(byCase);
     }
 
     /**

@@ -55,16 +55,10 @@ public final class IShapeFlexure {
         double lrf = Slenderness.lambdaRf(e, fy, calc);
         double lpw = Slenderness.lambdaPw(e, fy, calc);
         boolean webCompact = lambdaW <= lpw;
-        Calc.branch(calc, "λw = h/tw = " + CalcFormat.sig(lambdaW) + (webCompact ? " ≤ " : " > ") + "λpw = "
-                + CalcFormat.sig(lpw) + (webCompact ? " → compact web" : " → noncompact web: F4 applies (not implemented)"),
-                CLAUSE_TABLE_B4_1B_CASE_15);
         FlangeClass fc = lambdaF <= lpf ? FlangeClass.COMPACT : lambdaF <= lrf ? FlangeClass.NONCOMPACT : FlangeClass.SLENDER;
-        Calc.branch(calc, "λf = bf/2tf = " + CalcFormat.sig(lambdaF) + switch (fc) {
-            case COMPACT -> " ≤ λpf = " + CalcFormat.sig(lpf) + " → compact flange: F2 applies";
-            case NONCOMPACT -> " > λpf = " + CalcFormat.sig(lpf) + ", ≤ λrf = " + CalcFormat.sig(lrf)
-                    + " → noncompact flange: F3 applies";
-            case SLENDER -> " > λrf = " + CalcFormat.sig(lrf) + " → slender flange: F3 applies";
-        }, CLAUSE_TABLE_B4_1B_CASE_10);
+        if (calc != null) { // the words only for a sheet: the searches call this for every section
+            classification(lambdaW, lpw, webCompact, lambdaF, lpf, lrf, fc, calc);
+        }
         double sx = p.sx();
         double mp = FlexureF2.mp(fy, p.zx(), calc);
         double mr = FlexureF2.mr(fy, sx, calc);
@@ -82,6 +76,20 @@ public final class IShapeFlexure {
         };
         return new Constants(s.designation(), fy, e, mp, mr, lp, lr, rts, p.j(), sx, ho, lambdaF, lpf, lrf, mnFlb, fc,
                 webCompact);
+    }
+
+    /** The branch lines of the web and flange classification (Table B4.1b), for a sheet. */
+    private static void classification(double lambdaW, double lpw, boolean webCompact, double lambdaF, double lpf, double lrf,
+            FlangeClass fc, Calc calc) {
+        Calc.branch(calc, "λw = h/tw = " + CalcFormat.sig(lambdaW) + (webCompact ? " ≤ " : " > ") + "λpw = "
+                + CalcFormat.sig(lpw) + (webCompact ? " → compact web" : " → noncompact web: F4 applies (not implemented)"),
+                CLAUSE_TABLE_B4_1B_CASE_15);
+        Calc.branch(calc, "λf = bf/2tf = " + CalcFormat.sig(lambdaF) + switch (fc) {
+            case COMPACT -> " ≤ λpf = " + CalcFormat.sig(lpf) + " → compact flange: F2 applies";
+            case NONCOMPACT -> " > λpf = " + CalcFormat.sig(lpf) + ", ≤ λrf = " + CalcFormat.sig(lrf)
+                    + " → noncompact flange: F3 applies";
+            case SLENDER -> " > λrf = " + CalcFormat.sig(lrf) + " → slender flange: F3 applies";
+        }, CLAUSE_TABLE_B4_1B_CASE_10);
     }
 
     /**

@@ -110,7 +110,8 @@ public final class BeamCommand implements Callable<Integer> {
     String method;
 
     @Option(names = "--bracing", paramLabel = "continuous|N", defaultValue = "continuous",
-            description = "Compression-flange bracing: continuous (Lb = 0, a deck; the default) or N equal unbraced segments (1 = braced at the supports only).")
+            description = "Compression-flange bracing: continuous (Lb = 0, a deck; the default) or N equal unbraced segments (1 = braced at the supports only). With --composite: the bracing of the bare steel during construction "
+            + "where the deck does not brace it (ribs parallel; default there: 1).")
     String bracing;
 
     @Option(names = "--max-depth", paramLabel = "LENGTH", description = "Largest actual depth d allowed, e.g. 18in.")

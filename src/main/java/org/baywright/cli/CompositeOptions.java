@@ -95,7 +95,7 @@ final class CompositeOptions {
     String constructionLive;
 
     @Option(names = "--min-composite", paramLabel = "PERCENT", description = "With --composite: least degree of composite action "
-            + "(default 25%; common practice, after the AISC Commentary).")
+            + "(default 25%%; common practice, after the AISC Commentary).")
     String minComposite;
 
     @Option(names = "--stud-weight", paramLabel = "WEIGHT", description = "With --composite: steel weight one stud is worth when "
@@ -103,7 +103,7 @@ final class CompositeOptions {
     String studWeight;
 
     @Option(names = "--camber", paramLabel = "on|off", description = "With --composite: camber the unshored beam (default on: "
-            + "about 80 % of the deflection under the wet slab and steel, rounded down to 1/4 in, none below 3/4 in or on "
+            + "about 80 %% of the deflection under the wet slab and steel, rounded down to 1/4 in, none below 3/4 in or on "
             + "spans under 20 ft; common practice).")
     String camber;
 

@@ -172,7 +172,7 @@ class CompositeBeamCommandTest {
         "--ribs diagonal|--ribs: \"diagonal\" is not allowed; use perpendicular or parallel",
         "--concrete 145|--concrete: \"145\" needs a unit weight with its unit",
         "--concrete 400pcf|--concrete: \"400pcf\" is not a structural concrete unit weight",
-        "--fc 4|--fc",
+        "--fc 4|--fc: \"4\" has no unit",
         "--min-composite 120%|--min-composite: \"120%\" is not a percentage",
         "--stud-position middle|--stud-position: \"middle\" is not allowed; use weak or strong",
         "--studs-per-rib 5|--studs-per-rib: \"5\" is not a number of studs per rib",
@@ -186,6 +186,20 @@ class CompositeBeamCommandTest {
         assertEquals(BaywrightCommand.EXIT_BAD_INPUT, r.code(), r.out());
         assertTrue(r.err().contains(message), r.err());
         assertFalse(r.err().contains("Exception"), r.err());
+    }
+
+    /** --calc prints the composite sheet of the design: Qn by Eq. I8-1, the plastic strength of I3.2a, I_LB. */
+    @Test
+    void calcPrintsTheCompositeSheet() {
+        BeamCommandTest.Run r = BeamCommandTest.run(exampleI1("--section", "W21X50", "--studs", "46", "--calc"));
+        String t = r.out();
+        assertAll(
+                () -> assertEquals(0, r.code(), r.err()),
+                () -> assertTrue(t.contains("Calculation sheet"), t),
+                () -> assertTrue(t.contains("(AISC 360-16 Eq. I8-1)"), t),
+                () -> assertTrue(t.contains("(AISC 360-16 I3.1a)"), t),
+                () -> assertTrue(t.contains("ΣQn = n_h · Qn = 23 · "), t),
+                () -> assertTrue(t.contains("Composite flexure: W21X50 with 23 studs per half span"), t));
     }
 
     @Test

@@ -45,6 +45,7 @@ import org.baywright.units.Quantities;
 import org.baywright.units.UnitParseException;
 import org.baywright.units.UnitSystem;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
@@ -109,7 +110,8 @@ public final class BeamCommand implements Callable<Integer> {
     String method;
 
     @Option(names = "--bracing", paramLabel = "continuous|N", defaultValue = "continuous",
-            description = "Compression-flange bracing: continuous (Lb = 0, a deck; the default) or N equal unbraced segments (1 = braced at the supports only).")
+            description = "Compression-flange bracing: continuous (Lb = 0, a deck; the default) or N equal unbraced segments (1 = braced at the supports only). With --composite: the bracing of the bare steel during construction "
+            + "where the deck does not brace it (ribs parallel; default there: 1).")
     String bracing;
 
     @Option(names = "--max-depth", paramLabel = "LENGTH", description = "Largest actual depth d allowed, e.g. 18in.")
@@ -151,6 +153,9 @@ public final class BeamCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print one JSON object instead of text.")
     boolean json;
 
+    @Mixin
+    CompositeOptions composite = new CompositeOptions();
+
     @Option(names = "--calc", description = "Also print the calculation sheet of the chosen section: each equation as formula, substitution and result, with its clause.")
     boolean calc;
 
@@ -179,6 +184,10 @@ public final class BeamCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
+        composite.refuseWithoutComposite();
+        if (composite.on) {
+            refuseForComposite();
+        }
         double l = CliValues.quantity("--span", span, Dimension.LENGTH, true);
         UnitSystem us = unitSystem();
         Map<LoadCase, List<SpanLoad>> loads = new EnumMap<>(LoadCase.class);
@@ -249,6 +258,15 @@ public final class BeamCommand implements Callable<Integer> {
         SearchFilter filter = new SearchFilter(minD, maxD, seriesSet, excluded);
         Section fixed = section == null ? null : cat.find(section).orElseThrow(() -> new BadInputException("--section: \""
                 + section + "\" is not in the catalog " + cat.name() + "; see 'baywright catalog list'"));
+        if (composite.on) {
+            double wd = dead == null ? 0 : CliValues.quantity("--dead", dead, Dimension.LINE_LOAD, false);
+            double wl = live == null ? 0 : CliValues.quantity("--live", live, Dimension.LINE_LOAD, false);
+            boolean bracingGiven = spec.commandLine().getParseResult().hasMatchedOption("--bracing");
+            CompositeRun run = new CompositeRun(composite.beam(l, wd, wl),
+                    composite.criteria(m, steel, dl, sw, bracingGiven ? b : null), us, cat);
+            int perHalf = composite.studsPerHalf(fixed != null);
+            return run.execute(out, fixed, perHalf, filter, calc, json, allRejected, wd, wl);
+        }
         boolean spanLoaded = loads.values().stream().anyMatch(x -> x.stream().anyMatch(y -> y.total() > 0));
         if (!spanLoaded) {
             if (!anyLoadOption || !sw) {
@@ -308,21 +326,39 @@ public final class BeamCommand implements Callable<Integer> {
         } else {
             printText(out, r, us, l, criteria, cat);
             if (sheet != null) {
-                out.println();
-                out.println("Calculation sheet");
-                for (CalcLine line : sheet.lines()) {
-                    boolean head = line.kind() == CalcLine.Kind.HEADING;
-                    if (head) {
-                        out.println();
-                    }
-                    out.println((head ? "" : "  ") + CalcFormat.render(line, us));
-                }
-                out.println();
-                out.println(Caution.TEXT);
+                printSheet(out, sheet, us);
             }
         }
         out.flush();
         return design.status() == MemberStatus.OVERSTRESSED ? BaywrightCommand.EXIT_OVERSTRESSED : BaywrightCommand.EXIT_OK;
+    }
+
+    /** Options of the plain beam that a composite beam does not take (uniform --dead and --live only). */
+    private void refuseForComposite() {
+        String[][] plainOnly = {{"--dead-point", deadPoints.isEmpty() ? null : ""}, {"--live-point", livePoints.isEmpty() ? null : ""},
+            {"--roof-live", roofLive}, {"--snow", snow}, {"--tributary-area", tributaryArea}, {"--kll", kll}, {"--floors", floors}};
+        for (String[] o : plainOnly) {
+            if (o[1] != null) {
+                throw new BadInputException(o[0] + " is not available with --composite: a composite beam takes uniform "
+                        + "--dead (superimposed) and --live loads only; point loads, roof live load, snow and live-load "
+                        + "reduction are not designed composite yet");
+            }
+        }
+    }
+
+    /** Prints a calculation sheet, one line per entry, headings set apart. */
+    static void printSheet(PrintWriter out, Calc sheet, UnitSystem us) {
+        out.println();
+        out.println("Calculation sheet");
+        for (CalcLine line : sheet.lines()) {
+            boolean head = line.kind() == CalcLine.Kind.HEADING;
+            if (head) {
+                out.println();
+            }
+            out.println((head ? "" : "  ") + CalcFormat.render(line, us));
+        }
+        out.println();
+        out.println(Caution.TEXT);
     }
 
     /** What the outputs print: the design and what it was made from. */
@@ -550,7 +586,7 @@ public final class BeamCommand implements Callable<Integer> {
         return CalcFormat.value(si, q, us);
     }
 
-    private static String ratio(double r) {
+    static String ratio(double r) {
         return Double.isFinite(r) ? String.format(Locale.ROOT, "%.3f", r) : "n/a";
     }
 
@@ -662,7 +698,7 @@ public final class BeamCommand implements Callable<Integer> {
     }
 
     /** "ASTM A992, Fy = 50 ksi", or "Fy = 55 ksi (given with --fy)": Fy printed once. */
-    private static String steelText(Steel s, UnitSystem us) {
+    static String steelText(Steel s, UnitSystem us) {
         String fyText = "Fy = " + fmt(s.fy(), Quantity.STRESS, us);
         return s.name().equals(FY_GIVEN) ? fyText + " (" + FY_GIVEN + ")" : s.name() + ", " + fyText;
     }

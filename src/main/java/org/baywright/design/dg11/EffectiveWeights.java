@@ -111,12 +111,12 @@ public final class EffectiveWeights {
 
     /**
      * DG11 2nd ed. Eq. 4-2 (no. from memory; CHECK-VALUES §6): effective weight of the combined mode,
-     * W = Δj/(Δj + Δg)·Wj + Δg/(Δj + Δg)·Wg [N], with Δg′ where {@link #reducedGirderDeflection} applies.
+     * W = Δj/(Δj + Δg′)·Wj + Δg′/(Δj + Δg′)·Wg [N], Δg′ = Δg unless {@link #reducedGirderDeflection} applies.
      */
     public static double combined(double dj, double dg, double wj, double wg, Calc calc) {
         double v = dj / (dj + dg) * wj + dg / (dj + dg) * wg;
-        return Calc.eq(calc, "W", "Δj/(Δj + Δg)·Wj + Δg/(Δj + Δg)·Wg", SEC_4_1, v, Quantity.FORCE,
-                Arg.of("Δj", dj, Quantity.SECTION_LENGTH), Arg.of("Δg", dg, Quantity.SECTION_LENGTH),
+        return Calc.eq(calc, "W", "Δj/(Δj + Δg′)·Wj + Δg′/(Δj + Δg′)·Wg", SEC_4_1, v, Quantity.FORCE,
+                Arg.of("Δj", dj, Quantity.SECTION_LENGTH), Arg.of("Δg′", dg, Quantity.SECTION_LENGTH),
                 Arg.of("Wj", wj, Quantity.FORCE), Arg.of("Wg", wg, Quantity.FORCE));
     }
 }

@@ -67,15 +67,15 @@ public final class Modes {
 
     /**
      * DG11 2nd ed. Eq. 3-4 (no. from memory): the combined mode by Dunkerley's relation,
-     * f_n = 0.18·√(g/(Δj + Δg)) [Hz].
+     * f_n = 0.18·√(g/(Δj + Δg′)) [Hz], Δg′ = Δg unless Eq. 4-4 reduces it.
      *
      * @param dj beam (joist) deflection Δj [m]
      * @param dg girder deflection Δg, reduced to Δg′ where {@link EffectiveWeights#reducedGirderDeflection} applies [m]
      */
     public static double combined(double dj, double dg, Calc calc) {
         double v = 0.18 * Math.sqrt(Dg11.G / (dj + dg));
-        return Calc.eq(calc, "f_n", "0.18·√(g/(Δj + Δg))", EQ_3_4, v, Quantity.NUMBER,
+        return Calc.eq(calc, "f_n", "0.18·√(g/(Δj + Δg′))", EQ_3_4, v, Quantity.NUMBER,
                 Arg.of("g", Dg11.G, Quantity.SECTION_LENGTH), Arg.of("Δj", dj, Quantity.SECTION_LENGTH),
-                Arg.of("Δg", dg, Quantity.SECTION_LENGTH));
+                Arg.of("Δg′", dg, Quantity.SECTION_LENGTH));
     }
 }

@@ -66,7 +66,7 @@ class ArchitectureTest {
 
     @Test
     void designCodesKnowNothingOfThePlanTheRunOrTheUi() {
-        noClasses().that().resideInAPackage("org.baywright.design.aisc360..")
+        noClasses().that().resideInAnyPackage("org.baywright.design.aisc360..", "org.baywright.design.dg11..")
                 .should().dependOnClassesThat().resideInAnyPackage("org.baywright.plan..", "org.baywright.takedown..",
                         "org.baywright.run..", "org.baywright.ui..", "org.baywright.cli..", "org.baywright.io..",
                         "org.baywright.geometry..", "org.baywright.report..", "org.baywright.study..")

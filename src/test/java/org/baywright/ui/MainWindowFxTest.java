@@ -188,18 +188,7 @@ class MainWindowFxTest {
     }
 
     private javafx.scene.control.MenuItem menuItem(String id) {
-        javafx.scene.control.MenuBar bar = (javafx.scene.control.MenuBar) window.root().lookup("#menu-bar");
-        java.util.ArrayDeque<javafx.scene.control.MenuItem> todo = new java.util.ArrayDeque<>(bar.getMenus());
-        while (!todo.isEmpty()) {
-            javafx.scene.control.MenuItem m = todo.pop();
-            if (id.equals(m.getId())) {
-                return m;
-            }
-            if (m instanceof javafx.scene.control.Menu sub) {
-                todo.addAll(sub.getItems());
-            }
-        }
-        throw new AssertionError("no menu item " + id);
+        return MenuItems.find(window.root(), id);
     }
 
     /**

@@ -520,7 +520,7 @@ public final class OverhangDesigner {
         double capacity = 0;
         double where = 0;
         int bestP = 0;
-        String bestWhat = "";
+        boolean bestTip = false;
         for (int p = 0; p < patterns.length; p++) {
             OverhangSpan o = service(p, total, w);
             Extreme back = o.extremeEiDeflection(a, b);
@@ -539,11 +539,12 @@ public final class OverhangDesigner {
                     capacity = cd[1];
                     where = cd[2];
                     bestP = p;
-                    bestWhat = cd[3] == 0 ? "backspan, limit l/" + CalcFormat.sig(n)
-                            : "tip of the overhang, limit 2·c/" + CalcFormat.sig(n) + " (l = 2 × cantilever length)";
+                    bestTip = cd[3] != 0;
                 }
             }
         }
+        String bestWhat = !bestTip ? "backspan, limit l/" + CalcFormat.sig(n)
+                : "tip of the overhang, limit 2·c/" + CalcFormat.sig(n) + " (l = 2 × cantilever length)";
         LoadCombination combo = total ? totalCombination : liveCombination;
         String name = total ? "total-load deflection" : "live-load deflection";
         boolean tip = where == 0 && a > 0 || where == length && b < length;

@@ -28,12 +28,16 @@ public final class IShapeShear {
         boolean a = hw <= limA;
         double cv1;
         if (a) {
-            Calc.branch(calc, "h/tw = " + CalcFormat.sig(hw) + " ≤ 2.24√(E/Fy) = " + CalcFormat.sig(limA)
-                    + " → Cv1 = 1.0, φv = 1.00, Ωv = 1.50", CLAUSE_G2_1_A);
+            if (calc != null) { // the words only for a sheet: the searches call this for every section
+                Calc.branch(calc, "h/tw = " + CalcFormat.sig(hw) + " ≤ 2.24√(E/Fy) = " + CalcFormat.sig(limA)
+                        + " → Cv1 = 1.0, φv = 1.00, Ωv = 1.50", CLAUSE_G2_1_A);
+            }
             cv1 = 1.0;
         } else {
-            Calc.branch(calc, "h/tw = " + CalcFormat.sig(hw) + " > 2.24√(E/Fy) = " + CalcFormat.sig(limA)
-                    + " → φv = 0.90, Ωv = 1.67", CLAUSE_G2_1_B);
+            if (calc != null) {
+                Calc.branch(calc, "h/tw = " + CalcFormat.sig(hw) + " > 2.24√(E/Fy) = " + CalcFormat.sig(limA)
+                        + " → φv = 0.90, Ωv = 1.67", CLAUSE_G2_1_B);
+            }
             cv1 = ShearG2.cv1(hw, ShearG2.KV_UNSTIFFENED, e, fy, calc);
         }
         double vn = ShearG2.vn(fy, s.depth(), s.dims().tw(), cv1, calc);

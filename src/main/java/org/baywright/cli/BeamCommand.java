@@ -777,14 +777,7 @@ public final class BeamCommand implements Callable<Integer> {
         o.put("deflectionLiveLoad", r.reductions().isEmpty() ? "as given" : "unreduced");
         List<Object> checks = new ArrayList<>();
         for (Check k : d.checks()) {
-            Map<String, Object> j = new LinkedHashMap<>();
-            j.put("name", k.name());
-            j.put("ratio", k.ratio());
-            j.put("demand", k.quantity().unit(us).fromSi(k.demand()));
-            j.put("capacity", k.quantity().unit(us).fromSi(k.capacity()));
-            j.put("unit", k.quantity().unit(us).symbol());
-            j.put("combination", k.combination());
-            j.put("clause", k.clause());
+            Map<String, Object> j = checkJson(k, us);
             if (!Double.isNaN(k.position())) {
                 j.put("position", us.length().fromSi(k.position()));
             }
@@ -834,5 +827,21 @@ public final class BeamCommand implements Callable<Integer> {
         o.put("rejected", rej);
         o.put("caution", Caution.TEXT);
         return o;
+    }
+
+    /**
+     * A check as the JSON of {@code beam} writes it, in the output's units: name, ratio, demand, capacity, unit,
+     * combination and clause (the plain and the composite output add their own keys after these).
+     */
+    static Map<String, Object> checkJson(Check k, UnitSystem us) {
+        Map<String, Object> j = new LinkedHashMap<>();
+        j.put("name", k.name());
+        j.put("ratio", k.ratio());
+        j.put("demand", k.quantity().unit(us).fromSi(k.demand()));
+        j.put("capacity", k.quantity().unit(us).fromSi(k.capacity()));
+        j.put("unit", k.quantity().unit(us).symbol());
+        j.put("combination", k.combination());
+        j.put("clause", k.clause());
+        return j;
     }
 }

@@ -327,14 +327,7 @@ final class CompositeRun {
         }
         List<Object> checks = new ArrayList<>();
         for (Check k : d.checks()) {
-            Map<String, Object> j = new LinkedHashMap<>();
-            j.put("name", k.name());
-            j.put("ratio", k.ratio());
-            j.put("demand", k.quantity().unit(us).fromSi(k.demand()));
-            j.put("capacity", k.quantity().unit(us).fromSi(k.capacity()));
-            j.put("unit", k.quantity().unit(us).symbol());
-            j.put("combination", k.combination());
-            j.put("clause", k.clause());
+            Map<String, Object> j = BeamCommand.checkJson(k, us);
             j.put("note", k.note());
             checks.add(j);
         }

@@ -26,7 +26,12 @@ import org.baywright.io.PlanDocument.SettingsDoc;
 import org.baywright.plan.RoofCeiling;
 import org.baywright.plan.AreaLoad;
 import org.baywright.plan.Column;
+import org.baywright.plan.CompositeFloor;
+import org.baywright.plan.CompositeMode;
+import org.baywright.plan.CompositeRules;
 import org.baywright.plan.Deck;
+import org.baywright.plan.Slab;
+import org.baywright.plan.StudPlacement;
 import org.baywright.plan.DesignSettings;
 import org.baywright.plan.Floor;
 import org.baywright.plan.Framing;
@@ -136,6 +141,14 @@ final class PlanAssembler {
 
     /** The largest distance from a column face to a reaction a plan may give, m (24 in). */
     private static final double MAX_CONNECTION_ECCENTRICITY = 24 * 0.0254;
+    private static final Map<String, CompositeMode> ACTIONS = ordered("composite", CompositeMode.COMPOSITE, "non-composite",
+            CompositeMode.NON_COMPOSITE, "per-member", CompositeMode.PER_MEMBER);
+    private static final Map<String, Boolean> SHORING = ordered("unshored", false, "shored", true);
+    private static final Map<String, StudPlacement> STUD_POSITIONS = ordered("weak", StudPlacement.WEAK, "strong",
+            StudPlacement.STRONG);
+    private static final double IN = 0.0254;
+    private static final double PSF = Units.PSF.toSi(1);
+    private static final double PCF = Units.PCF.toSi(1);
 
     private DesignSettings settings(SettingsDoc s) {
         DesignSettings def = DesignSettings.defaults();
@@ -205,7 +218,60 @@ final class PlanAssembler {
             }
         }
         return new DesignSettings(method, fy, live, total, beamSeries, girderSeries, columnSeries, maxDepth, spliceEvery,
-                reduction, partitionAsDead, delivered, catalog, deflectionReduced, eccentricity);
+                reduction, partitionAsDead, delivered, catalog, deflectionReduced, java.util.Map.of(), eccentricity,
+                compositeRules(s.composite(), p + "/composite"));
+    }
+
+    /** The plan-wide composite rules; the defaults where a key is absent, and where a value is wrong (reported). */
+    private CompositeRules compositeRules(PlanDocument.CompositeRulesDoc c, String p) {
+        CompositeRules def = CompositeRules.DEFAULT;
+        if (c == null) {
+            return def;
+        }
+        double degree = def.minDegree();
+        if (c.minDegree() != null) {
+            degree = c.minDegree();
+            if (!(degree >= 0 && degree <= 1)) {
+                problems.error("out-of-range", p + "/minDegree", "", "minDegree: " + Numbers.format(degree) + " is not allowed;"
+                        + " give the least degree of composite action as a fraction from 0 to 1, e.g. 0.25 (AISC 360-16"
+                        + " Commentary I3.2d)");
+                degree = def.minDegree();
+            }
+        }
+        double stud = bounded(c.studWeight(), Dimension.FORCE, p + "/studWeight", "studWeight", def.studWeight(), 0,
+                Units.LBF.toSi(200), "the steel weight one stud is worth, 0 to 200 lb (900 N), e.g. \"10lb\"");
+        double allowance = bounded(c.camberAllowance(), Dimension.FORCE, p + "/camberAllowance", "camberAllowance",
+                def.camberAllowance(), 0, Units.LBF.toSi(5000), "the steel weight a cambered piece is worth, 0 to 5000 lb, e.g. \"50lb\"");
+        double share = def.camberShare();
+        if (c.camberShare() != null) {
+            share = c.camberShare();
+            if (!(share >= 0 && share <= 1)) {
+                problems.error("out-of-range", p + "/camberShare", "", "camberShare: " + Numbers.format(share) + " is not"
+                        + " allowed; give the share of the wet-concrete deflection cambered out, from 0 to 1, e.g. 0.8");
+                share = def.camberShare();
+            }
+        }
+        boolean camber = c.camber() == null ? def.camber() : c.camber();
+        return new CompositeRules(degree, stud, camber, share, allowance);
+    }
+
+    /**
+     * A quantity that must lie in [min, max]: {@code def} when absent, and when wrong (reported with what is
+     * allowed).
+     */
+    private double bounded(String text, Dimension d, String p, String label, double def, double min, double max, String allowed) {
+        if (text == null) {
+            return def;
+        }
+        double v = quantity(text, d, p, "", label);
+        if (Double.isNaN(v)) {
+            return def;
+        }
+        if (!(v >= min && v <= max)) {
+            problems.error("out-of-range", p, "", label + ": \"" + ShapeCheck.clip(text) + "\" is not allowed; give " + allowed);
+            return def;
+        }
+        return v;
     }
 
     private double ratio(Double value, String pointer, String label, double def) {
@@ -441,12 +507,40 @@ final class PlanAssembler {
             List<AreaLoad> areaLoads = items(f.areaLoads(), p + "/areaLoads", ids, AreaLoadDoc::id, this::areaLoad);
             List<LineLoad> lineLoads = items(f.lineLoads(), p + "/lineLoads", ids, LineLoadDoc::id, this::lineLoad);
             List<PointLoadItem> pointLoads = items(f.pointLoads(), p + "/pointLoads", ids, PointLoadDoc::id, this::pointLoad);
+            CompositeFloor composite = compositeFloor(f.composite(), p + "/composite", id);
+            if (composite.mode() != CompositeMode.NON_COMPOSITE && f.composite() != null
+                    && decks.stream().noneMatch(d -> d.slab() != null) && !decks.isEmpty()) {
+                problems.warning("no-slab", p + "/composite", id, "composite: floor \"" + id + "\" is set to act with its slab,"
+                        + " but none of its decks describes one (\"slab\"); its members are designed as bare steel");
+            }
             if (slab != null) {
                 out.add(new Floor(id, f.name() == null ? "" : f.name(), f.roof() != null && f.roof(), slab, decks, members,
-                        infills, openings, areaLoads, lineLoads, pointLoads));
+                        infills, openings, areaLoads, lineLoads, pointLoads, composite));
             }
         }
         return out;
+    }
+
+    /** How a floor's members work with its slab: non-composite when absent (files written before composite floors). */
+    private CompositeFloor compositeFloor(PlanDocument.CompositeFloorDoc c, String p, String floorId) {
+        if (c == null) {
+            return CompositeFloor.NONE;
+        }
+        CompositeMode mode = c.action() == null ? CompositeMode.NON_COMPOSITE
+                : choice(c.action(), p + "/action", floorId, "action", ACTIONS, CompositeMode.NON_COMPOSITE);
+        boolean shored = choice(c.shoring(), p + "/shoring", floorId, "shoring", SHORING, false);
+        double cl = CompositeFloor.DEFAULT_CONSTRUCTION_LIVE;
+        if (c.constructionLive() != null) {
+            double v = quantity(c.constructionLive(), Dimension.AREA_LOAD, p + "/constructionLive", floorId, "constructionLive");
+            if (!Double.isNaN(v) && !(v >= 0 && v <= 200 * PSF)) {
+                problems.error("out-of-range", p + "/constructionLive", floorId, "constructionLive: \""
+                        + ShapeCheck.clip(c.constructionLive()) + "\" is not allowed; give the construction live load on the"
+                        + " bare steel, 0 to 200 psf (9.6 kPa), e.g. \"20psf\" (ASCE/SEI 37)");
+            } else if (!Double.isNaN(v)) {
+                cl = v;
+            }
+        }
+        return new CompositeFloor(mode, shored, cl);
     }
 
     /** The ids used on one floor: every object of a floor has its own id. */
@@ -505,8 +599,75 @@ final class PlanAssembler {
         if (Double.isNaN(maxSpan) || Double.isNaN(maxOverhang)) {
             return null;
         }
+        Slab slab = null;
+        if (d.slab() != null) {
+            slab = slab(d.slab(), p + "/slab", id);
+            if (slab == null) {
+                return null;
+            }
+        }
         return outline == null || d.spanAngle() == null || d.id() == null ? null
-                : new Deck(id, outline, d.spanAngle(), maxSpan, maxOverhang);
+                : new Deck(id, outline, d.spanAngle(), maxSpan, maxOverhang, slab);
+    }
+
+    /** A deck's slab; null when anything in it is wrong (each problem reported with its field). */
+    private Slab slab(PlanDocument.SlabDoc s, String p, String id) {
+        Slab t = Slab.typical();
+        int before = problems.errorCount();
+        double hr = s.ribHeight() == null ? Double.NaN : inRange(s.ribHeight(), Dimension.LENGTH, p + "/ribHeight", id,
+                "ribHeight", 0, 8 * IN, "the deck's rib height, 0 (a solid slab) to 8 in (200 mm), e.g. \"3in\"");
+        double wr = s.ribWidth() == null ? t.ribWidth() : inRange(s.ribWidth(), Dimension.LENGTH, p + "/ribWidth", id,
+                "ribWidth", 0.5 * IN, 24 * IN, "the average width of a concrete rib, 0.5 to 24 in, e.g. \"6in\"");
+        double pitch = s.ribPitch() == null ? t.ribPitch() : inRange(s.ribPitch(), Dimension.LENGTH, p + "/ribPitch", id,
+                "ribPitch", 1 * IN, 36 * IN, "the rib pitch, centre to centre, 1 to 36 in, e.g. \"12in\"");
+        double deck = s.deckWeight() == null ? t.deckWeight() : inRange(s.deckWeight(), Dimension.AREA_LOAD, p + "/deckWeight",
+                id, "deckWeight", 0, 20 * PSF, "the deck's own weight, 0 to 20 psf (0.96 kPa), e.g. \"2.5psf\"");
+        double tc = s.topping() == null ? Double.NaN : inRange(s.topping(), Dimension.LENGTH, p + "/topping", id, "topping",
+                1 * IN, 16 * IN, "the concrete above the top of the deck, 1 to 16 in, e.g. \"4.5in\"");
+        double wc = s.concrete() == null ? Double.NaN : inRange(s.concrete(), Dimension.UNIT_WEIGHT, p + "/concrete", id,
+                "concrete", 70 * PCF, 170 * PCF, "the concrete unit weight, 70 to 170 pcf (11 to 26.7 kN/m3), e.g. \"145pcf\"");
+        double fc = s.fc() == null ? Double.NaN : inRange(s.fc(), Dimension.STRESS, p + "/fc", id, "fc", Units.KSI.toSi(3),
+                Units.KSI.toSi(10), "the concrete strength f'c, 3 to 10 ksi (21 to 69 MPa), the range of AISC 360-16 I1.3, e.g. \"4ksi\"");
+        double weight = s.weight() == null ? Double.NaN : inRange(s.weight(), Dimension.AREA_LOAD, p + "/weight", id, "weight",
+                5 * PSF, 300 * PSF, "the slab's weight, 5 to 300 psf, or leave it out to have it worked out from the slab's geometry");
+        PlanDocument.StudsDoc sd = s.studs();
+        double dsa = sd == null || sd.diameter() == null ? t.studDiameter() : inRange(sd.diameter(), Dimension.LENGTH,
+                p + "/studs/diameter", id, "diameter", 0.375 * IN, 1 * IN, "the stud shank diameter, 3/8 to 1 in, e.g. \"0.75in\"");
+        double fu = sd == null || sd.fu() == null ? t.studFu() : inRange(sd.fu(), Dimension.STRESS, p + "/studs/fu", id, "fu",
+                Units.KSI.toSi(50), Units.KSI.toSi(100), "the stud tensile strength, 50 to 100 ksi, e.g. \"65ksi\"");
+        int perRib = t.studsPerRib();
+        if (sd != null && sd.perRib() != null) {
+            perRib = sd.perRib();
+            if (perRib < 1 || perRib > 3) {
+                problems.error("out-of-range", p + "/studs/perRib", id, "perRib: " + perRib + " is not allowed; give 1, 2 or 3"
+                        + " studs per rib (AISC 360-16 Table 3-21 rows)");
+            }
+        }
+        StudPlacement position = sd == null || sd.position() == null ? t.studPosition()
+                : choice(sd.position(), p + "/studs/position", id, "position", STUD_POSITIONS, null);
+        if (problems.errorCount() > before || position == null) {
+            return null;
+        }
+        if (hr > 0 && wr > pitch) {
+            problems.error("bad-value", p + "/ribWidth", id, "ribWidth: \"" + ShapeCheck.clip(s.ribWidth()) + "\" is wider than the"
+                    + " rib pitch \"" + (s.ribPitch() == null ? "12in" : ShapeCheck.clip(s.ribPitch())) + "\"; the average rib width"
+                    + " must not exceed the pitch");
+            return null;
+        }
+        return new Slab(hr, wr, pitch, deck, tc, wc, fc, dsa, fu, perRib, position, weight);
+    }
+
+    /** A quantity in [min, max]; NaN when it does not parse or lies outside (both reported). */
+    private double inRange(String text, Dimension d, String p, String id, String label, double min, double max, String allowed) {
+        double v = quantity(text, d, p, id, label);
+        if (Double.isNaN(v)) {
+            return v;
+        }
+        if (!(v >= min - 1e-12 && v <= max + 1e-12)) {
+            problems.error("out-of-range", p, id, label + ": \"" + ShapeCheck.clip(text) + "\" is not allowed; give " + allowed);
+            return Double.NaN;
+        }
+        return v;
     }
 
     /** A deck's span or overhang limit, m: the default when absent, NaN when wrong (reported). */
@@ -537,10 +698,24 @@ final class PlanAssembler {
                     + m.end().get(1) + "); a member needs two distinct ends");
             return null;
         }
+        java.util.OptionalInt studs = java.util.OptionalInt.empty();
+        if (m.studs() != null) {
+            if (m.studs() < 0 || m.studs() > 400) {
+                problems.error("out-of-range", p + "/studs", id, "studs: " + m.studs() + " is not allowed; give the number of"
+                        + " studs on the whole member, 0 to 400 (with a fixed section)");
+                return null;
+            }
+            if (section.isEmpty()) {
+                problems.error("bad-value", p + "/studs", id, "studs: a stud count is fixed only with a fixed section; give"
+                        + " \"section\" too, or leave \"studs\" out to have them searched");
+                return null;
+            }
+            studs = java.util.OptionalInt.of(m.studs());
+        }
         if (kind == null || start == null || end == null || m.id() == null || section == null) {
             return null;
         }
-        return new Member(id, kind, start, end, section);
+        return new Member(id, kind, start, end, section, Optional.ofNullable(m.composite()), studs);
     }
 
     private Infill infill(InfillDoc n, String p) {

@@ -44,7 +44,12 @@ final class PlanDocument {
             List<String> beamSeries, List<String> girderSeries, List<String> columnSeries,
             @JsonInclude(JsonInclude.Include.ALWAYS) @QuantityOf(Dimension.LENGTH) String maxBeamDepth,
             Integer spliceEvery, Boolean liveLoadReduction, String partition, String girderArea, String catalog,
-            @QuantityOf(Dimension.LENGTH) String connectionEccentricity) {
+            @QuantityOf(Dimension.LENGTH) String connectionEccentricity, CompositeRulesDoc composite) {
+    }
+
+    /** The plan-wide rules of composite design; every key optional. */
+    record CompositeRulesDoc(Double minDegree, @QuantityOf(Dimension.FORCE) String studWeight, Boolean camber,
+            Double camberShare, @QuantityOf(Dimension.FORCE) String camberAllowance) {
     }
 
     /** Deflection limits as span/deflection ratios; 0 switches a check off. */
@@ -60,7 +65,7 @@ final class PlanDocument {
             @Required @QuantityOf(Dimension.LENGTH) String storeyHeight, @Required String floor) {
     }
 
-    record FloorDoc(@Required String id, String name, Boolean roof, String ceiling,
+    record FloorDoc(@Required String id, String name, Boolean roof, String ceiling, CompositeFloorDoc composite,
             @Required @QuantityOf(Dimension.LENGTH) List<List<String>> slabEdge, List<DeckDoc> decks,
             List<MemberDoc> members, List<InfillDoc> infills, List<OpeningDoc> openings, List<AreaLoadDoc> areaLoads,
             List<LineLoadDoc> lineLoads, List<PointLoadDoc> pointLoads) {
@@ -68,12 +73,29 @@ final class PlanDocument {
 
     record DeckDoc(@Required String id, @Required @QuantityOf(Dimension.LENGTH) List<List<String>> outline,
             @Required Double spanAngle, @QuantityOf(Dimension.LENGTH) String maxSpan,
-            @QuantityOf(Dimension.LENGTH) String maxOverhang) {
+            @QuantityOf(Dimension.LENGTH) String maxOverhang, SlabDoc slab) {
+    }
+
+    /** How a floor's members work with its slab; absent: non-composite (bare steel). */
+    record CompositeFloorDoc(@Required String action, String shoring,
+            @QuantityOf(Dimension.AREA_LOAD) String constructionLive) {
+    }
+
+    /** The slab a deck carries: profile, concrete, studs; {@code weight} overrides the computed weight. */
+    record SlabDoc(@Required @QuantityOf(Dimension.LENGTH) String ribHeight, @QuantityOf(Dimension.LENGTH) String ribWidth,
+            @QuantityOf(Dimension.LENGTH) String ribPitch, @QuantityOf(Dimension.AREA_LOAD) String deckWeight,
+            @Required @QuantityOf(Dimension.LENGTH) String topping, @Required @QuantityOf(Dimension.UNIT_WEIGHT) String concrete,
+            @Required @QuantityOf(Dimension.STRESS) String fc, @QuantityOf(Dimension.AREA_LOAD) String weight, StudsDoc studs) {
+    }
+
+    /** The headed studs; every key optional (¾ in, 65 ksi, one per rib, weak position). */
+    record StudsDoc(@QuantityOf(Dimension.LENGTH) String diameter, @QuantityOf(Dimension.STRESS) String fu, Integer perRib,
+            String position) {
     }
 
     record MemberDoc(@Required String id, @Required String kind,
             @Required @QuantityOf(Dimension.LENGTH) List<String> start,
-            @Required @QuantityOf(Dimension.LENGTH) List<String> end, String section) {
+            @Required @QuantityOf(Dimension.LENGTH) List<String> end, String section, Boolean composite, Integer studs) {
     }
 
     /** Infill beams of one bay: exactly one of {@code count} or {@code maxSpacing}. */

@@ -21,7 +21,11 @@ import org.baywright.io.PlanDocument.PointLoadDoc;
 import org.baywright.io.PlanDocument.SettingsDoc;
 import org.baywright.plan.AreaLoad;
 import org.baywright.plan.Column;
+import org.baywright.plan.CompositeFloor;
+import org.baywright.plan.CompositeRules;
 import org.baywright.plan.Deck;
+import org.baywright.plan.Slab;
+import org.baywright.plan.StudPlacement;
 import org.baywright.plan.DesignSettings;
 import org.baywright.plan.Floor;
 import org.baywright.plan.RoofCeiling;
@@ -38,6 +42,7 @@ import org.baywright.plan.PointLoadItem;
 import org.baywright.plan.Polygon;
 import org.baywright.units.Unit;
 import org.baywright.units.UnitSystem;
+import org.baywright.units.Units;
 
 /**
  * Turns a {@link Plan} into the document records of its file, writing every quantity in the plan's
@@ -74,7 +79,19 @@ final class PlanWriter {
                 s.columnSeries(), s.maxBeamDepth() == 0 ? null : q(s.maxBeamDepth(), units.smallLength()), s.spliceEvery(),
                 s.liveLoadReduction(), s.partitionAsDead() ? "dead" : "live", s.girderAreaDelivered() ? "delivered" : "half-bay",
                 s.catalog(), s.connectionEccentricity() == DesignSettings.DEFAULT_CONNECTION_ECCENTRICITY ? null
-                        : q(s.connectionEccentricity(), units.smallLength()));
+                        : q(s.connectionEccentricity(), units.smallLength()), compositeRules(s.composite()));
+    }
+
+    /** The composite rules, only when they differ from the defaults (older files read the same). */
+    private PlanDocument.CompositeRulesDoc compositeRules(CompositeRules c) {
+        if (c.isDefault()) {
+            return null;
+        }
+        CompositeRules d = CompositeRules.DEFAULT;
+        return new PlanDocument.CompositeRulesDoc(c.minDegree() == d.minDegree() ? null : finite(c.minDegree()),
+                c.studWeight() == d.studWeight() ? null : q(c.studWeight(), units == UnitSystem.US ? Units.LBF : Units.N),
+                c.camber() == d.camber() ? null : c.camber(), c.camberShare() == d.camberShare() ? null : finite(c.camberShare()),
+                c.camberAllowance() == d.camberAllowance() ? null : q(c.camberAllowance(), units == UnitSystem.US ? Units.LBF : Units.N));
     }
 
     private GridLineDoc gridLine(GridLine g) {
@@ -90,21 +107,48 @@ final class PlanWriter {
         // a roof's ceiling only when the plan sets one (a roof without it reads as the default)
         RoofCeiling ceiling = f.roof() ? s.roofCeilings().get(f.id()) : null;
         return new FloorDoc(f.id(), f.name(), f.roof(), ceiling == null ? null : PlanAssembler.ceilingKey(ceiling),
-                polygon(f.slabEdge()), map(f.decks(), this::deck),
+                compositeFloor(f.composite()), polygon(f.slabEdge()), map(f.decks(), this::deck),
                 map(f.members(), this::member), map(f.infills(), this::infill), map(f.openings(), this::opening),
                 map(f.areaLoads(), this::areaLoad), map(f.lineLoads(), this::lineLoad), map(f.pointLoads(), this::pointLoad));
+    }
+
+    /** A floor's composite setting; left out for a bare-steel floor with the default values (as older files). */
+    private PlanDocument.CompositeFloorDoc compositeFloor(CompositeFloor c) {
+        if (c.equals(CompositeFloor.NONE)) {
+            return null;
+        }
+        String action = switch (c.mode()) {
+            case COMPOSITE -> "composite";
+            case NON_COMPOSITE -> "non-composite";
+            case PER_MEMBER -> "per-member";
+        };
+        return new PlanDocument.CompositeFloorDoc(action, c.shored() ? "shored" : "unshored",
+                q(c.constructionLive(), units.areaLoad()));
     }
 
     private DeckDoc deck(Deck d) {
         // the limits are written only when the user gave them, so a plan with the defaults reads as before
         boolean byDefault = d.defaultLimits();
         return new DeckDoc(d.id(), polygon(d.outline()), finite(d.spanAngle()), byDefault ? null : length(d.maxSpan()),
-                byDefault ? null : length(d.maxOverhang()));
+                byDefault ? null : length(d.maxOverhang()), slab(d.slab()));
+    }
+
+    private PlanDocument.SlabDoc slab(Slab s) {
+        if (s == null) {
+            return null;
+        }
+        Unit small = units.smallLength();
+        PlanDocument.StudsDoc studs = new PlanDocument.StudsDoc(q(s.studDiameter(), small), q(s.studFu(), units.stress()),
+                s.studsPerRib(), s.studPosition() == StudPlacement.STRONG ? "strong" : "weak");
+        return new PlanDocument.SlabDoc(q(s.ribHeight(), small), q(s.ribWidth(), small), q(s.ribPitch(), small),
+                q(s.deckWeight(), units.areaLoad()), q(s.topping(), small), q(s.density(), units.unitWeight()),
+                q(s.fc(), units.stress()), s.weightGiven() ? q(s.weightOverride(), units.areaLoad()) : null, studs);
     }
 
     private MemberDoc member(Member m) {
         return new MemberDoc(m.id(), m.kind().name().toLowerCase(Locale.ROOT), point(m.start()), point(m.end()),
-                m.fixedSection().orElse(null));
+                m.fixedSection().orElse(null), m.composite().orElse(null),
+                m.fixedStuds().isPresent() ? m.fixedStuds().getAsInt() : null);
     }
 
     private InfillDoc infill(Infill n) {

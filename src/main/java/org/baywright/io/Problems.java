@@ -17,6 +17,21 @@ final class Problems {
         add(Problem.error(kind, pointer, objectId == null ? "" : objectId, message));
     }
 
+    void warning(String kind, String pointer, String objectId, String message) {
+        add(Problem.warning(kind, pointer, objectId == null ? "" : objectId, message));
+    }
+
+    /** The number of errors reported so far. */
+    int errorCount() {
+        int n = 0;
+        for (Problem p : list) {
+            if (p.severity() == Problem.Severity.ERROR) {
+                n++;
+            }
+        }
+        return n;
+    }
+
     void add(Problem problem) {
         Problem p = readable(problem);
         list.add(p);

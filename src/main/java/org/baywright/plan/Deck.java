@@ -17,8 +17,10 @@ package org.baywright.plan;
  * @param maxSpan the longest span allowed between two members carrying the deck, along its span, m
  * @param maxOverhang the longest overhang (cantilever) allowed beyond the last member carrying the deck,
  *     along its span, m; an overhang needs a span behind it whatever its length
+ * @param slab the concrete slab it carries, or null when none is described (the slab's weight is then
+ *     whatever dead load the area loads give, and no member can act compositely with it)
  */
-public record Deck(String id, Polygon outline, double spanAngle, double maxSpan, double maxOverhang) {
+public record Deck(String id, Polygon outline, double spanAngle, double maxSpan, double maxOverhang, Slab slab) {
 
     /** Default largest span, ft (common practice: a 3 in composite deck, unshored). */
     public static final double DEFAULT_MAX_SPAN_FT = 15;
@@ -29,14 +31,34 @@ public record Deck(String id, Polygon outline, double spanAngle, double maxSpan,
     /** Default largest overhang, m (2 ft). */
     public static final double DEFAULT_MAX_OVERHANG = DEFAULT_MAX_OVERHANG_FT * 0.3048;
 
-    /** A deck with the default limits. */
+    /** A deck with the default limits and no slab described. */
     public Deck(String id, Polygon outline, double spanAngle) {
-        this(id, outline, spanAngle, DEFAULT_MAX_SPAN, DEFAULT_MAX_OVERHANG);
+        this(id, outline, spanAngle, DEFAULT_MAX_SPAN, DEFAULT_MAX_OVERHANG, null);
+    }
+
+    /** A deck with these limits and no slab described. */
+    public Deck(String id, Polygon outline, double spanAngle, double maxSpan, double maxOverhang) {
+        this(id, outline, spanAngle, maxSpan, maxOverhang, null);
     }
 
     /** This deck with other limits, m. */
     public Deck withLimits(double span, double overhang) {
-        return new Deck(id, outline, spanAngle, span, overhang);
+        return new Deck(id, outline, spanAngle, span, overhang, slab);
+    }
+
+    /** This deck carrying another slab (null: none). */
+    public Deck withSlab(Slab s) {
+        return new Deck(id, outline, spanAngle, maxSpan, maxOverhang, s);
+    }
+
+    /** This deck with another outline. */
+    public Deck withOutline(Polygon p) {
+        return new Deck(id, p, spanAngle, maxSpan, maxOverhang, slab);
+    }
+
+    /** This deck spanning at another angle, degrees. */
+    public Deck withSpanAngle(double angle) {
+        return new Deck(id, outline, angle, maxSpan, maxOverhang, slab);
     }
 
     /** True when both limits are the defaults (a plan file then leaves them out). */

@@ -132,11 +132,11 @@ public final class PlanEdits {
         List<Floor> floors = new ArrayList<>();
         for (Floor f : p.floors()) {
             List<Member> members = f.members().stream().filter(m -> kept.test(m.start()) && kept.test(m.end()))
-                    .map(m -> new Member(m.id(), m.kind(), move.apply(m.start()), move.apply(m.end()), m.fixedSection()))
+                    .map(m -> new Member(m.id(), m.kind(), move.apply(m.start()), move.apply(m.end()), m.fixedSection(), m.composite(), m.fixedStuds()))
                     .toList();
             List<Infill> infills = f.infills().stream().filter(i -> !removed.contains(i.x0()) && !removed.contains(i.x1())
                     && !removed.contains(i.y0()) && !removed.contains(i.y1())).toList();
-            List<Deck> decks = f.decks().stream().map(d -> new Deck(d.id(), movePoly.apply(d.outline()), d.spanAngle(), d.maxSpan(), d.maxOverhang()))
+            List<Deck> decks = f.decks().stream().map(d -> new Deck(d.id(), movePoly.apply(d.outline()), d.spanAngle(), d.maxSpan(), d.maxOverhang(), d.slab()))
                     .filter(d -> area(d.outline()) > SAME).toList();
             List<Opening> openings = f.openings().stream().filter(o -> o.outline().vertices().stream().allMatch(kept))
                     .map(o -> new Opening(o.id(), movePoly.apply(o.outline()))).toList();
@@ -160,7 +160,7 @@ public final class PlanEdits {
                 slab = movePoly.apply(slab);
             }
             floors.add(new Floor(f.id(), f.name(), f.roof(), slab, decks, members, infills, openings, areaLoads, lineLoads,
-                    pointLoads));
+                    pointLoads, f.composite()));
         }
         List<Column> columns = new ArrayList<>();
         for (Column c : p.columns()) {
@@ -489,9 +489,9 @@ public final class PlanEdits {
             if (f.decks().stream().noneMatch(d -> d.id().equals(deckId))) {
                 throw new IllegalArgumentException("floor " + floorId + " has no deck " + deckId);
             }
-            List<Deck> ds = f.decks().stream().map(d -> d.id().equals(deckId) ? new Deck(d.id(), d.outline(), a, d.maxSpan(), d.maxOverhang()) : d).toList();
+            List<Deck> ds = f.decks().stream().map(d -> d.id().equals(deckId) ? new Deck(d.id(), d.outline(), a, d.maxSpan(), d.maxOverhang(), d.slab()) : d).toList();
             return new Floor(f.id(), f.name(), f.roof(), f.slabEdge(), ds, f.members(), f.infills(), f.openings(),
-                    f.areaLoads(), f.lineLoads(), f.pointLoads());
+                    f.areaLoads(), f.lineLoads(), f.pointLoads(), f.composite());
         });
     }
 
@@ -519,7 +519,7 @@ public final class PlanEdits {
             List<Opening> os = new ArrayList<>(f.openings());
             os.add(new Opening(next("OP", floorIds(f)), outline));
             return new Floor(f.id(), f.name(), f.roof(), f.slabEdge(), f.decks(), f.members(), f.infills(), os,
-                    f.areaLoads(), f.lineLoads(), f.pointLoads());
+                    f.areaLoads(), f.lineLoads(), f.pointLoads(), f.composite());
         });
     }
 
@@ -533,7 +533,7 @@ public final class PlanEdits {
             List<AreaLoad> as = new ArrayList<>(f.areaLoads());
             as.add(new AreaLoad(next("AL", floorIds(f)), outline, values, use));
             return new Floor(f.id(), f.name(), f.roof(), f.slabEdge(), f.decks(), f.members(), f.infills(), f.openings(),
-                    as, f.lineLoads(), f.pointLoads());
+                    as, f.lineLoads(), f.pointLoads(), f.composite());
         });
     }
 
@@ -549,7 +549,7 @@ public final class PlanEdits {
             List<LineLoad> ls = new ArrayList<>(f.lineLoads());
             ls.add(new LineLoad(next("LL", floorIds(f)), path, values));
             return new Floor(f.id(), f.name(), f.roof(), f.slabEdge(), f.decks(), f.members(), f.infills(), f.openings(),
-                    f.areaLoads(), ls, f.pointLoads());
+                    f.areaLoads(), ls, f.pointLoads(), f.composite());
         });
     }
 
@@ -562,7 +562,7 @@ public final class PlanEdits {
             List<PointLoadItem> ps = new ArrayList<>(f.pointLoads());
             ps.add(new PointLoadItem(next("PL", floorIds(f)), at, values));
             return new Floor(f.id(), f.name(), f.roof(), f.slabEdge(), f.decks(), f.members(), f.infills(), f.openings(),
-                    f.areaLoads(), f.lineLoads(), ps);
+                    f.areaLoads(), f.lineLoads(), ps, f.composite());
         });
     }
 
@@ -586,10 +586,10 @@ public final class PlanEdits {
         UnaryOperator<Point> mv = q -> new Point(q.x() + dx, q.y() + dy);
         UnaryOperator<Polygon> mvp = poly -> new Polygon(poly.vertices().stream().map(mv).toList());
         Plan edited = editFloor(p, floorId, f -> new Floor(f.id(), f.name(), f.roof(), f.slabEdge(),
-                f.decks().stream().map(d -> ids.contains(d.id()) ? new Deck(d.id(), mvp.apply(d.outline()), d.spanAngle(), d.maxSpan(), d.maxOverhang()) : d)
+                f.decks().stream().map(d -> ids.contains(d.id()) ? new Deck(d.id(), mvp.apply(d.outline()), d.spanAngle(), d.maxSpan(), d.maxOverhang(), d.slab()) : d)
                         .toList(),
                 f.members().stream().map(m -> ids.contains(m.id())
-                        ? new Member(m.id(), m.kind(), mv.apply(m.start()), mv.apply(m.end()), m.fixedSection()) : m).toList(),
+                        ? new Member(m.id(), m.kind(), mv.apply(m.start()), mv.apply(m.end()), m.fixedSection(), m.composite(), m.fixedStuds()) : m).toList(),
                 f.infills(),
                 f.openings().stream().map(o -> ids.contains(o.id()) ? new Opening(o.id(), mvp.apply(o.outline())) : o).toList(),
                 f.areaLoads().stream().map(a -> ids.contains(a.id())
@@ -597,7 +597,7 @@ public final class PlanEdits {
                 f.lineLoads().stream().map(l -> ids.contains(l.id())
                         ? new LineLoad(l.id(), l.path().stream().map(mv).toList(), l.values()) : l).toList(),
                 f.pointLoads().stream().map(q -> ids.contains(q.id())
-                        ? new PointLoadItem(q.id(), mv.apply(q.at()), q.values()) : q).toList()));
+                        ? new PointLoadItem(q.id(), mv.apply(q.at()), q.values()) : q).toList(), f.composite()));
         List<Column> cs = edited.columns().stream().map(c -> ids.contains(c.id())
                 ? new Column(c.id(), mv.apply(c.at()), "", c.topLevel(), c.fixedSection()) : c).toList();
         return new Plan(edited.name(), edited.units(), edited.settings(), edited.grid(), edited.levels(), edited.floors(), cs, edited.notes());
@@ -622,7 +622,7 @@ public final class PlanEdits {
                 f.openings().stream().filter(o -> !gone.contains(o.id())).toList(),
                 f.areaLoads().stream().filter(a -> !gone.contains(a.id())).toList(),
                 f.lineLoads().stream().filter(l -> !gone.contains(l.id())).toList(),
-                f.pointLoads().stream().filter(q -> !gone.contains(q.id())).toList()));
+                f.pointLoads().stream().filter(q -> !gone.contains(q.id())).toList(), f.composite()));
         return new Plan(edited.name(), edited.units(), edited.settings(), edited.grid(), edited.levels(), edited.floors(),
                 edited.columns().stream().filter(c -> !gone.contains(c.id())).toList(), edited.notes());
     }
@@ -641,7 +641,7 @@ public final class PlanEdits {
                         : "floor " + floorId + " has no member " + id);
             }
             return withMembers(f, f.members().stream()
-                    .map(m -> m.id().equals(id) ? new Member(m.id(), m.kind(), m.start(), m.end(), s) : m).toList());
+                    .map(m -> m.id().equals(id) ? new Member(m.id(), m.kind(), m.start(), m.end(), s, m.composite(), m.fixedStuds()) : m).toList());
         });
     }
 
@@ -706,7 +706,7 @@ public final class PlanEdits {
                             ? new AreaLoad(a.id(), a.outline(), values, use == null ? a.use() : use) : a).toList(),
                     f.lineLoads().stream().map(l -> l.id().equals(id) ? new LineLoad(l.id(), l.path(), values) : l).toList(),
                     f.pointLoads().stream().map(q -> q.id().equals(id) ? new PointLoadItem(q.id(), q.at(), values) : q)
-                            .toList());
+                            .toList(), f.composite());
         });
     }
 
@@ -767,12 +767,12 @@ public final class PlanEdits {
 
     private static Floor withMembers(Floor f, List<Member> ms) {
         return new Floor(f.id(), f.name(), f.roof(), f.slabEdge(), f.decks(), ms, f.infills(), f.openings(), f.areaLoads(),
-                f.lineLoads(), f.pointLoads());
+                f.lineLoads(), f.pointLoads(), f.composite());
     }
 
     private static Floor withInfills(Floor f, List<Infill> is) {
         return new Floor(f.id(), f.name(), f.roof(), f.slabEdge(), f.decks(), f.members(), is, f.openings(), f.areaLoads(),
-                f.lineLoads(), f.pointLoads());
+                f.lineLoads(), f.pointLoads(), f.composite());
     }
 
     private static Set<String> floorIds(Floor f) {

@@ -99,7 +99,7 @@ public final class Optimiser {
                                 Double.POSITIVE_INFINITY) : inf);
             }
             floors.add(new Floor(fl.id(), fl.name(), fl.roof(), fl.slabEdge(), fl.decks(), fl.members(), infills, fl.openings(),
-                    fl.areaLoads(), fl.lineLoads(), fl.pointLoads()));
+                    fl.areaLoads(), fl.lineLoads(), fl.pointLoads(), fl.composite()));
         }
         return new Plan(plan.name(), plan.units(), plan.settings(), plan.grid(), plan.levels(), floors, plan.columns(), plan.notes());
     }

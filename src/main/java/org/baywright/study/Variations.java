@@ -133,9 +133,9 @@ public final class Variations {
     }
 
     private static Floor mapFloor(Floor fl, UnaryOperator<Point> f) {
-        List<Deck> decks = fl.decks().stream().map(d -> new Deck(d.id(), poly(d.outline(), f), d.spanAngle(), d.maxSpan(), d.maxOverhang())).toList();
+        List<Deck> decks = fl.decks().stream().map(d -> new Deck(d.id(), poly(d.outline(), f), d.spanAngle(), d.maxSpan(), d.maxOverhang(), d.slab())).toList();
         List<Member> members = fl.members().stream()
-                .map(mb -> new Member(mb.id(), mb.kind(), f.apply(mb.start()), f.apply(mb.end()), mb.fixedSection())).toList();
+                .map(mb -> new Member(mb.id(), mb.kind(), f.apply(mb.start()), f.apply(mb.end()), mb.fixedSection(), mb.composite(), mb.fixedStuds())).toList();
         List<Opening> openings = fl.openings().stream().map(o -> new Opening(o.id(), poly(o.outline(), f))).toList();
         List<AreaLoad> areas = fl.areaLoads().stream()
                 .map(a -> new AreaLoad(a.id(), poly(a.outline(), f), a.values(), a.use())).toList();
@@ -144,7 +144,7 @@ public final class Variations {
         List<PointLoadItem> points = fl.pointLoads().stream()
                 .map(p -> new PointLoadItem(p.id(), f.apply(p.at()), p.values())).toList();
         return new Floor(fl.id(), fl.name(), fl.roof(), poly(fl.slabEdge(), f), decks, members, fl.infills(), openings, areas,
-                lines, points);
+                lines, points, fl.composite());
     }
 
     private static Polygon poly(Polygon p, UnaryOperator<Point> f) {
@@ -170,7 +170,7 @@ public final class Variations {
     private static Plan mapInfills(Plan plan, UnaryOperator<Infill> f) {
         List<Floor> floors = plan.floors().stream().map(fl -> new Floor(fl.id(), fl.name(), fl.roof(), fl.slabEdge(), fl.decks(),
                 fl.members(), fl.infills().stream().map(f).toList(), fl.openings(), fl.areaLoads(), fl.lineLoads(),
-                fl.pointLoads())).toList();
+                fl.pointLoads(), fl.composite())).toList();
         return new Plan(plan.name(), plan.units(), plan.settings(), plan.grid(), plan.levels(), floors, plan.columns(), plan.notes());
     }
 
@@ -204,7 +204,7 @@ public final class Variations {
             List<Deck> decks = fl.decks().stream().map(d -> {
                 boolean turn = old.isEmpty() || old.stream().anyMatch(a -> sameLine(d.spanAngle(), deckAngleOnto(a)))
                         && bayCentres.stream().anyMatch(c -> d.outline().contains(c.x(), c.y()));
-                return turn ? new Deck(d.id(), d.outline(), deckAngleOnto(direction), d.maxSpan(), d.maxOverhang()) : d;
+                return turn ? new Deck(d.id(), d.outline(), deckAngleOnto(direction), d.maxSpan(), d.maxOverhang(), d.slab()) : d;
             }).toList();
             List<Member> members = fl.members().stream().map(m -> {
                 boolean northSouth = Math.abs(m.start().x() - m.end().x()) <= TOL && onAny(m.start().x(), xs);
@@ -215,12 +215,12 @@ public final class Variations {
                 } else if (eastWest && !northSouth) {
                     k = direction == GridLine.Axis.Y ? MemberKind.GIRDER : MemberKind.BEAM;
                 }
-                return k == m.kind() ? m : new Member(m.id(), k, m.start(), m.end(), m.fixedSection());
+                return k == m.kind() ? m : new Member(m.id(), k, m.start(), m.end(), m.fixedSection(), m.composite(), m.fixedStuds());
             }).toList();
             List<Infill> infills = fl.infills().stream()
                     .map(i -> new Infill(i.id(), i.x0(), i.x1(), i.y0(), i.y1(), direction, i.count(), i.maxSpacing())).toList();
             floors.add(new Floor(fl.id(), fl.name(), fl.roof(), fl.slabEdge(), decks, members, infills, fl.openings(),
-                    fl.areaLoads(), fl.lineLoads(), fl.pointLoads()));
+                    fl.areaLoads(), fl.lineLoads(), fl.pointLoads(), fl.composite()));
         }
         return new Plan(plan.name(), plan.units(), plan.settings(), plan.grid(), plan.levels(), floors, plan.columns(), plan.notes());
     }

@@ -305,7 +305,7 @@ public final class FloorDesigner {
                 decks.add(new Deck(d.id(), d.outline(), d.spanAngle() + 90));
             }
             Floor turned = new Floor(floor.id(), floor.name(), floor.roof(), floor.slabEdge(), decks, floor.members(),
-                    floor.infills(), floor.openings(), floor.areaLoads(), List.of(), List.of());
+                    floor.infills(), floor.openings(), floor.areaLoads(), List.of(), List.of(), floor.composite());
             halfBay = TributaryAnalysis.compute(turned, in.members(), Takedown.GRID);
         }
         return halfBay;

@@ -24,6 +24,8 @@ public enum Dimension {
     WARPING_CONSTANT("warping constant"),
     /** [kg/m] mass per length */
     MASS_PER_LENGTH("mass per length"),
+    /** [N/m³] weight per volume (concrete unit weight) */
+    UNIT_WEIGHT("unit weight"),
     /** [-] */
     DIMENSIONLESS("number");
 

@@ -41,6 +41,7 @@ public final class Quantities {
         ACCEPTED.put(Dimension.MOMENT_OF_INERTIA, "a number with in4, mm4 or cm4, e.g. 800in4");
         ACCEPTED.put(Dimension.WARPING_CONSTANT, "a number with in6, mm6 or cm6, e.g. 3040in6");
         ACCEPTED.put(Dimension.MASS_PER_LENGTH, "a number with kg/m or lb/ft, e.g. 74.4kg/m");
+        ACCEPTED.put(Dimension.UNIT_WEIGHT, "a number with pcf or kN/m3, e.g. 145pcf, 22.8kN/m3");
         ACCEPTED.put(Dimension.DIMENSIONLESS, "a plain number, e.g. 1.5");
     }
 

@@ -106,6 +106,11 @@ public enum UnitSystem {
         return floorArea;
     }
 
+    /** Concrete unit weight: pcf or kN/m³. */
+    public Unit unitWeight() {
+        return this == US ? Units.PCF : Units.KN_PER_M3;
+    }
+
     /** Converts a weight per length in N/m to this system's number (lb/ft, or kg/m by standard gravity). */
     public double weightPerLength(double newtonsPerMetre) {
         if (this == SI) {

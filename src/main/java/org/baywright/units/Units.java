@@ -80,6 +80,10 @@ public final class Units {
     public static final Unit KG_PER_M = new Unit("kg/m", List.of(), Dimension.MASS_PER_LENGTH, 1.0);
     public static final Unit LB_PER_FT_MASS = new Unit("lb/ft", List.of(), Dimension.MASS_PER_LENGTH, 0.45359237 / FT);
 
+    /** Pounds per cubic foot (concrete unit weight). */
+    public static final Unit PCF = new Unit("pcf", List.of("lb/ft3", "lb/ft³"), Dimension.UNIT_WEIGHT, NEWTONS_PER_POUND / (FT * FT * FT));
+    /** Kilonewtons per cubic metre. */
+    public static final Unit KN_PER_M3 = new Unit("kN/m³", List.of("kN/m3", "kn/m3", "KN/m3"), Dimension.UNIT_WEIGHT, 1e3);
     public static final Unit ONE = new Unit("", List.of("-"), Dimension.DIMENSIONLESS, 1.0);
 
     /** Every unit, in the order they are listed in messages. */
@@ -91,7 +95,7 @@ public final class Units {
             KSI, PSI, MPA, GPA,
             KIP_FT, KIP_IN, KN_M, N_M,
             IN2, MM2, FT2, M2, IN3, MM3, CM3, IN4, MM4, CM4, IN6, MM6, CM6,
-            KG_PER_M, LB_PER_FT_MASS);
+            KG_PER_M, LB_PER_FT_MASS, PCF, KN_PER_M3);
 
     /** The units of one dimension, in message order. */
     public static List<Unit> of(Dimension d) {

@@ -26,12 +26,51 @@ import org.baywright.plan.Point;
  * @param loads the service loads the member was designed for (live loads reduced), for calculation
  *     sheets; null when not designed
  * @param criteria the design criteria used; null when not designed
+ * @param composite the composite design when the member acts with its slab (then {@code design} is that
+ *     design seen as a beam design: its section, status, checks and rejections), else null
  */
 public record MemberResult(String id, String floor, MemberKind kind, Point start, Point end, double length,
         MemberStatus status, BeamDesign design, double tributaryArea, double reductionArea, double kll,
         double liveFactor, double roofLiveFactor, double[] startReaction, double[] endReaction, String startSupport, String endSupport,
         List<org.baywright.plan.Polygon> tributary, org.baywright.design.BeamLoads loads,
-        org.baywright.design.BeamCriteria criteria) {
+        org.baywright.design.BeamCriteria criteria, CompositeResult composite) {
+
+    /** A bare-steel member. */
+    public MemberResult(String id, String floor, MemberKind kind, Point start, Point end, double length,
+            MemberStatus status, BeamDesign design, double tributaryArea, double reductionArea, double kll,
+            double liveFactor, double roofLiveFactor, double[] startReaction, double[] endReaction, String startSupport,
+            String endSupport, List<org.baywright.plan.Polygon> tributary, org.baywright.design.BeamLoads loads,
+            org.baywright.design.BeamCriteria criteria) {
+        this(id, floor, kind, start, end, length, status, design, tributaryArea, reductionArea, kll, liveFactor, roofLiveFactor,
+                startReaction, endReaction, startSupport, endSupport, tributary, loads, criteria, null);
+    }
+
+    /** True when the member acts compositely with its slab. */
+    public boolean isComposite() {
+        return composite != null;
+    }
+
+    /** Studs on the member (0 when not composite). */
+    public int studs() {
+        return composite == null ? 0 : composite.studs();
+    }
+
+    /** Camber specified, m (0 when none). */
+    public double camber() {
+        return composite == null ? 0 : composite.camber();
+    }
+
+    /**
+     * Steel weight the member would have without composite action, N: the bare-steel design's for a
+     * composite member, else its own.
+     */
+    public double bareSteelWeight() {
+        if (composite == null) {
+            return steelWeight();
+        }
+        double w = composite.bareWeightPerLength();
+        return Double.isNaN(w) ? 0 : w * length;
+    }
 
     /**
      * Records the calculation sheet of this member's section, from the same equations the run used.
@@ -40,6 +79,9 @@ public record MemberResult(String id, String floor, MemberKind kind, Point start
     public org.baywright.calc.Calc calculation() {
         if (design == null || design.section() == null || loads == null) {
             return null;
+        }
+        if (composite != null) {
+            return composite.calculation();
         }
         org.baywright.calc.Calc calc = new org.baywright.calc.Calc();
         if (loads.isOverhanging()) {

@@ -362,6 +362,12 @@ public final class RunSummary {
                     us.floorArea().fromSi(t.floorArea()), us.floorArea().symbol(),
                     t.floorArea() > 0 ? weight(w, us) / us.floorArea().fromSi(t.floorArea()) : 0, weightPerAreaUnit(us),
                     maxRatio(t)));
+            if (hasComposite(t)) {
+                CompositeTotals c = CompositeTotals.of(t);
+                b.append(String.format(Locale.ROOT, "Composite: %d members, %,d headed studs, %d pieces cambered; without composite"
+                        + " action the steel would weigh %,.0f %s%n", c.members(), c.studs(), c.cambered(),
+                        weight(c.nonCompositeWeight(), us), weightUnit(us)));
+            }
             b.append(String.format(Locale.ROOT, "Run time: %.0f ms%n", run.milliseconds()));
             b.append("Equilibrium:");
             for (Equilibrium e : t.equilibrium()) {

@@ -50,6 +50,8 @@ public final class FloorDesigner {
     private final FloorInput in;
     private final Floor floor;
     private final FloorTributary trib;
+    /** The components of the slab area loads, by id ({@link SlabLoads}). */
+    private final Map<String, double[]> slabs;
     private final FloorRules rules;
     private final Searches searches;
     private final Map<String, List<Incoming>> incoming = new HashMap<>();
@@ -64,7 +66,8 @@ public final class FloorDesigner {
 
     private FloorDesigner(FloorInput in, FloorTributary trib, FloorRules rules, Searches searches) {
         this.in = in;
-        this.floor = in.floor();
+        this.floor = in.designFloor();
+        this.slabs = SlabLoads.components(in.floor());
         this.trib = trib;
         this.rules = rules;
         this.searches = searches;
@@ -109,7 +112,7 @@ public final class FloorDesigner {
         }
         double span = m.length();
         MemberLoads loads = MemberLoads.of(m, floor, trib, incoming.getOrDefault(m.id(), List.of()),
-                rules.liveLoad().partitionAsDead());
+                rules.liveLoad().partitionAsDead(), slabs);
         MemberReduction reduction = MemberReduction.of(loads, reductionArea(m, loads), kll(m), rules.liveLoad().reduce());
         BeamCriteria criteria = new BeamCriteria(rules.method(), rules.steel(), loads.bracing(m.kind()), rules.deflection(), true);
         Searches.Sized sized = size(m, reduction, loads, criteria);
@@ -134,7 +137,7 @@ public final class FloorDesigner {
         double a = ends.free() == 0 ? ends.overAt() : 0;
         double b = ends.free() == 0 ? span : ends.overAt();
         MemberLoads loads = MemberLoads.of(m, floor, trib, incoming.getOrDefault(m.id(), List.of()),
-                rules.liveLoad().partitionAsDead(), a, b);
+                rules.liveLoad().partitionAsDead(), slabs, a, b);
         MemberReduction reduction = MemberReduction.of(loads, reductionArea(m, loads), 1, rules.liveLoad().reduce());
         BeamCriteria criteria = new BeamCriteria(rules.method(), rules.steel(), loads.bracing(m.kind()), rules.deflection(), true);
         Searches.Sized sized = size(m, reduction, loads, criteria, a, b);

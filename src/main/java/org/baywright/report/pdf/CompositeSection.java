@@ -7,7 +7,7 @@ import org.baywright.calc.Quantity;
 import org.baywright.catalog.IShapeDimensions;
 import org.baywright.catalog.Section;
 import org.baywright.design.Check;
-import org.baywright.design.CompositeBeam;
+import org.baywright.design.CompositeMember;
 import org.baywright.design.CompositeCriteria;
 import org.baywright.design.CompositeDesign;
 import org.baywright.design.SlabOnDeck;
@@ -66,14 +66,14 @@ final class CompositeSection {
         f.gap(2);
         sketch(f, cr, cx.us);
         f.gap(4);
-        table(cx, cr);
+        table(cx, m, cr);
     }
 
     // ---- the sketch ----------------------------------------------------------------------------
 
     private static void sketch(PageFlow f, CompositeResult cr, UnitSystem us) {
         CompositeDesign d = cr.design();
-        CompositeBeam beam = cr.designer().beam();
+        CompositeMember beam = cr.designer().member();
         SlabOnDeck slab = beam.slab();
         Section s = d.section();
         IShapeDimensions dim = s.dims();
@@ -157,10 +157,15 @@ final class CompositeSection {
 
         // widths above the slab: b_eff each side of the centreline
         float yd = yTop + 9;
-        dimension(f, xl, cxp, yd);
-        dimension(f, cxp, xr, yd);
-        f.textCentre(lab, (xl + cxp) / 2, yd + 3, "b_eff,left = " + Fmt.v(bl, Quantity.SECTION_LENGTH, us));
-        f.textCentre(lab, (cxp + xr) / 2, yd + 3, "b_eff,right = " + Fmt.v(br, Quantity.SECTION_LENGTH, us));
+        // a side without slab (the member on the slab edge) gets no dimension; the sheet's table states 0
+        if (bl > 0) {
+            dimension(f, xl, cxp, yd);
+            f.textCentre(lab, (xl + cxp) / 2, yd + 3, "b_eff,left = " + Fmt.v(bl, Quantity.SECTION_LENGTH, us));
+        }
+        if (br > 0) {
+            dimension(f, cxp, xr, yd);
+            f.textCentre(lab, (cxp + xr) / 2, yd + 3, "b_eff,right = " + Fmt.v(br, Quantity.SECTION_LENGTH, us));
+        }
         f.dashed(true);
         f.line(cxp, yd + 2, cxp, yBot - 4, 0.3f, Rgb.GREY);
         f.dashed(false);
@@ -246,11 +251,17 @@ final class CompositeSection {
 
     // ---- the quantities ------------------------------------------------------------------------
 
-    private static void table(Context cx, CompositeResult cr) {
+    /** The floor's construction live load, as the plan gives it. */
+    private static String constructionLive(Context cx, MemberResult m) {
+        return cx.run.plan().floor(m.floor()).map(fl -> Fmt.v(fl.composite().constructionLive(), Quantity.AREA_LOAD, cx.us))
+                .orElse("as the plan gives it");
+    }
+
+    private static void table(Context cx, MemberResult m, CompositeResult cr) {
         PageFlow f = cx.flow;
         UnitSystem us = cx.us;
         CompositeDesign d = cr.design();
-        CompositeBeam beam = cr.designer().beam();
+        CompositeMember beam = cr.designer().member();
         CompositeCriteria crit = cr.designer().criteria();
         CompositeFlexureI3.Result fl = d.flexure();
         Table t = new Table().left("Quantity", 30).left("Value", 52).left("Clause", 22).fontSize(7f);
@@ -283,7 +294,7 @@ final class CompositeSection {
         Check cons = d.check("construction flexure");
         t.row("Construction stage", cr.shored() ? "shored: every load on the composite section, none on the bare steel"
                 : "bare steel under the wet slab (" + Fmt.v(d.slabWeight(), Quantity.AREA_LOAD, us) + ") and the construction live"
-                        + " load (" + Fmt.v(beam.constructionLive(), Quantity.AREA_LOAD, us) + "): ratio " + Fmt.ratio(d.constructionRatio())
+                        + " load (" + constructionLive(cx, m) + "): ratio " + Fmt.ratio(d.constructionRatio())
                         + (cons == null ? "" : " (" + Fmt.v(cons.demand(), Quantity.MOMENT, us) + " of " + Fmt.v(cons.capacity(),
                                 Quantity.MOMENT, us) + ")"), cons == null ? "" : cons.clause());
         t.row("Camber", cr.shored() ? "none (shored)" : "Δ_pre = " + Fmt.v(d.preDeflection(), Quantity.SECTION_LENGTH, us)

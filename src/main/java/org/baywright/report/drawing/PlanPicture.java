@@ -764,6 +764,12 @@ public final class PlanPicture {
         Pt above = new Pt(mid.x() + nx * offMm * k, mid.y() + ny * offMm * k);
         double sizeW = TextMetrics.width(sizeText, t, false);
         boolean fits = !style.fitLabels() || sizeW + t <= lenMm;
+        if (!fits && m.isComposite()) {
+            // on the screen at small zoom: the size alone where its studs and camber do not fit
+            sizeText = bareSizeLabel(m);
+            sizeW = TextMetrics.width(sizeText, t, false);
+            fits = sizeW + t <= lenMm;
+        }
         if (fits) {
             fits = label(above, sizeText, t, rot, Anchor.MIDDLE_BASELINE);
         }

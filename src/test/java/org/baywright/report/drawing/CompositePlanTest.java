@@ -48,4 +48,18 @@ class CompositePlanTest {
         FramingPlanDrawing d = FramingPlanDrawing.of(run, "Level 2", A3);
         assertFalse(texts(d, Layer.NOTES).stream().collect(Collectors.joining(" ")).contains("SLAB AND STUDS"));
     }
+
+    /** On the screen, a composite member too short at the zoom for its studs and camber shows its size alone. */
+    @Test
+    void theScreenFallsBackToTheSizeWhereTheFullLabelDoesNotFit() {
+        RunResult run = CompositeRuns.mixed();
+        PlanPicture screen = PlanPicture.forPlan(run.plan(), "Level 2", run,
+                PlanPicture.Style.screen(org.baywright.units.UnitSystem.US, 2.5, false, Rgb.WHITE));
+        // 45 ft = 13.7 m: about 137 mm long at 0.1 m per mm, about 20 mm at 0.69 m per mm
+        List<String> near = PlanPictureTest.texts(screen.build(0.1), Layer.MEMBER_LABELS);
+        List<String> far = PlanPictureTest.texts(screen.build(0.69), Layer.MEMBER_LABELS);
+        assertAll("screen",
+                () -> assertTrue(near.contains("[W21X50] (46) c=2\""), near.toString()),
+                () -> assertTrue(far.contains("[W21X50]") && !far.contains("[W21X50] (46) c=2\""), far.toString()));
+    }
 }

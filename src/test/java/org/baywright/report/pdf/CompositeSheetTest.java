@@ -30,10 +30,13 @@ class CompositeSheetTest {
     Path dir;
 
     private List<String> write(RunResult run) throws IOException {
-        Path pdf = System.getProperty("composite.pdf") != null ? Path.of(System.getProperty("composite.pdf"))
-                : dir.resolve("package.pdf");
+        return write(run, UnitSystem.US);
+    }
+
+    private List<String> write(RunResult run, UnitSystem us) throws IOException {
+        Path pdf = dir.resolve("package.pdf");
         PackageSummary s = CalculationPackage.write(run, pdf,
-                new PackageOptions(UnitSystem.US, ProjectInfo.named("", LocalDate.of(2025, 3, 14)), 0));
+                new PackageOptions(us, ProjectInfo.named("", LocalDate.of(2025, 3, 14)), 0));
         try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
             assertEquals(s.pages(), doc.getNumberOfPages());
             return PdfText.pages(doc);
@@ -126,5 +129,14 @@ class CompositeSheetTest {
                 () -> assertTrue(MemberGroups.same(a, b)),
                 () -> assertFalse(MemberGroups.same(a, c), "46 against 48 studs"),
                 () -> assertFalse(MemberGroups.sameComposite(a, CompositeRuns.bare("B-4", 0))));
+    }
+
+    /** In SI the sketch and the table read in millimetres: 60 in = 1,524 mm a side (exact conversion). */
+    @Test
+    void siSheetsReadInMillimetres() throws IOException {
+        String all = PdfText.fold(String.join(" ", write(CompositeRuns.mixed(), UnitSystem.SI)));
+        assertAll("SI",
+                () -> assertTrue(all.contains("b_eff,left = 1524 mm"), "b_eff left"),
+                () -> assertTrue(all.contains("c=51 mm"), "camber 2 in = 50.8 mm, whole millimetres"));
     }
 }

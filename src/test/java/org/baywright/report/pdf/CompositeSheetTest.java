@@ -74,7 +74,10 @@ class CompositeSheetTest {
                 () -> assertTrue(sheet.contains("Commentary Eqs. C-I3-1, C-I3-2"), "its clause"),
                 () -> assertTrue(sheet.contains("I8.2a, Eq. I8-1"), "the stud clause"),
                 () -> assertTrue(all.contains("Composite design: 2 beams and girders act with the concrete slab"), "the statement"),
-                () -> assertTrue(all.contains("composite beams Chapter I"), "the standards table"));
+                () -> assertTrue(all.contains("composite beams Chapter I"), "the standards table"),
+                () -> assertTrue(all.contains("Members on a floor whose deck carries a described slab act with it"),
+                        "the statements for review"),
+                () -> assertFalse(all.contains("no composite action with the slab is counted"), "no longer said"));
     }
 
     /** Every equation of the composite calculation is printed, as the bare sheets print theirs. */

@@ -300,6 +300,12 @@ final class FrontMatter {
                     + " (a plan setting per roof layout; the limit under Lr and under S is the same, so one live-load check"
                     + " covers both): " + roofDeflection(cx) + ".");
         }
+        if (composite(cx)) {
+            f.paragraph(f.body, "Composite members: live and superimposed dead load deflect the composite section on the"
+                    + " lower-bound moment of inertia I_LB (" + AISC + " Commentary Eqs. C-I3-1, C-I3-2); the total"
+                    + " deflection adds the part of the bare steel's deflection under the wet concrete that the camber does"
+                    + " not take out. Same limits.");
+        }
         f.paragraph(f.small, steelDeadLoadNote(b));
 
         f.heading2("How members and columns are designed", 40);

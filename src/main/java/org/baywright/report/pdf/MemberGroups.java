@@ -110,7 +110,10 @@ final class MemberGroups {
                 && sameLoads(a.loads(), b.loads()) && sameComposite(a, b);
     }
 
-    /** Both bare steel, or both composite with the same studs, camber, deck and shoring (their sections already equal). */
+    /**
+     * Both bare steel, or both composite with the same studs, camber, deck, ribs, shoring and effective
+     * widths (their sections already equal); a member and its mirror image (b_eff sides swapped) share.
+     */
     static boolean sameComposite(MemberResult a, MemberResult b) {
         if (a.isComposite() != b.isComposite()) {
             return false;
@@ -122,7 +125,8 @@ final class MemberGroups {
         var y = b.composite();
         return x.studs() == y.studs() && near(x.camber(), y.camber()) && x.shored() == y.shored() && x.ribs().equals(y.ribs())
                 && x.deck().equals(y.deck()) && near(x.design().beff(), y.design().beff())
-                && near(x.design().beffLeft(), y.design().beffLeft());
+                // mirror images (the slab edge on the other side) print the same sheet
+                && near(Math.min(x.design().beffLeft(), x.design().beffRight()), Math.min(y.design().beffLeft(), y.design().beffRight()));
     }
 
     static boolean sameLoads(BeamLoads a, BeamLoads b) {

@@ -91,34 +91,10 @@ class CompositeSheetTest {
         List<org.junit.jupiter.api.function.Executable> checks = new java.util.ArrayList<>();
         for (CalcLine l : b1.calculation().lines()) {
             String text = CalculationPackageTest.mainText(l, UnitSystem.US);
-            checks.add(() -> assertTrue(inOrder(all, text), "missing: " + text));
+            checks.add(() -> assertTrue(PdfText.inOrder(all, text), "missing: " + text));
         }
         assertTrue(checks.size() > 20, "the composite sheet records its equations");
         assertAll(checks);
-    }
-
-    /** True when the words of {@code words} occur in {@code text} in this order, starting at one occurrence of the first. */
-    static boolean inOrder(String text, String words) {
-        String[] w = words.split(" ");
-        int from = text.indexOf(w[0]);
-        while (from >= 0) {
-            int at = from + w[0].length();
-            boolean all = true;
-            for (int i = 1; i < w.length && all; i++) {
-                int next = text.indexOf(w[i], at);
-                // the words of one line lie close together: at most a wrapped clause between two of them
-                if (next < 0 || next - at > 120) {
-                    all = false;
-                } else {
-                    at = next + w[i].length();
-                }
-            }
-            if (all) {
-                return true;
-            }
-            from = text.indexOf(w[0], from + 1);
-        }
-        return false;
     }
 
     @Test

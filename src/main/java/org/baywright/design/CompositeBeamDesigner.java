@@ -302,6 +302,14 @@ public final class CompositeBeamDesigner {
         return ec;
     }
 
+    /**
+     * The least studs per half span the rules allow on {@code s}: the minimum degree of composite action
+     * and the maximum spacing of I8.2d (at least one).
+     */
+    public int minStudsPerHalf(Section s) {
+        return new SectionState(s, null).minPerHalf;
+    }
+
     /** The most studs per half span the ribs (or the minimum spacing) allow. */
     public int maxStudsPerHalf() {
         return maxPerHalf;

@@ -118,6 +118,12 @@ public final class CompositeBeamDesigner {
     private final String liveNote;
     private final String totalNote;
 
+    /** What R_g and R_p depend on (I8.2a); their words are built once per kind of deck and stud. */
+    private record FactorKey(DeckRibs ribs, int perRib, org.baywright.design.aisc360.StudPosition position, double wrOverHr) {
+    }
+
+    private static final Map<FactorKey, StudStrengthI8.Factors> FACTORS = new ConcurrentHashMap<>();
+
     /** A designer for a uniform-load beam, through {@link CompositeBeam#member()}. */
     public CompositeBeamDesigner(CompositeBeam beam, CompositeCriteria criteria) {
         this(beam.member(), criteria, beam);
@@ -141,7 +147,8 @@ public final class CompositeBeamDesigner {
         Studs st = m.studs();
         this.ec = StudStrengthI8.ec(slab.density(), slab.fc(), null);
         double asa = StudStrengthI8.asa(st.diameter(), null);
-        StudStrengthI8.Factors f = StudStrengthI8.factors(m.ribs(), st.perRib(), st.position(), slab.wrOverHr(), null);
+        StudStrengthI8.Factors f = FACTORS.computeIfAbsent(new FactorKey(m.ribs(), st.perRib(), st.position(), slab.wrOverHr()),
+                k -> StudStrengthI8.factors(k.ribs(), k.perRib(), k.position(), k.wrOverHr(), null));
         this.qn = StudStrengthI8.qn(asa, slab.fc(), ec, f, st.fu(), null);
         this.sMin = StudStrengthI8.minSpacing(st.diameter(), null);
         this.sMax = StudStrengthI8.maxSpacing(slab.thickness(), null);
@@ -363,6 +370,8 @@ public final class CompositeBeamDesigner {
         List<Check> constructionChecks = List.of();
         double constructionRatio;
         Check shear;
+        /** True once {@link #stages} has run (the construction checks are there). */
+        boolean staged;
 
         SectionState(Section s, Calc calc) {
             this.s = s;
@@ -461,8 +470,18 @@ public final class CompositeBeamDesigner {
             return r;
         }
 
+        /**
+         * The search's part of {@link #stages}: the construction stage's governing ratio only (the same
+         * number) and the shear check.
+         */
+        void stageRatios() {
+            constructionRatio = criteria.shored() ? 0 : Math.max(0, construction.governingRatio(s));
+            shear(null);
+        }
+
         /** The construction stage (bare steel, F2/F3 and G2.1 by {@link BeamDesigner}) and the composite-stage shear. */
         void stages(Calc calc) {
+            staged = true;
             if (criteria.shored()) {
                 Calc.branch(calc, "shored: the composite section carries every load; no construction stage, no camber", PRACTICE);
             } else {
@@ -480,7 +499,11 @@ public final class CompositeBeamDesigner {
                 constructionChecks = renamed;
                 constructionRatio = r;
             }
-            // shear on the steel section alone (I4.2 → G2.1)
+            shear(calc);
+        }
+
+        /** Shear on the steel section alone (I4.2 → G2.1) under the composite-stage combinations. */
+        void shear(Calc calc) {
             if (calc != null) {
                 calc.heading("Shear: the steel section alone");
             }
@@ -600,12 +623,77 @@ public final class CompositeBeamDesigner {
                 Arg.of("x", x, Quantity.SPAN_LENGTH), Arg.of("E", e, Quantity.STRESS), Arg.of(iName, i, Quantity.INERTIA));
     }
 
-    /** The stud-dependent checks of one section: composite flexure, the two deflections and the studs at point loads. */
-    private record Trial(CompositeFlexureI3.Result flexure, double sumQn, double ilb, Check moment, Check live, Check total,
-            Check points, double ratio) {
+    /**
+     * The stud-dependent checks of one section with one stud count: composite flexure, the studs at point
+     * loads, the two deflections. Plain numbers: the search makes thousands of these and needs only
+     * {@link #ratio}; the {@link Check} records are built on demand, for a result or a rejection.
+     */
+    private final class Trial {
+        final SectionState st;
+        final int perHalf;
+        CompositeFlexureI3.Result flexure;
+        int nm;
+        double sumQn;
+        double ilb;
+        double momentAvail;
+        double momentRatio;
+        /** The governing point load (−1 when none), the studs it needs and has, and the ratio. */
+        int point = -1;
+        int pointRequired;
+        int pointAvailable;
+        double pointRatio;
+        double live = Double.NaN;
+        double liveAllow;
+        double liveAt;
+        double total = Double.NaN;
+        double totalAllow;
+        double totalAt;
+        /** The governing ratio of the checks above. */
+        double ratio;
+
+        Trial(SectionState st, int perHalf) {
+            this.st = st;
+            this.perHalf = perHalf;
+        }
+
+        Check moment() {
+            CompositeFlexureI3.Result r = flexure;
+            String note = r.pna() == CompositeFlexureI3.Pna.SLAB ? "PNA in the slab"
+                    : r.pna() == CompositeFlexureI3.Pna.TOP_FLANGE ? "PNA in the top flange" : "PNA in the web";
+            if (nm != perHalf) {
+                note = note + "; " + nm + " studs between the nearer support and the point of maximum moment";
+            }
+            return new Check("composite flexure", st.mu.value(), momentAvail, momentRatio, st.mu.combination(), CLAUSE_I3_2A,
+                    Quantity.MOMENT, st.muAt, null, 0, Double.NaN, note);
+        }
+
+        Check points() {
+            if (point < 0) {
+                return null;
+            }
+            return new Check("studs at point loads", pointRequired == Integer.MAX_VALUE ? Double.POSITIVE_INFINITY : pointRequired,
+                    pointAvailable, pointRatio, st.pointCombo[point], CLAUSE_I8_2C, Quantity.NUMBER, points[point], null, Double.NaN,
+                    Double.NaN, "point load " + (point + 1) + " of " + points.length + " from the left governs: studs required "
+                            + "over studs between it and the nearer support");
+        }
+
+        Check live() {
+            return Double.isNaN(live) ? null : new Check("live-load deflection", live, liveAllow, live / liveAllow, null,
+                    DeflectionLimits.SOURCE, Quantity.SECTION_LENGTH, liveAt, null, Double.NaN, Double.NaN, liveNote);
+        }
+
+        Check total() {
+            if (Double.isNaN(total)) {
+                return null;
+            }
+            String note = criteria.shored() ? "shored: all loads on I_LB" : "pre-composite less camber, plus SDL and L on I_LB";
+            return new Check("total-load deflection", total, totalAllow, total / totalAllow, null, DeflectionLimits.SOURCE,
+                    Quantity.SECTION_LENGTH, totalAt, null, Double.NaN, Double.NaN, note + ", " + totalNote);
+        }
     }
 
     private Trial trial(SectionState st, int perHalf, Calc calc) {
+        Trial t = new Trial(st, perHalf);
         Section s = st.s;
         double fy = criteria.steel().fy();
         int nm = uniform ? perHalf : studsTo(st.muAt, perHalf);
@@ -636,26 +724,22 @@ public final class CompositeBeamDesigner {
             calc.eq("ratio", "M_req/M_avail", CLAUSE_I3_2A, ratio, Quantity.NUMBER, Arg.of("M_req", g.value(), Quantity.MOMENT),
                     Arg.of("M_avail", avail, Quantity.MOMENT));
         }
-        String note = r.pna() == CompositeFlexureI3.Pna.SLAB ? "PNA in the slab"
-                : r.pna() == CompositeFlexureI3.Pna.TOP_FLANGE ? "PNA in the top flange" : "PNA in the web";
-        if (nm != perHalf) {
-            note = note + "; " + nm + " studs between the nearer support and the point of maximum moment";
-        }
-        Check moment = new Check("composite flexure", g.value(), avail, ratio, g.combination(), CLAUSE_I3_2A, Quantity.MOMENT,
-                st.muAt, null, 0, Double.NaN, note);
+        t.flexure = r;
+        t.nm = nm;
+        t.sumQn = sumQn;
+        t.momentAvail = avail;
+        t.momentRatio = ratio;
         double worst = ratio;
-        Check points = null;
-        if (points().length > 0) {
-            points = pointCheck(st, perHalf, calc);
-            worst = Math.max(worst, points.ratio());
+        if (points.length > 0) {
+            pointCheck(t, calc);
+            worst = Math.max(worst, t.pointRatio);
         }
         if (calc != null) {
             calc.heading("Stiffness and deflections");
         }
         double ilb = CompositeStiffness.ilb(s, fy, r, calc);
+        t.ilb = ilb;
         DeflectionLimits lim = criteria.deflection();
-        Check live = null;
-        Check total = null;
         if (lim.live() > 0) {
             double d;
             double at;
@@ -666,15 +750,14 @@ public final class CompositeBeamDesigner {
                 d = deflection("Δ_LL", liveEi.value(), liveEi.position(), ilb, "I_LB", "live loads on I_LB", calc);
                 at = liveEi.position();
             }
-            double allow = span / lim.live();
-            live = new Check("live-load deflection", d, allow, d / allow, null, DeflectionLimits.SOURCE,
-                    Quantity.SECTION_LENGTH, at, null, Double.NaN, Double.NaN, liveNote);
-            worst = Math.max(worst, live.ratio());
+            t.live = d;
+            t.liveAllow = span / lim.live();
+            t.liveAt = at;
+            worst = Math.max(worst, d / t.liveAllow);
         }
         if (lim.total() > 0) {
             double d;
             double at;
-            String note2;
             if (criteria.shored()) {
                 if (uniform) {
                     d = deflection("Δ_TL", wSlab + wSdl + st.w + wLive, ilb, "every load on I_LB (shored)", calc);
@@ -683,7 +766,6 @@ public final class CompositeBeamDesigner {
                     d = deflection("Δ_TL", st.allEi, st.allAt, ilb, "I_LB", "every load and the steel on I_LB (shored)", calc);
                     at = st.allAt;
                 }
-                note2 = "shored: all loads on I_LB";
             } else {
                 double post;
                 if (uniform) {
@@ -696,21 +778,21 @@ public final class CompositeBeamDesigner {
                     Calc.branch(calc, "Δ_pre and Δ_post are each the maximum of their loads; their sum bounds the maximum of the total",
                             PRACTICE);
                 }
-                d = Calc.eq(calc, "Δ_TL", "Δ_pre − camber + Δ_post", PRACTICE, st.pre - st.camber + post,
-                        Quantity.SECTION_LENGTH, Arg.of("Δ_pre", st.pre, Quantity.SECTION_LENGTH),
-                        Arg.of("camber", st.camber, Quantity.SECTION_LENGTH), Arg.of("Δ_post", post, Quantity.SECTION_LENGTH));
-                note2 = "pre-composite less camber, plus SDL and L on I_LB";
+                if (calc == null) {
+                    d = st.pre - st.camber + post;
+                } else {
+                    d = calc.eq("Δ_TL", "Δ_pre − camber + Δ_post", PRACTICE, st.pre - st.camber + post,
+                            Quantity.SECTION_LENGTH, Arg.of("Δ_pre", st.pre, Quantity.SECTION_LENGTH),
+                            Arg.of("camber", st.camber, Quantity.SECTION_LENGTH), Arg.of("Δ_post", post, Quantity.SECTION_LENGTH));
+                }
             }
-            double allow = span / lim.total();
-            total = new Check("total-load deflection", d, allow, d / allow, null, DeflectionLimits.SOURCE,
-                    Quantity.SECTION_LENGTH, at, null, Double.NaN, Double.NaN, note2 + ", " + totalNote);
-            worst = Math.max(worst, total.ratio());
+            t.total = d;
+            t.totalAllow = span / lim.total();
+            t.totalAt = at;
+            worst = Math.max(worst, d / t.totalAllow);
         }
-        return new Trial(r, sumQn, ilb, moment, live, total, points, worst);
-    }
-
-    private double[] points() {
-        return points;
+        t.ratio = worst;
+        return t;
     }
 
     /**
@@ -718,19 +800,18 @@ public final class CompositeBeamDesigner {
      * moment of a simple span) must develop the moment at the point load. For each point load x_p the
      * studs required are the least k with φM_n(k·Q_n) ≥ M_u(x_p); those available, with n_h studs spaced
      * uniformly over each half span, ⌊n_h·d_p/(L/2)⌋, d_p = min(x_p, L − x_p). The ratio is required over
-     * available; the point with the highest ratio governs.
+     * available; the point with the highest ratio governs. Writes the governing point into {@code t}.
      */
-    private Check pointCheck(SectionState st, int perHalf, Calc calc) {
+    private void pointCheck(Trial t, Calc calc) {
+        SectionState st = t.st;
+        int perHalf = t.perHalf;
         int gov = 0;
         double worst = Double.NEGATIVE_INFINITY;
         for (int p = 0; p < points.length; p++) {
             double rp = pointRatio(st.required(p), studsTo(points[p], perHalf));
-            if (rp > worst || Double.isNaN(rp)) {
+            if (rp > worst) {
                 worst = rp;
                 gov = p;
-                if (Double.isNaN(rp)) {
-                    break;
-                }
             }
         }
         if (calc != null) {
@@ -761,12 +842,10 @@ public final class CompositeBeamDesigner {
             }
             calc.note("point load " + (gov + 1) + " governs", CLAUSE_I8_2C);
         }
-        int req = st.required(gov);
-        int avail = studsTo(points[gov], perHalf);
-        return new Check("studs at point loads", req == Integer.MAX_VALUE ? Double.POSITIVE_INFINITY : req, avail, worst,
-                st.pointCombo[gov], CLAUSE_I8_2C, Quantity.NUMBER, points[gov], null, Double.NaN, Double.NaN,
-                "point load " + (gov + 1) + " of " + points.length + " from the left governs: studs required over studs between "
-                        + "it and the nearer support");
+        t.point = gov;
+        t.pointRequired = st.required(gov);
+        t.pointAvailable = studsTo(points[gov], perHalf);
+        t.pointRatio = worst;
     }
 
     /** Required over available studs: 0 when none are required, ∞ when required ones are missing or cannot do. */
@@ -859,7 +938,10 @@ public final class CompositeBeamDesigner {
                 continue;
             }
             // the stud count does not change these: checked only for a section the composite checks let through
-            st.stages(null);
+            st.stageRatios();
+            if (st.constructionRatio > 1 + Check.RATIO_TOLERANCE) {
+                st.stages(null);
+            }
             Check fail = st.constructionRatio > 1 + Check.RATIO_TOLERANCE ? Check.governing(st.constructionChecks)
                     : !st.shear.passes() ? st.shear : null;
             if (fail != null) {
@@ -905,6 +987,9 @@ public final class CompositeBeamDesigner {
         }
         // only the sections lighter than the chosen one count as rejected on the way
         double chosenWeight = best.s.weight();
+        if (!best.staged) {
+            best.stages(null);
+        }
         rejected.removeIf(r -> r.section().weight() > chosenWeight);
         Trial t = trial(best, bestN, null);
         return result(MemberStatus.SIZED, best, bestN, t,
@@ -918,35 +1003,29 @@ public final class CompositeBeamDesigner {
     }
 
     private static Check governingOf(Trial t) {
-        List<Check> l = new ArrayList<>(3);
-        l.add(t.moment);
-        if (t.live != null) {
-            l.add(t.live);
-        }
-        if (t.total != null) {
-            l.add(t.total);
-        }
-        if (t.points != null) {
-            l.add(t.points);
-        }
+        List<Check> l = new ArrayList<>(4);
+        l.add(t.moment());
+        addIfAny(l, t.live());
+        addIfAny(l, t.total());
+        addIfAny(l, t.points());
         return Check.governing(l);
     }
 
     private List<Check> checks(SectionState st, Trial t) {
         List<Check> out = new ArrayList<>(7);
-        out.add(t.moment);
-        if (t.points != null) {
-            out.add(t.points);
-        }
+        out.add(t.moment());
+        addIfAny(out, t.points());
         out.addAll(st.constructionChecks);
         out.add(st.shear);
-        if (t.live != null) {
-            out.add(t.live);
-        }
-        if (t.total != null) {
-            out.add(t.total);
-        }
+        addIfAny(out, t.live());
+        addIfAny(out, t.total());
         return out;
+    }
+
+    private static void addIfAny(List<Check> l, Check c) {
+        if (c != null) {
+            l.add(c);
+        }
     }
 
     private CompositeDesign result(MemberStatus status, SectionState st, int perHalf, Trial t, double itr,

@@ -32,40 +32,66 @@ import org.baywright.load.LoadCase;
 import org.baywright.load.LoadCombination;
 
 /**
- * Designs one simple-span composite beam under uniform loads (AISC 360-16 Chapter I with the bare-steel
- * construction stage of Chapters F and G): checks a section with a number of studs, and searches a
- * catalog for the pair (section, studs) of least cost-equivalent weight, steel weight plus studs × an
- * equivalent weight per stud.
+ * Designs one simple-span composite member, a beam or a girder, under any simple-span gravity loads
+ * (AISC 360-16 Chapter I with the bare-steel construction stage of Chapters F and G): checks a section
+ * with a number of studs, and searches a catalog for the pair (section, studs) of least cost-equivalent
+ * weight, steel weight plus studs × an equivalent weight per stud.
+ *
+ * <p>The input is a {@link CompositeMember}: the wet loads (before the concrete hardens), the
+ * construction live load, and the composite-stage loads by case ({@link BeamLoads}); a
+ * {@link CompositeBeam} (uniform loads from area loads and a tributary width) is converted by
+ * {@link CompositeBeam#member()}. When every load is a full-span uniform one on D and L (no separate
+ * deflection loads) the statics are the closed forms of a uniform load and the sheet prints them
+ * (w·L²/8, w·L/2, 5·w·L⁴/(384·E·I)); otherwise they are those of the simple span under the loads as
+ * listed ({@link SimpleSpan}: the largest moment of each combination and where it acts, the larger
+ * reaction, the largest deflection of each load group), stated as such on the sheet.
  *
  * <p>The checks of a section with n studs per half span:
  * <ul>
- * <li><b>composite flexure</b>: M_u (or M_a) of the strength combinations on D = slab + superimposed
- * dead + own weight and L, against φ_b·M_n (M_n/Ω_b) of the plastic stress distribution with
- * ΣQ_n = n·Q_n (I3.2a, I3.2d(1), I8.2a); in an unshored beam too, the composite section carries the
- * total moment (I3.2a);</li>
+ * <li><b>composite flexure</b>: M_u (or M_a) of the strength combinations of the cases present, D = the
+ * wet loads + superimposed dead + own weight, against φ_b·M_n (M_n/Ω_b) of the plastic stress
+ * distribution with ΣQ_n the studs between the nearer support and the point of maximum moment
+ * (I3.2a, I3.2d(1), I8.2a); in an unshored member too, the composite section carries the total moment
+ * (I3.2a);</li>
+ * <li><b>studs at point loads</b> (when there are point loads; I8.2c): the studs between each point
+ * load and the nearer support must develop the moment there: required, the least k with
+ * φM_n(k·Q_n) ≥ M_u(x_p); available, ⌊n·d_p/(L/2)⌋ with the studs spaced uniformly over each half
+ * span (common practice) and d_p the distance to the nearer support; ratio required/available, the
+ * point of the highest ratio reported;</li>
  * <li><b>construction flexure</b> and <b>construction shear</b> (unshored): the bare steel under the wet
- * slab and its own weight as D and the construction live load as L, by {@link BeamDesigner} (F2/F3 with
- * the deck bracing the top flange when its ribs are perpendicular, the criteria's bracing otherwise;
- * G2.1);</li>
- * <li><b>shear</b>: the steel section alone (I4.2 → G2.1) under the composite-stage combinations;</li>
- * <li><b>live-load deflection</b> on I_LB (Commentary C-I3-1) under L; <b>total-load deflection</b>: the
- * pre-composite deflection less the camber, plus superimposed dead and live load on I_LB (shored:
- * everything on I_LB).</li>
+ * loads and its own weight as D and the construction live load as L, by {@link BeamDesigner} (F2/F3
+ * with the deck bracing the top flange when its ribs are perpendicular, the member's or the criteria's
+ * bracing otherwise; G2.1);</li>
+ * <li><b>shear</b>: the steel section alone (I4.2 → G2.1) under the composite-stage combinations, at the
+ * supports;</li>
+ * <li><b>live-load deflection</b> on I_LB (Commentary C-I3-1) under the live cases (L, Lr, S; the
+ * deflection loads when given); <b>total-load deflection</b>: the pre-composite deflection (wet loads and
+ * own weight on the bare steel's I_x) less the camber, plus the composite-stage loads on I_LB, each
+ * group's maximum along the span (their sum bounds the maximum of the total); shored: everything on
+ * I_LB.</li>
  * </ul>
  * The studs per half span range from the least the rules require (the minimum degree of composite
  * action, and the maximum spacing of I8.2d) to the most that fit (one rib per pitch with the ribs
  * perpendicular, the minimum spacing of I8.2d otherwise) or the number that gives full composite
- * action, whichever is less. Flexural strength and I_LB rise with ΣQ_n, so the least stud count that
- * passes is found by bisection.
+ * action at the point of maximum moment and at every point load, whichever is less. Flexural strength,
+ * the studs reaching each point and I_LB rise with n, so the least stud count that passes is found by
+ * bisection.
  *
  * <p>Ribs per half span (deck perpendicular): the ribs crossing the beam are ⌊L/pitch⌋; each half span
  * counts ⌈⌊L/pitch⌋/2⌉ of them, the rib at midspan (odd count) serving both halves, since it sits at the
- * point of maximum moment. The studs on the beam are reported as 2 × the studs per half span.
+ * point of maximum moment of a symmetric load. The studs on the member are reported as 2 × the studs
+ * per half span.
  *
- * <p>Known limitations: uniform loads on a simple span (a girder's point loads and the stud
- * requirement between a point load and the zero-moment point of I8.2c are not covered); positive
- * moment only; short-term stiffness (no creep or shrinkage); no vibration check; ponding of the wet
- * concrete is not added (the user can add it to the slab weight).
+ * <p>Speed: what does not depend on the section (stud strength, combinations, the statics of each
+ * combination and load group, the construction-stage designer) is built once per designer; what does
+ * not depend on the stud count (moment demands with the own weight, the pre-composite deflection and
+ * camber, the studs each point load needs) once per section; the search builds no check records or
+ * words except for its result and its rejections.
+ *
+ * <p>Known limitations: simple spans with downward loads only; positive moment only; the studs are
+ * spaced uniformly over each half span (no denser groups near point loads); the total-load deflection
+ * adds the maxima of its groups; short-term stiffness (no creep or shrinkage); no vibration check;
+ * ponding of the wet concrete is not added (the user can add it to the wet loads).
  */
 public final class CompositeBeamDesigner {
     private static final String CLAUSE_I3_2A = Aisc360.clause("I3.2a");

@@ -136,6 +136,8 @@ public final class CompositeBeamDesigner {
     private final SimpleSpan[] comboSpans;
     private final double[] comboDead;
     private final SimpleSpan wetSpan;
+    /** E·I × the largest deflection of the wet loads alone (general case, unshored; NaN otherwise). */
+    private final double wetEi;
     private final SimpleSpan allSpan;
     private final Extreme liveEi;
     private final Extreme postEi;
@@ -202,6 +204,7 @@ public final class CompositeBeamDesigner {
             this.comboSpans = null;
             this.comboDead = null;
             this.wetSpan = null;
+            this.wetEi = Double.NaN;
             this.allSpan = null;
             this.liveEi = null;
             this.postEi = null;
@@ -216,6 +219,7 @@ public final class CompositeBeamDesigner {
             this.combos = Combinations.gravity(criteria.method(), present);
             LoadCase[] cases = LoadCase.values();
             this.wetSpan = SimpleSpan.of(span, m.wet());
+            this.wetEi = criteria.shored() ? Double.NaN : wetSpan.maxDeflection(1.0).value();
             SimpleSpan[] strength = new SimpleSpan[cases.length];
             SimpleSpan[] deflection = new SimpleSpan[cases.length];
             double[] live = new double[cases.length];
@@ -375,9 +379,16 @@ public final class CompositeBeamDesigner {
     private final class SectionState {
         final Section s;
         final double w;
-        final double pre;
-        final double preAt;
-        final double camber;
+        /** The pre-composite deflection, where, and the camber: see {@link #pre()} (general loads, no sheet: on demand). */
+        private double pre;
+        private double preAt;
+        private double camber;
+        private boolean preKnown;
+        /**
+         * An upper bound of the pre-composite deflection (general loads, unshored): the maximum of the wet
+         * loads' deflection plus that of the own weight, each on E·I_s, which bounds the maximum of their sum.
+         */
+        final double preBound;
         final double full;
         final int minPerHalf;
         final int hiPerHalf;
@@ -403,23 +414,10 @@ public final class CompositeBeamDesigner {
             this.s = s;
             this.w = criteria.selfWeight() ? s.weight() : 0;
             double[] out = new double[2];
-            if (criteria.shored()) {
-                pre = 0;
-                preAt = span / 2;
-                camber = 0;
-            } else {
-                if (calc != null) {
-                    calc.heading("Deflection of the bare steel under the wet slab and camber");
-                }
-                if (uniform) {
-                    pre = deflection("Δ_pre", wSlab + w, s.props().ix(), "wet slab and steel on the bare steel", calc);
-                    preAt = span / 2;
-                } else {
-                    wetSpan.maxEiDeflectionWithUniform(w, out);
-                    preAt = out[1];
-                    pre = deflection("Δ_pre", out[0], preAt, s.props().ix(), "I_s", "wet loads and steel on the bare steel", calc);
-                }
-                camber = criteria.camber().camber(pre, span, calc);
+            this.preBound = uniform || criteria.shored() ? Double.NaN
+                    : (wetEi + w * 5 * span * span * span * span / 384) / (criteria.steel().e() * s.props().ix());
+            if (uniform || criteria.shored() || calc != null) {
+                computePre(calc);
             }
             // the stud range
             this.full = Math.min(0.85 * concrete.fc() * concrete.ac(), s.props().a() * criteria.steel().fy());
@@ -481,6 +479,50 @@ public final class CompositeBeamDesigner {
             }
             this.hiPerHalf = Math.min(needed, maxPerHalf);
             this.limitedByRibs = needed > maxPerHalf;
+        }
+
+        /** The pre-composite deflection (0 when shored), computed once. */
+        double pre() {
+            if (!preKnown) {
+                computePre(null);
+            }
+            return pre;
+        }
+
+        /** The camber (0 when shored), with {@link #pre()}. */
+        double camber() {
+            if (!preKnown) {
+                computePre(null);
+            }
+            return camber;
+        }
+
+        /** True when the pre-composite deflection has been computed. */
+        boolean preKnown() {
+            return preKnown;
+        }
+
+        private void computePre(Calc calc) {
+            preKnown = true;
+            if (criteria.shored()) {
+                pre = 0;
+                preAt = span / 2;
+                camber = 0;
+                return;
+            }
+            if (calc != null) {
+                calc.heading("Deflection of the bare steel under the wet slab and camber");
+            }
+            if (uniform) {
+                pre = deflection("Δ_pre", wSlab + w, s.props().ix(), "wet slab and steel on the bare steel", calc);
+                preAt = span / 2;
+            } else {
+                double[] out = new double[2];
+                wetSpan.maxEiDeflectionWithUniform(w, out);
+                preAt = out[1];
+                pre = deflection("Δ_pre", out[0], preAt, s.props().ix(), "I_s", "wet loads and steel on the bare steel", calc);
+            }
+            camber = criteria.camber().camber(pre, span, calc);
         }
 
         /**
@@ -719,6 +761,16 @@ public final class CompositeBeamDesigner {
     }
 
     private Trial trial(SectionState st, int perHalf, Calc calc) {
+        return trial(st, perHalf, calc, false);
+    }
+
+    /**
+     * The checks of {@code st} with {@code perHalf} studs per half span. With {@code search} (no sheet),
+     * the total-load deflection of an unshored member under general loads is left out when even its
+     * upper bound (the bound of the pre-composite deflection, no camber) stays below another check's
+     * ratio: it could not govern, and the search needs only the governing ratio and check.
+     */
+    private Trial trial(SectionState st, int perHalf, Calc calc, boolean search) {
         Trial t = new Trial(st, perHalf);
         Section s = st.s;
         double fy = criteria.steel().fy();
@@ -803,13 +855,17 @@ public final class CompositeBeamDesigner {
                     at = postEi.position();
                     Calc.branch(calc, "Δ_pre and Δ_post are each the maximum of their loads; their sum bounds the maximum of the total",
                             PRACTICE);
+                    if (search && calc == null && !st.preKnown() && (st.preBound + post) / (span / lim.total()) * (1 + 1e-9) < worst) {
+                        t.ratio = worst;
+                        return t;
+                    }
                 }
                 if (calc == null) {
-                    d = st.pre - st.camber + post;
+                    d = st.pre() - st.camber() + post;
                 } else {
-                    d = calc.eq("Δ_TL", "Δ_pre − camber + Δ_post", PRACTICE, st.pre - st.camber + post,
-                            Quantity.SECTION_LENGTH, Arg.of("Δ_pre", st.pre, Quantity.SECTION_LENGTH),
-                            Arg.of("camber", st.camber, Quantity.SECTION_LENGTH), Arg.of("Δ_post", post, Quantity.SECTION_LENGTH));
+                    d = calc.eq("Δ_TL", "Δ_pre − camber + Δ_post", PRACTICE, st.pre() - st.camber() + post,
+                            Quantity.SECTION_LENGTH, Arg.of("Δ_pre", st.pre(), Quantity.SECTION_LENGTH),
+                            Arg.of("camber", st.camber(), Quantity.SECTION_LENGTH), Arg.of("Δ_post", post, Quantity.SECTION_LENGTH));
                 }
             }
             t.total = d;
@@ -948,7 +1004,7 @@ public final class CompositeBeamDesigner {
             }
             int hi = Math.max(st.hiPerHalf, st.minPerHalf);
             evaluations++;
-            Trial top = trial(st, hi, null);
+            Trial top = trial(st, hi, null, true);
             if (!Check.passes(top.ratio)) {
                 Check g = governingOf(top);
                 String why = st.limitedByRibs ? "with " + hi + " studs per half span, the most that fit"
@@ -985,7 +1041,7 @@ public final class CompositeBeamDesigner {
             while (lo < upper) {
                 int mid = (lo + upper) >>> 1;
                 evaluations++;
-                if (Check.passes(trial(st, mid, null).ratio)) {
+                if (Check.passes(trial(st, mid, null, true).ratio)) {
                     upper = mid;
                 } else {
                     lo = mid + 1;
@@ -1057,7 +1113,7 @@ public final class CompositeBeamDesigner {
     private CompositeDesign result(MemberStatus status, SectionState st, int perHalf, Trial t, double itr,
             List<Rejection> rejected, List<CompositeDesign.Alternative> passing, long evaluations) {
         return new CompositeDesign(status, st.s, perHalf, 2 * perHalf, qn, t.sumQn, beff, bLeft, bRight, slabWeight,
-                t.flexure, t.ilb, itr, st.pre, st.camber, st.constructionRatio, checks(st, t), rejected, passing,
+                t.flexure, t.ilb, itr, st.pre(), st.camber(), st.constructionRatio, checks(st, t), rejected, passing,
                 st.s.weight() * span + 2 * perHalf * criteria.studWeight(), evaluations);
     }
 

@@ -622,7 +622,14 @@ public final class CompositeBeamDesigner {
             return Integer.MAX_VALUE;
         }
         double n = Math.ceil(count * (span / 2) / d - 1e-6);
-        return n >= Integer.MAX_VALUE ? Integer.MAX_VALUE : Math.max(count, (int) n);
+        if (n >= Integer.MAX_VALUE / 2) {
+            return Integer.MAX_VALUE;
+        }
+        int k = Math.max(count, (int) n);
+        while (studsTo(x, k) < count) { // the rounding of the estimate, exactly as studsTo counts
+            k++;
+        }
+        return k;
     }
 
     /**

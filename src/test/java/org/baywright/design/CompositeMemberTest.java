@@ -200,6 +200,31 @@ class CompositeMemberTest {
     }
 
     @Test
+    void deflectionLoadsOfTheirOwnTakeTheLiveLoadUnreduced() {
+        // the girder's live load reduced to 60 % for strength, unreduced for deflection (as BeamDesigner takes BeamLoads)
+        CompositeMember g = girder();
+        double l = g.span();
+        Map<LoadCase, List<SpanLoad>> strength = Map.of(LoadCase.D, g.composite().of(LoadCase.D).loads(),
+                LoadCase.L, List.of(new PointLoad(ft(10), kips(12)), new PointLoad(ft(20), kips(12))));
+        Map<LoadCase, List<SpanLoad>> service = Map.of(LoadCase.D, g.composite().of(LoadCase.D).loads(),
+                LoadCase.L, g.composite().of(LoadCase.L).loads());
+        CompositeMember reduced = new CompositeMember(l, g.ribs(), g.toNeighbourLeft(), g.toNeighbourRight(), g.toEdgeLeft(),
+                g.toEdgeRight(), g.slab(), g.studs(), g.slabWeight(), g.wet(), g.construction(),
+                BeamLoads.of(l, strength).withDeflectionLoads(service), g.constructionBracing());
+        Section w = section("W21X50");
+        CompositeDesign full = new CompositeBeamDesigner(g, girderCriteria()).check(w, 10, null);
+        CompositeDesign red = new CompositeBeamDesigner(reduced, girderCriteria()).check(w, 10, null);
+        assertAll("deflections under the unreduced live load, strength under the reduced one",
+                () -> assertEquals(full.check("live-load deflection").demand(), red.check("live-load deflection").demand(),
+                        1e-12 * full.check("live-load deflection").demand()),
+                () -> assertEquals(full.check("total-load deflection").demand(), red.check("total-load deflection").demand(),
+                        1e-12 * full.check("total-load deflection").demand()),
+                () -> assertTrue(red.check("live-load deflection").note().contains("unreduced")),
+                // 1.2 × 18 + 1.6 × 12 = 40.8 kips at each third point: 408 kip-ft (hand check)
+                () -> assertEquals(408, Units.KIP_FT.fromSi(red.check("composite flexure").demand()), 1e-9 * 408));
+    }
+
+    @Test
     void membersRefuseLoadsOffTheSpanOrUpward() {
         double l = ft(30);
         BeamLoads none = BeamLoads.of(l, Map.of());

@@ -1054,7 +1054,8 @@ public final class CompositeBeamDesigner {
                     lo = mid + 1;
                 }
             }
-            double cost = steel + 2 * lo * criteria.studWeight();
+            double cost = steel + 2 * lo * criteria.studWeight()
+                    + (criteria.camberAllowance() > 0 && st.camber() > 0 ? criteria.camberAllowance() : 0);
             passing.add(new CompositeDesign.Alternative(s, 2 * lo, cost));
             if (cost < bestCost) {
                 bestCost = cost;
@@ -1121,7 +1122,8 @@ public final class CompositeBeamDesigner {
             List<Rejection> rejected, List<CompositeDesign.Alternative> passing, long evaluations) {
         return new CompositeDesign(status, st.s, perHalf, 2 * perHalf, qn, t.sumQn, beff, bLeft, bRight, slabWeight,
                 t.flexure, t.ilb, itr, st.pre(), st.camber(), st.constructionRatio, checks(st, t), rejected, passing,
-                st.s.weight() * span + 2 * perHalf * criteria.studWeight(), evaluations);
+                st.s.weight() * span + 2 * perHalf * criteria.studWeight()
+                        + (criteria.camberAllowance() > 0 && st.camber() > 0 ? criteria.camberAllowance() : 0), evaluations);
     }
 
     /** The slab, the effective width and the stud strength, recorded once at the head of a sheet. */

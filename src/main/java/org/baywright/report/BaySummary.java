@@ -108,15 +108,18 @@ public final class BaySummary {
         int exceeds = 0;
         int outside = 0;
         int unchecked = 0;
+        int total = 0;
         for (BayResult b : bays) {
+            int k = b.levels().size(); // a bay of a typical floor at each level using it, as bays[] lists them
+            total += k;
             if (!b.checked()) {
-                unchecked++;
+                unchecked += k;
             } else if (b.result().status() == VibrationStatus.MEETS) {
-                meets++;
+                meets += k;
             } else if (b.result().status() == VibrationStatus.EXCEEDS) {
-                exceeds++;
+                exceeds += k;
             } else {
-                outside++;
+                outside += k;
             }
         }
         StringBuilder s = new StringBuilder("Floor vibration (AISC DG11 walking): ");
@@ -133,7 +136,7 @@ public final class BaySummary {
         if (unchecked > 0) {
             parts.add(unchecked + " not checked");
         }
-        s.append(bays.size()).append(bays.size() == 1 ? " bay: " : " bays: ").append(String.join(", ", parts));
+        s.append(total).append(total == 1 ? " bay: " : " bays: ").append(String.join(", ", parts));
         Optional<BayResult> w = worst(bays);
         if (w.isPresent()) {
             BayResult b = w.get();

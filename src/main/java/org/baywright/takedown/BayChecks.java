@@ -152,7 +152,7 @@ public final class BayChecks {
                     bay.edge() ? "edge bay: a side along the beams is at the slab edge" : "interior bay",
                     org.baywright.calc.CalcFormat.sig(beta), Double.isNaN(set.damping()) ? fit.label() : "given"),
                     Dg11.section("§4.1"));
-            calc.heading("Slab, loads and transformed sections");
+            calc.heading("Slab and realistic loads");
         }
         double ec = StudStrengthI8.ec(s.density(), s.fc(), calc);
         double ribFraction = s.ribHeight() > 0 && s.ribPitch() > 0 ? Math.min(1, s.ribWidth() / s.ribPitch()) : 0;
@@ -175,7 +175,13 @@ public final class BayChecks {
         double wg = VibrationLoads.girderWeight(wj, bay.spacing(), carried, gs.weight(), calc);
         Ribs beamRibs = ribsAlongBeams ? Ribs.PARALLEL : Ribs.PERPENDICULAR;
         Ribs girderRibs = ribsAlongBeams ? Ribs.PERPENDICULAR : Ribs.PARALLEL;
+        if (calc != null) {
+            calc.heading("Beam " + bay.beam() + ": transformed section, ribs " + (ribsAlongBeams ? "along" : "across") + " it");
+        }
         double ij = Stiffness.transformedInertia(bs, vs, beamRibs, bay.beamSpan(), bay.spacing(), es, calc);
+        if (calc != null) {
+            calc.heading("Girder " + g.id() + ": transformed section, ribs " + (ribsAlongBeams ? "across" : "along") + " it");
+        }
         double ig = Stiffness.transformedInertia(gs, vs, girderRibs, g.span(), carried, es, calc);
         boolean beamCont = bay.beamAdjacentSpan() > 0 && EffectiveWeights.continuous(bay.beamSpan(), bay.beamAdjacentSpan());
         boolean girderCont = g.adjacentSpan() > 0 && EffectiveWeights.continuous(g.span(), g.adjacentSpan());

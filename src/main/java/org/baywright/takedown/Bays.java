@@ -117,12 +117,16 @@ public final class Bays {
             girders.add(new Bay.BayGirder(gid, g.design().section(), g.length(), carriedWidth(g, all),
                     adjacentSpan(g, all, MemberKind.GIRDER, g.kind())));
         }
+        // west to east, then south to north
         List<MemberResult> sorted = new ArrayList<>(beams);
-        final double fvx = vx;
-        final double fvy = vy;
-        sorted.sort(Comparator.comparingDouble(m -> mid(m).x() * fvx + mid(m).y() * fvy));
-        double pmin = along(sorted.get(0), vx, vy);
-        double pmax = along(sorted.get(sorted.size() - 1), vx, vy);
+        sorted.sort(Comparator.comparingDouble((MemberResult m) -> Math.round(mid(m).x() / TOL))
+                .thenComparingDouble(m -> mid(m).y()));
+        double pmin = Double.POSITIVE_INFINITY;
+        double pmax = Double.NEGATIVE_INFINITY;
+        for (MemberResult m : sorted) {
+            pmin = Math.min(pmin, along(m, vx, vy));
+            pmax = Math.max(pmax, along(m, vx, vy));
+        }
         if (!(hi - lo > pmax - pmin + TOL) || pmin < lo - TOL || pmax > hi + TOL) {
             // the carrying members do not both reach past the beams: take the beams' own extent and spacing
             double gap = sorted.size() > 1 ? (pmax - pmin) / (sorted.size() - 1) : first.length();

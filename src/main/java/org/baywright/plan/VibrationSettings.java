@@ -4,7 +4,12 @@ package org.baywright.plan;
  * The inputs of the floor-vibration check from walking (AISC Design Guide 11, 2nd ed.; the design code is
  * {@code design.dg11}) that a plan sets: what the floors are used for, how they are fitted out (which sets the
  * damping), and the live load a vibration analysis uses. Plan files do not carry these yet: every run uses
- * {@link #defaults()} (offices, a paper office, the occupancy's vibration live load).
+ * {@link #defaults()} (offices, a paper office, the occupancy's vibration live load). The plan-file keys meant
+ * for them: {@code settings.vibration.use} ({@code offices}, {@code residences}, {@code quiet-areas},
+ * {@code shopping-malls}, {@code indoor-footbridges}, {@code outdoor-footbridges}), {@code settings.vibration.fitOut}
+ * ({@code electronic-office}, {@code paper-office}, {@code full-height-partitions}, {@code shopping-mall},
+ * {@code footbridge}), {@code settings.vibration.damping} (a number) and {@code settings.vibration.live} (an
+ * area load such as {@code "11psf"}); each absent means the default.
  *
  * @param use what the floors are used for (sets the tolerance limit a_o/g and the walking force)
  * @param fitOut how the floors are fitted out (sets the damping ratio β), or null for the use's usual fit-out

@@ -122,7 +122,8 @@ public final class BayCommand implements Callable<Integer> {
                 + continuity(bay.beamSpan(), bay.beamAdjacentSpan(), us));
         for (Bay.BayGirder g : bay.girders()) {
             out.println("Carried by " + g.id() + " (" + g.section().designationIn(us) + "), span " + us.lengthText(g.span())
-                    + ", carrying " + us.lengthText(g.carriedWidth()) + " of floor" + continuity(g.span(), g.adjacentSpan(), us)
+                    + ", carrying " + us.lengthText(g.carriedWidth()) + " of floor" + (g.bothSides() ? "" : " (an edge girder)")
+                    + continuity(g.span(), g.adjacentSpan(), us)
                     + (g.id().equals(r.girder()) ? "; governs" : ""));
         }
         out.println("Floor: " + extent(bay.floorWidth(), us) + " across the beams, " + extent(bay.floorLength(), us)

@@ -46,8 +46,10 @@ public record Bay(String id, String floor, List<String> beams, String beam, Sect
      * @param carriedWidth the width of floor it carries across it: half the span of the beams framing into it
      *     from each side (L_j for an interior girder with equal bays either side)
      * @param adjacentSpan the span of the girder continuing in line beyond either end (the longer), or 0 for none
+     * @param bothSides true when beams frame into it from both sides (an interior girder), false for an edge girder
      */
-    public record BayGirder(String id, Section section, double span, double carriedWidth, double adjacentSpan) {
+    public record BayGirder(String id, Section section, double span, double carriedWidth, double adjacentSpan,
+            boolean bothSides) {
     }
 
     /** The ids of every member of the bay: its beams, then the members carrying them. */

@@ -37,8 +37,9 @@ import org.baywright.plan.VibrationSettings;
  * checked"), realistic loads (the slab's weight {@link SlabDesign#weight}, the superimposed dead load of the area
  * loads at its centre, the vibration live load of the settings' use), the transformed sections of its most
  * flexible beam and of each member carrying the beams with the dynamic modulus, the floor extents and edge, and
- * continuity read from the plan; the walking check is made with each carrying member and the one with the
- * highest ratio governs. Roof layouts are not checked (walking on a roof is not what DG11's office limits are
+ * continuity read from the plan; the walking check is made with each interior carrying member (beams framing
+ * into it from both sides; a bay without one, with each edge member) and the one with the highest ratio
+ * governs. Roof layouts are not checked (walking on a roof is not what DG11's office limits are
  * for).
  */
 public final class BayChecks {
@@ -111,7 +112,10 @@ public final class BayChecks {
         BayResult draft = new BayResult(bay, levels, slab, sd, settings, null, null, null, "");
         String governing = null;
         Evaluation best = null;
-        for (Bay.BayGirder g : bay.girders()) {
+        // the girder mode is DG11's interior girder's (D_g = I_g/L_j): a member with beams on both sides; only a
+        // bay without one (a floor one bay deep) is checked with its edge girders
+        List<Bay.BayGirder> candidates = bay.girders().stream().filter(Bay.BayGirder::bothSides).toList();
+        for (Bay.BayGirder g : candidates.isEmpty() ? bay.girders() : candidates) {
             Evaluation ev = evaluate(draft, g.id(), ribsAlongBeams, null);
             if (best == null || ev.result().ratio() > best.result().ratio()) {
                 best = ev;

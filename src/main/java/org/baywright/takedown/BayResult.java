@@ -15,7 +15,7 @@ import org.baywright.plan.VibrationSettings;
  * @param slab the slab the bay carries, or null when none is described
  * @param superimposed the superimposed dead load at the bay's centre from the area loads [Pa]
  * @param settings the vibration settings the check used
- * @param girder the carrying member that governs (the highest ratio), or null when not checked
+ * @param girder the carrying member that governs (the interior one with the highest ratio), or null when not checked
  * @param inputs what the check was given and worked out before the walking check (null when not checked)
  * @param result the walking check (null when not checked)
  * @param note why the bay was not checked ("no slab described — not checked"), or empty

@@ -114,8 +114,9 @@ public final class Bays {
             double b = g.end().x() * vx + g.end().y() * vy;
             lo = Math.max(lo, Math.min(a, b));
             hi = Math.min(hi, Math.max(a, b));
-            girders.add(new Bay.BayGirder(gid, g.design().section(), g.length(), carriedWidth(g, all),
-                    adjacentSpan(g, all, MemberKind.GIRDER, g.kind())));
+            double[] sides = sides(g, all);
+            girders.add(new Bay.BayGirder(gid, g.design().section(), g.length(), (sides[0] + sides[1]) / 2,
+                    adjacentSpan(g, all, MemberKind.GIRDER, g.kind()), sides[0] > 0 && sides[1] > 0));
         }
         // west to east, then south to north
         List<MemberResult> sorted = new ArrayList<>(beams);
@@ -182,10 +183,10 @@ public final class Bays {
     }
 
     /**
-     * The width of floor a carrying member carries across it: for each side, half the longest beam framing into
-     * it from that side, summed.
+     * The longest member framing into a carrying member from each side, {left, right} (0 for none): half of each
+     * is the width of floor it carries across it.
      */
-    static double carriedWidth(MemberResult g, List<MemberResult> all) {
+    static double[] sides(MemberResult g, List<MemberResult> all) {
         double nx = -(g.end().y() - g.start().y()) / g.length();
         double ny = (g.end().x() - g.start().x()) / g.length();
         double left = 0;
@@ -202,7 +203,7 @@ public final class Bays {
                 right = Math.max(right, m.length());
             }
         }
-        return (left + right) / 2;
+        return new double[] {left, right};
     }
 
     /**

@@ -56,7 +56,8 @@ public final class BayPlans {
      * The handbook example's floor (same source): 180 × 90 ft, 30 × 30 ft bays (grid A–G at 30 ft, 1–4 at
      * 30 ft), beams spanning north–south at 10 ft (W21X44, two per bay, drawn as members), girders W24X55 on
      * the numbered lines, beams on the lettered lines between columns (not in any bay), the deck spanning
-     * east–west across the beams; 4 psf superimposed dead load (the handbook's ceiling and services); one level.
+     * east–west across the beams; 4 psf superimposed dead load (the handbook's ceiling and services), 50 psf live
+     * load for the design; one level.
      *
      * @param slab the deck's slab, or null for none
      */
@@ -103,7 +104,8 @@ public final class BayPlans {
         }
         Polygon edge = Polygon.rectangle(0, 0, nx * bay, ny * bay);
         Deck deck = new Deck("DK-1", edge, 0).withSlab(slab);
-        LoadValues loads = new LoadValues(psf(42.7), psf(4), psf(50), 0, 0, psf(15));
+        // a slab described loads the floor itself (takedown.SlabLoads); without one the area load carries it
+        LoadValues loads = new LoadValues(slab == null ? psf(42.7) : 0, psf(4), psf(50), 0, 0, psf(15));
         Floor floor = new Floor("typical", "Typical floor", false, edge, List.of(deck), members, List.of(), List.of(),
                 List.of(new AreaLoad("AL-office", edge, loads, LiveLoadUse.ORDINARY)), List.of(), List.of());
         return new Plan("Handbook bay", "us", DesignSettings.defaults(), grid,

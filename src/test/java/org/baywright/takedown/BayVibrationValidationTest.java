@@ -119,6 +119,8 @@ class BayVibrationValidationTest {
                 () -> assertEquals(Dg11.CJ_PARALLEL_TO_INTERIOR_EDGE, b.inputs().vibration().cj()));
         BayResult inner = handbookBay("C-D/1-2");
         assertFalse(inner.bay().edge(), "grid 1 is the slab edge, but it runs across the beams");
+        assertEquals("G-2-CD", inner.girder(), "the girder mode is the interior girder's, not the edge girder G-1-CD's");
+        assertEquals(ft(30), inner.inputs().vibration().girder().spacing(), 1e-3);
     }
 
     @Test

@@ -60,6 +60,8 @@ class BaysTest {
         Bay.BayGirder inner = g1.girders().stream().filter(g -> g.id().equals("G-2-BC")).findFirst().orElseThrow();
         assertEquals(ft(35) / 2, edgeGirder.carriedWidth(), MM, "an edge girder carries half the beams' span");
         assertEquals(ft(35), inner.carriedWidth(), MM, "an interior girder carries half the span each side");
+        assertFalse(edgeGirder.bothSides());
+        assertTrue(inner.bothSides());
         assertTrue(named(bays, "A-B/1-2").edge(), "A-B: the side on grid A is the slab edge");
         assertTrue(named(bays, "C-D/2-3").edge(), "C-D: the side on grid D is the slab edge");
     }
@@ -99,6 +101,8 @@ class BaysTest {
                 () -> assertEquals(2, roof.size()),
                 () -> typical.forEach(b -> assertTrue(b.checked(), b.bay().id())),
                 () -> typical.forEach(b -> assertEquals(List.of("Level 2"), b.levels())),
+                // one bay deep: no interior girder, so the check takes the edge girders, the worse governing
+                () -> typical.forEach(b -> assertTrue(b.girder().startsWith("G-"), b.girder())),
                 () -> roof.forEach(b -> assertEquals(BayChecks.ROOF, b.note())),
                 () -> roof.forEach(b -> assertEquals(BayResult.NOT_CHECKED, b.status())));
     }

@@ -121,6 +121,26 @@ class BaysTest {
     }
 
     @Test
+    void shortStiffBaysAreOutsideTheMethodNotPassed() {
+        // 2 × 2 bays of 10 × 10 ft, a beam at mid-bay, the typical slab: f_n far above 9 Hz, where DG11's
+        // low-frequency walking criterion does not apply (CHECK-VALUES §6; DG11 2nd ed. Ch. 4, from memory)
+        Plan p = org.baywright.plan.RegularPlan.generate(new org.baywright.plan.RegularPlan.Spec("Short", "us",
+                List.of(ft(10), ft(10)), List.of(ft(10), ft(10)), List.of(ft(14)), true, ft(5),
+                org.baywright.plan.RegularPlan.OFFICE_FLOOR, org.baywright.plan.LoadValues.ZERO,
+                org.baywright.plan.LoadValues.ZERO));
+        RunResult r = PlanRun.run(BayPlans.withSlab(p, Slab.typical()));
+        assertEquals(4, r.bays().size());
+        r.bays().forEach(b -> assertAll(b.bay().id(),
+                () -> assertEquals(org.baywright.design.dg11.VibrationStatus.OUTSIDE_METHOD, b.result().status()),
+                () -> assertTrue(b.result().fn() > 9, "f_n = " + b.result().fn()),
+                () -> assertEquals("outside the method", b.status()),
+                () -> assertTrue(b.result().summary().contains("does not apply"), b.result().summary())));
+        String line = org.baywright.report.BaySummary.line(r);
+        assertTrue(line.contains("4 bays: 4 above 9 Hz (outside the method)"), line);
+        assertFalse(line.contains("worst"), "no bay was checked by the method: " + line);
+    }
+
+    @Test
     void theChordOfARectangleThroughAPoint() {
         var rect = org.baywright.plan.Polygon.rectangle(0, 0, 10, 4);
         double[] c = Bays.chord(rect, new org.baywright.plan.Point(3, 1), 1, 0);

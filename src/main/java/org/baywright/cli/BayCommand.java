@@ -79,7 +79,7 @@ public final class BayCommand implements Callable<Integer> {
             }
             return BaywrightCommand.EXIT_BAD_INPUT;
         }
-        List<BayResult> all = r.bays().isEmpty() ? BayChecks.of(plan, r.takedown(), VibrationSettings.defaults()) : r.bays();
+        List<BayResult> all = r.bays().isEmpty() ? BayChecks.of(plan, r.takedown(), PlanRun.vibrationSettings(plan)) : r.bays();
         List<BayResult> here = all.stream().filter(b -> b.levels().contains(lv.name())).toList();
         String want = bayId.trim().toLowerCase(Locale.ROOT);
         BayResult b = here.stream().filter(x -> x.bay().id().toLowerCase(Locale.ROOT).equals(want)).findFirst()

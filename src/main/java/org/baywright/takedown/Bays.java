@@ -23,9 +23,12 @@ import org.baywright.plan.Polygon;
  * bay. Its extent along the carrying members is their common length; its spacing that length over the number
  * of beams plus one; its id the grid lines its sides lie on.
  *
+ * <p>The floor extents are the chords of the slab, its openings cut out, through the bay's centre; a bay is at
+ * an edge when a side along its beams is within half a spacing of the slab edge or of an opening (an atrium).
+ *
  * <p>Known limitations: beams resting on a column at either end belong to no bay (a beam on a column line is a
- * side of a bay, not in it); the floor extents are the slab edge's chords through the bay's centre, openings
- * not counted; a bay whose beams are not parallel is taken by its first beam's direction.
+ * side of a bay, not in it); a small opening crossing a chord cuts the floor extent there as an atrium would; a
+ * bay whose beams are not parallel is taken by its first beam's direction.
  */
 public final class Bays {
     /** Positions closer than this are the same point, and a side this close to a grid line lies on it, m. */
@@ -156,8 +159,11 @@ public final class Bays {
         double um = (ulo + uhi) / 2;
         double vm = (lo + hi) / 2;
         Point centre = new Point(um * ux + vm * vx, um * uy + vm * vy);
-        double[] across = chord(floor.slabEdge(), centre, vx, vy);
-        double[] alongBeams = chord(floor.slabEdge(), centre, ux, uy);
+        List<Polygon> outline = new ArrayList<>();
+        outline.add(floor.slabEdge());
+        floor.openings().forEach(o -> outline.add(o.outline()));
+        double[] across = chord(outline, centre, vx, vy);
+        double[] alongBeams = chord(outline, centre, ux, uy);
         double floorWidth = across == null ? Double.POSITIVE_INFINITY : across[1] - across[0];
         double floorLength = alongBeams == null ? Double.POSITIVE_INFINITY : alongBeams[1] - alongBeams[0];
         double halfWidth = width / 2;
@@ -236,31 +242,20 @@ public final class Bays {
         return a.distance(b) < TOL;
     }
 
-    /**
-     * The interval of the line through {@code c} in direction (dx, dy) (unit) inside the polygon that holds
-     * {@code c}, as parameters {lo, hi} from {@code c} (lo ≤ 0 ≤ hi); null when {@code c} is outside.
-     */
+    /** {@link #chord(List, Point, double, double)} of one polygon. */
     static double[] chord(Polygon p, Point c, double dx, double dy) {
-        List<Point> v = p.vertices();
+        return chord(List.of(p), c, dx, dy);
+    }
+
+    /**
+     * The interval of the line through {@code c} in direction (dx, dy) (unit) inside the area the polygons bound
+     * by the even-odd rule (a slab edge and its openings), as parameters {lo, hi} from {@code c} (lo ≤ 0 ≤ hi);
+     * null when {@code c} is outside.
+     */
+    static double[] chord(List<Polygon> polygons, Point c, double dx, double dy) {
         List<Double> ts = new ArrayList<>();
-        int n = v.size();
-        for (int i = 0; i < n; i++) {
-            Point a = v.get(i);
-            Point b = v.get((i + 1) % n);
-            double ex = b.x() - a.x();
-            double ey = b.y() - a.y();
-            double den = dx * ey - dy * ex;
-            if (Math.abs(den) < 1e-12) {
-                continue; // parallel to the line
-            }
-            double wx = a.x() - c.x();
-            double wy = a.y() - c.y();
-            double s = (wx * dy - wy * dx) / den; // position along the edge
-            double t = (wx * ey - wy * ex) / den; // position along the line
-            // count a vertex once: the edge holds its start, not its end
-            if (s >= 0 && s < 1) {
-                ts.add(t);
-            }
+        for (Polygon p : polygons) {
+            crossings(p, c, dx, dy, ts);
         }
         ts.sort(Double::compare);
         for (int i = 0; i + 1 < ts.size(); i += 2) {
@@ -269,6 +264,28 @@ public final class Bays {
             }
         }
         return null;
+    }
+
+    /**
+     * The parameters along the line where the polygon's edges cross it, by the half-open rule: an edge crosses
+     * when its ends lie on different sides, a point on the line counting as the left side, so a vertex on the
+     * line is counted once when the outline crosses there and not at all (or twice) when it only touches.
+     */
+    private static void crossings(Polygon p, Point c, double dx, double dy, List<Double> ts) {
+        List<Point> v = p.vertices();
+        int n = v.size();
+        for (int i = 0; i < n; i++) {
+            Point a = v.get(i);
+            Point b = v.get((i + 1) % n);
+            double da = dx * (a.y() - c.y()) - dy * (a.x() - c.x());
+            double db = dx * (b.y() - c.y()) - dy * (b.x() - c.x());
+            if ((da >= 0) != (db >= 0)) {
+                double f = da / (da - db);
+                double x = a.x() + f * (b.x() - a.x());
+                double y = a.y() + f * (b.y() - a.y());
+                ts.add((x - c.x()) * dx + (y - c.y()) * dy);
+            }
+        }
     }
 
     /** "B-C/2-3" when the beams run along x or y and the bay's four sides lie on grid lines. */

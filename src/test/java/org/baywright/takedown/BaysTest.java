@@ -150,5 +150,38 @@ class BaysTest {
         assertEquals(-1, v[0], 1e-12);
         assertEquals(3, v[1], 1e-12);
         assertNull(Bays.chord(rect, new org.baywright.plan.Point(11, 1), 1, 0));
+        // an L-shaped slab: 10 × 4 with a 5 × 4 wing above its east half
+        var ell = new org.baywright.plan.Polygon(List.of(new org.baywright.plan.Point(0, 0), new org.baywright.plan.Point(10, 0),
+                new org.baywright.plan.Point(10, 8), new org.baywright.plan.Point(5, 8), new org.baywright.plan.Point(5, 4),
+                new org.baywright.plan.Point(0, 4)));
+        double[] mid = Bays.chord(ell, new org.baywright.plan.Point(7, 6), -1, 0); // westward: x = 10 is behind
+        assertEquals(-3, mid[0], 1e-12);
+        assertEquals(2, mid[1], 1e-12);
+        double[] low = Bays.chord(ell, new org.baywright.plan.Point(7, 2), 1, 0);
+        assertEquals(-7, low[0], 1e-12);
+        assertEquals(3, low[1], 1e-12);
+        // a vertical line through the re-entrant vertex (5, 4): the slab below it, from y = 0 to 8 on x = 5
+        double[] up = Bays.chord(ell, new org.baywright.plan.Point(5, 2), 0, 1);
+        assertEquals(-2, up[0], 1e-12);
+        assertEquals(6, up[1], 1e-12);
+        // a hole (an atrium) cuts the chord
+        var atrium = org.baywright.plan.Polygon.rectangle(4, 1, 6, 3);
+        double[] cut = Bays.chord(List.of(rect, atrium), new org.baywright.plan.Point(2, 2), 1, 0);
+        assertEquals(-2, cut[0], 1e-12);
+        assertEquals(2, cut[1], 1e-12);
+    }
+
+    @Test
+    void aBayBesideAnAtriumWithItsBeamsAlongTheAtriumIsAnEdgeBay() {
+        // the demo plan: the atrium fills B-C/2-3 on the typical floor; A-B/2-3 and C-D/2-3 have beams
+        // spanning north–south, along the atrium's sides on grids B and C (DG11's interior edge, C_j = 1.0)
+        Plan demo = org.baywright.io.PlanFiles.read(java.nio.file.Path.of("plans/harbourview-offices.bay.json")).plan()
+                .orElseThrow();
+        List<Bay> bays = bays(demo, "typical");
+        Bay c = named(bays, "C-D/2-3");
+        assertAll(() -> assertTrue(c.edge(), "the side on grid C is the atrium's"),
+                () -> assertEquals(ft(60), c.floorWidth(), MM, "across the beams from the atrium at C to the slab edge at E"),
+                () -> assertFalse(named(bays, "C-D/3-4").edge() && named(bays, "C-D/3-4").floorWidth() < ft(60),
+                        "C-D/3-4 is beside the atrium only across its beams"));
     }
 }

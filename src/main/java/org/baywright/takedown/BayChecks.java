@@ -116,7 +116,13 @@ public final class BayChecks {
         // bay without one (a floor one bay deep) is checked with its edge girders
         List<Bay.BayGirder> candidates = bay.girders().stream().filter(Bay.BayGirder::bothSides).toList();
         for (Bay.BayGirder g : candidates.isEmpty() ? bay.girders() : candidates) {
-            Evaluation ev = evaluate(draft, g.id(), ribsAlongBeams, null);
+            Evaluation ev;
+            try {
+                ev = evaluate(draft, g.id(), ribsAlongBeams, null);
+            } catch (IllegalArgumentException e) {
+                // an input the method refuses (a slab without concrete above the deck …): said, not thrown
+                return new BayResult(bay, levels, slab, sd, settings, null, null, null, "not checked: " + e.getMessage());
+            }
             if (best == null || ev.result().ratio() > best.result().ratio()) {
                 best = ev;
                 governing = g.id();

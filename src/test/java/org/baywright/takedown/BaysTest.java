@@ -141,6 +141,18 @@ class BaysTest {
     }
 
     @Test
+    void anInputTheMethodRefusesIsReportedNotThrown() {
+        // no concrete above the deck: DG11's transformed section and D_s need some (VibrationSlab: t_c > 0)
+        // (the takedown refuses such a slab first; the bay step must not depend on that)
+        Plan p = BayPlans.regular(1, 1, true);
+        Bay bay = bays(p, "typical").get(0);
+        Floor bare = BayPlans.withSlab(p, Slab.typical().withTopping(0)).floor("typical").orElseThrow();
+        BayResult r = BayChecks.check(bare, bay, List.of("Level 2"), org.baywright.plan.VibrationSettings.defaults());
+        assertTrue(r.note().startsWith("not checked: slab: t_c > 0"), r.note());
+        assertEquals(BayResult.NOT_CHECKED, r.status());
+    }
+
+    @Test
     void theChordOfARectangleThroughAPoint() {
         var rect = org.baywright.plan.Polygon.rectangle(0, 0, 10, 4);
         double[] c = Bays.chord(rect, new org.baywright.plan.Point(3, 1), 1, 0);

@@ -25,7 +25,7 @@ import picocli.CommandLine.Option;
             Caution.TEXT,
             ""
         },
-        subcommands = {NewCommand.class, CheckCommand.class, DesignCommand.class, BeamCommand.class, CatalogCommand.class, StudyCommand.class,
+        subcommands = {NewCommand.class, CheckCommand.class, DesignCommand.class, BeamCommand.class, BayCommand.class, CatalogCommand.class, StudyCommand.class,
             CommandLine.HelpCommand.class})
 public final class BaywrightCommand implements Runnable {
 

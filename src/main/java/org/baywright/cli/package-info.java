@@ -1,6 +1,6 @@
 /**
- * The command line (picocli): {@code beam}, {@code catalog}, {@code new}, {@code check}, {@code design}
- * and {@code study}, with located one-line problems on standard error, the exit codes of
+ * The command line (picocli): {@code beam}, {@code catalog}, {@code new}, {@code check}, {@code design},
+ * {@code bay} (one bay's floor-vibration check) and {@code study}, with located one-line problems on standard error, the exit codes of
  * {@code docs/cli-contract.md} (0 all sized, 1 overstressed or unsupported, 2 bad input) and the caution
  * in the help. Commands read and check their options and files, call the engine, {@code io},
  * {@code report} and {@code study}, and print; the engineering stays in the engine.

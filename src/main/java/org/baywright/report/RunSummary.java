@@ -189,6 +189,9 @@ public final class RunSummary {
             problems.add(j);
         }
         o.put("problems", problems);
+        if (BaySummary.present(run)) {
+            o.put("bays", BaySummary.json(run, us)); // only when a floor describes a slab: older outputs unchanged
+        }
         o.put("caution", Caution.TEXT);
         return o;
     }
@@ -374,6 +377,9 @@ public final class RunSummary {
                 b.append(String.format(Locale.ROOT, " %s %s", e.loadCase(), e.holds() ? "ok" : "FAILS"));
             }
             b.append('\n');
+            if (BaySummary.present(run)) {
+                b.append(BaySummary.line(run)).append('\n');
+            }
         }
         List<Problem> problems = run.problems();
         b.append(problems.isEmpty() ? "No problems.\n" : "Problems (" + problems.size() + "):\n");

@@ -2,7 +2,11 @@ package org.baywright.run;
 
 import java.util.List;
 import org.baywright.catalog.Catalog;
+import org.baywright.plan.Floor;
 import org.baywright.plan.Plan;
+import org.baywright.plan.VibrationSettings;
+import org.baywright.takedown.BayChecks;
+import org.baywright.takedown.BayResult;
 import org.baywright.takedown.ColumnLines;
 import org.baywright.takedown.EquilibriumCheck;
 import org.baywright.takedown.ExpandedPlan;
@@ -79,8 +83,10 @@ public final class PlanRun {
         Foundations foundations = Foundations.of(columns);
         EquilibriumCheck equilibrium = EquilibriumCheck.of(levels, foundations, basis.liveLoad().partitionAsDead(), basis.units());
         TakedownResult t = Takedown.result(expanded, floors, columns, foundations, equilibrium);
+        List<BayResult> bays = plan.floors().stream().anyMatch(Floor::hasSlab)
+                ? BayChecks.of(plan, t, vibrationSettings(plan)) : List.of();
         double ms = (System.nanoTime() - t0) / 1e6;
-        return new RunResult(plan, t, List.of(), basis.catalog().name(), version(), ms, basis);
+        return new RunResult(plan, t, List.of(), basis.catalog().name(), version(), ms, basis, bays);
     }
 
     /** Stages 2 to 4 for one floor layout: tributary areas, support graph, members designed in order. */
@@ -88,6 +94,14 @@ public final class PlanRun {
         FloorAreas areas = FloorAreas.of(floor, rules.units());
         SupportGraph graph = SupportGraph.of(floor, rules.units());
         return FloorDesigner.design(floor, areas, graph, rules, searches);
+    }
+
+    /**
+     * The floor-vibration settings a run of {@code plan} uses: the defaults (offices, the usual fit-out, the use's
+     * vibration live load) until plan files carry them ({@link VibrationSettings} lists the keys meant for them).
+     */
+    public static VibrationSettings vibrationSettings(Plan plan) {
+        return VibrationSettings.defaults();
     }
 
     /** Baywright's version from the jar manifest, or "development build". */

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.baywright.plan.Plan;
 import org.baywright.plan.Problem;
+import org.baywright.takedown.BayResult;
 import org.baywright.takedown.TakedownResult;
 
 /**
@@ -14,9 +15,21 @@ import org.baywright.takedown.TakedownResult;
  * @param version Baywright's version
  * @param milliseconds wall time of the run (for information only)
  * @param basis the design basis the run used: method, steel, catalog, criteria
+ * @param bays the floor-vibration check of every bay of every floor layout (AISC DG11), empty when no floor of the
+ *     plan describes a slab
  */
 public record RunResult(Plan plan, TakedownResult takedown, List<Problem> validation, String catalogName, String version,
-        double milliseconds, DesignBasis basis) {
+        double milliseconds, DesignBasis basis, List<BayResult> bays) {
+
+    public RunResult {
+        bays = bays == null ? List.of() : List.copyOf(bays);
+    }
+
+    /** A result without bay checks. */
+    public RunResult(Plan plan, TakedownResult takedown, List<Problem> validation, String catalogName, String version,
+            double milliseconds, DesignBasis basis) {
+        this(plan, takedown, validation, catalogName, version, milliseconds, basis, List.of());
+    }
 
     /**
      * A result assembled without a run (tests, examples): the basis is the plan's, without a catalog.

@@ -12,5 +12,8 @@
  * ({@code plan}, {@code geometry}, {@code design} and its code packages, {@code analysis},
  * {@code catalog}, {@code load}, {@code units}); never on {@code run}, {@code report}, {@code io},
  * {@code study} or a front end.
+ *
+ * <p>After the takedown, {@code Bays} finds the bays of each designed floor layout and {@code BayChecks}
+ * checks each for floor vibration from walking ({@code design.dg11}), giving a {@code BayResult} per bay.
  */
 package org.baywright.takedown;

@@ -32,6 +32,7 @@ import org.baywright.plan.CompositeRules;
 import org.baywright.plan.Deck;
 import org.baywright.plan.Slab;
 import org.baywright.plan.StudPlacement;
+import org.baywright.plan.VibrationSettings;
 import org.baywright.plan.DesignSettings;
 import org.baywright.plan.Floor;
 import org.baywright.plan.Framing;
@@ -219,7 +220,49 @@ final class PlanAssembler {
         }
         return new DesignSettings(method, fy, live, total, beamSeries, girderSeries, columnSeries, maxDepth, spliceEvery,
                 reduction, partitionAsDead, delivered, catalog, deflectionReduced, java.util.Map.of(), eccentricity,
-                compositeRules(s.composite(), p + "/composite"));
+                compositeRules(s.composite(), p + "/composite"), vibration(s.vibration(), p + "/vibration"));
+    }
+
+    private static final Map<String, VibrationSettings.Use> VIBRATION_USES = ordered("offices", VibrationSettings.Use.OFFICES,
+            "residences", VibrationSettings.Use.RESIDENCES, "quiet-areas", VibrationSettings.Use.QUIET_AREAS, "shopping-malls",
+            VibrationSettings.Use.SHOPPING_MALLS, "indoor-footbridges", VibrationSettings.Use.INDOOR_FOOTBRIDGES,
+            "outdoor-footbridges", VibrationSettings.Use.OUTDOOR_FOOTBRIDGES);
+    private static final Map<String, VibrationSettings.FitOut> FIT_OUTS = ordered("electronic-office",
+            VibrationSettings.FitOut.ELECTRONIC_OFFICE, "paper-office", VibrationSettings.FitOut.PAPER_OFFICE,
+            "full-height-partitions", VibrationSettings.FitOut.FULL_HEIGHT_PARTITIONS, "shopping-mall",
+            VibrationSettings.FitOut.SHOPPING_MALL, "footbridge", VibrationSettings.FitOut.FOOTBRIDGE);
+
+    /** The key of a use in the file ("quiet-areas"). */
+    static String useKey(VibrationSettings.Use u) {
+        return VIBRATION_USES.entrySet().stream().filter(e -> e.getValue() == u).findFirst().orElseThrow().getKey();
+    }
+
+    /** The key of a fit-out in the file ("paper-office"). */
+    static String fitOutKey(VibrationSettings.FitOut f) {
+        return FIT_OUTS.entrySet().stream().filter(e -> e.getValue() == f).findFirst().orElseThrow().getKey();
+    }
+
+    /** The vibration inputs; the defaults where a key is absent, and where a value is wrong (reported). */
+    private VibrationSettings vibration(PlanDocument.VibrationDoc v, String p) {
+        VibrationSettings def = VibrationSettings.defaults();
+        if (v == null) {
+            return def;
+        }
+        VibrationSettings.Use use = choice(v.use(), p + "/use", "", "use", VIBRATION_USES, def.use());
+        VibrationSettings.FitOut fit = choice(v.fitOut(), p + "/fitOut", "", "fitOut", FIT_OUTS, null);
+        double damping = Double.NaN;
+        if (v.damping() != null) {
+            if (v.damping() > 0 && v.damping() <= 0.2) {
+                damping = v.damping();
+            } else {
+                problems.error("out-of-range", p + "/damping", "", "damping: " + Numbers.format(v.damping()) + " is not allowed;"
+                        + " give the damping ratio as a fraction above 0 and at most 0.2, e.g. 0.025 (AISC Design Guide 11), or"
+                        + " leave it out to take the fit-out's");
+            }
+        }
+        double live = bounded(v.live(), Dimension.AREA_LOAD, p + "/live", "live", Double.NaN, 0, Units.PSF.toSi(100),
+                "the live load of the vibration analysis, 0 to 100 psf, e.g. \"11psf\" (offices, AISC Design Guide 11)");
+        return new VibrationSettings(use, fit, damping, live);
     }
 
     /** The plan-wide composite rules; the defaults where a key is absent, and where a value is wrong (reported). */

@@ -44,7 +44,11 @@ final class PlanDocument {
             List<String> beamSeries, List<String> girderSeries, List<String> columnSeries,
             @JsonInclude(JsonInclude.Include.ALWAYS) @QuantityOf(Dimension.LENGTH) String maxBeamDepth,
             Integer spliceEvery, Boolean liveLoadReduction, String partition, String girderArea, String catalog,
-            @QuantityOf(Dimension.LENGTH) String connectionEccentricity, CompositeRulesDoc composite) {
+            @QuantityOf(Dimension.LENGTH) String connectionEccentricity, CompositeRulesDoc composite, VibrationDoc vibration) {
+    }
+
+    /** The inputs of the floor-vibration check (AISC DG11); every key optional. */
+    record VibrationDoc(String use, String fitOut, Double damping, @QuantityOf(Dimension.AREA_LOAD) String live) {
     }
 
     /** The plan-wide rules of composite design; every key optional. */

@@ -26,6 +26,7 @@ import org.baywright.plan.CompositeRules;
 import org.baywright.plan.Deck;
 import org.baywright.plan.Slab;
 import org.baywright.plan.StudPlacement;
+import org.baywright.plan.VibrationSettings;
 import org.baywright.plan.DesignSettings;
 import org.baywright.plan.Floor;
 import org.baywright.plan.RoofCeiling;
@@ -79,7 +80,18 @@ final class PlanWriter {
                 s.columnSeries(), s.maxBeamDepth() == 0 ? null : q(s.maxBeamDepth(), units.smallLength()), s.spliceEvery(),
                 s.liveLoadReduction(), s.partitionAsDead() ? "dead" : "live", s.girderAreaDelivered() ? "delivered" : "half-bay",
                 s.catalog(), s.connectionEccentricity() == DesignSettings.DEFAULT_CONNECTION_ECCENTRICITY ? null
-                        : q(s.connectionEccentricity(), units.smallLength()), compositeRules(s.composite()));
+                        : q(s.connectionEccentricity(), units.smallLength()), compositeRules(s.composite()), vibration(s.vibration()));
+    }
+
+    /** The vibration inputs, only when they differ from the defaults (older files read the same). */
+    private PlanDocument.VibrationDoc vibration(VibrationSettings v) {
+        VibrationSettings d = VibrationSettings.defaults();
+        if (v.use() == d.use() && v.fitOut() == null && Double.isNaN(v.damping()) && Double.isNaN(v.live())) {
+            return null;
+        }
+        return new PlanDocument.VibrationDoc(PlanAssembler.useKey(v.use()),
+                v.fitOut() == null ? null : PlanAssembler.fitOutKey(v.fitOut()),
+                Double.isNaN(v.damping()) ? null : finite(v.damping()), Double.isNaN(v.live()) ? null : q(v.live(), units.areaLoad()));
     }
 
     /** The composite rules, only when they differ from the defaults (older files read the same). */

@@ -29,12 +29,13 @@ import java.util.Map;
  *     moment is the reaction times d/2 + this (a connection to a flange) or tw/2 + this (to the web); default
  *     3 in, common practice
  * @param composite the plan-wide rules of composite design (minimum degree, stud weight, camber)
+ * @param vibration the inputs of the floor-vibration check (use, fit-out or damping, vibration live load)
  */
 public record DesignSettings(String method, double fy, double liveDeflection, double totalDeflection,
         List<String> beamSeries, List<String> girderSeries, List<String> columnSeries, double maxBeamDepth,
         int spliceEvery, boolean liveLoadReduction, boolean partitionAsDead, boolean girderAreaDelivered,
         String catalog, boolean deflectionLiveReduced, Map<String, RoofCeiling> roofCeilings,
-        double connectionEccentricity, CompositeRules composite) {
+        double connectionEccentricity, CompositeRules composite, VibrationSettings vibration) {
     /** The default distance from the column face to a reaction: 3 in (common practice). */
     public static final double DEFAULT_CONNECTION_ECCENTRICITY = 3 * 0.0254;
 
@@ -44,6 +45,25 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
         columnSeries = List.copyOf(columnSeries);
         roofCeilings = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(roofCeilings));
         composite = composite == null ? CompositeRules.DEFAULT : composite;
+        vibration = vibration == null ? VibrationSettings.defaults() : vibration;
+    }
+
+    /** The settings with the default vibration inputs. */
+    public DesignSettings(String method, double fy, double liveDeflection, double totalDeflection, List<String> beamSeries,
+            List<String> girderSeries, List<String> columnSeries, double maxBeamDepth, int spliceEvery,
+            boolean liveLoadReduction, boolean partitionAsDead, boolean girderAreaDelivered, String catalog,
+            boolean deflectionLiveReduced, Map<String, RoofCeiling> roofCeilings, double connectionEccentricity,
+            CompositeRules composite) {
+        this(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries, maxBeamDepth, spliceEvery,
+                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings,
+                connectionEccentricity, composite, null);
+    }
+
+    /** The same settings with other vibration inputs. */
+    public DesignSettings withVibration(VibrationSettings v) {
+        return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced,
+                roofCeilings, connectionEccentricity, composite, v);
     }
 
     /** The settings with the default composite rules. */
@@ -60,7 +80,7 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
     public DesignSettings withComposite(CompositeRules rules) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
                 maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced,
-                roofCeilings, connectionEccentricity, rules);
+                roofCeilings, connectionEccentricity, rules, vibration);
     }
 
     /** The settings with every roof at the default ceiling ({@link RoofCeiling#DEFAULT}). */
@@ -109,7 +129,7 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
     public DesignSettings withRoofCeilings(Map<String, RoofCeiling> ceilings) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
                 maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced,
-                ceilings, connectionEccentricity, composite);
+                ceilings, connectionEccentricity, composite, vibration);
     }
 
     /** The settings with deflection checked under unreduced live load (the default). */
@@ -129,43 +149,43 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
     /** The same settings with another design method ("lrfd" or "asd"). */
     public DesignSettings withMethod(String newMethod) {
         return new DesignSettings(newMethod, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite, vibration);
     }
 
     /** The same settings with another yield stress, Pa. */
     public DesignSettings withFy(double newFy) {
         return new DesignSettings(method, newFy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite, vibration);
     }
 
     /** The same settings with other deflection limits (span ratios, 0 = off). */
     public DesignSettings withDeflection(double live, double total) {
         return new DesignSettings(method, fy, live, total, beamSeries, girderSeries, columnSeries, maxBeamDepth, spliceEvery,
-                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite);
+                liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite, vibration);
     }
 
     /** The same settings with other series allowed for beams and for girders (empty = all). */
     public DesignSettings withBeamSeries(List<String> beams, List<String> girders) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beams, girders, columnSeries, maxBeamDepth,
-                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite);
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite, vibration);
     }
 
     /** The same settings with other series allowed for columns. */
     public DesignSettings withColumnSeries(List<String> series) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, series, maxBeamDepth,
-                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite);
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite, vibration);
     }
 
     /** The same settings with another depth limit for beams and girders, m (0 = none). */
     public DesignSettings withMaxBeamDepth(double depth) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries, depth,
-                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite);
+                spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite, vibration);
     }
 
     /** The same settings with column splices every {@code levels} levels. */
     public DesignSettings withSpliceEvery(int levels) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, levels, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite);
+                maxBeamDepth, levels, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite, vibration);
     }
 
     /**
@@ -177,7 +197,7 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
      */
     public DesignSettings withLiveLoad(boolean reduce, boolean partitionsAsDead, boolean girderDelivered) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, reduce, partitionsAsDead, girderDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite);
+                maxBeamDepth, spliceEvery, reduce, partitionsAsDead, girderDelivered, catalog, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite, vibration);
     }
 
     /**
@@ -185,19 +205,19 @@ public record DesignSettings(String method, double fy, double liveDeflection, do
      */
     public DesignSettings withDeflectionLiveReduced(boolean reduced) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, reduced, roofCeilings, connectionEccentricity, composite);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, reduced, roofCeilings, connectionEccentricity, composite, vibration);
     }
 
     /** The same settings with another distance from the column face to a reaction, m. */
     public DesignSettings withConnectionEccentricity(double a) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
                 maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, catalog, deflectionLiveReduced,
-                roofCeilings, a, composite);
+                roofCeilings, a, composite, vibration);
     }
 
     /** The same settings with another catalog file (empty: the built-in W shapes). */
     public DesignSettings withCatalog(String file) {
         return new DesignSettings(method, fy, liveDeflection, totalDeflection, beamSeries, girderSeries, columnSeries,
-                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, file, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite);
+                maxBeamDepth, spliceEvery, liveLoadReduction, partitionAsDead, girderAreaDelivered, file, deflectionLiveReduced, roofCeilings, connectionEccentricity, composite, vibration);
     }
 }

@@ -3,9 +3,8 @@ package org.baywright.plan;
 /**
  * The inputs of the floor-vibration check from walking (AISC Design Guide 11, 2nd ed.; the design code is
  * {@code design.dg11}) that a plan sets: what the floors are used for, how they are fitted out (which sets the
- * damping), and the live load a vibration analysis uses. Plan files do not carry these yet: every run uses
- * {@link #defaults()} (offices, a paper office, the occupancy's vibration live load). The plan-file keys meant
- * for them: {@code settings.vibration.use} ({@code offices}, {@code residences}, {@code quiet-areas},
+ * damping), and the live load a vibration analysis uses ({@link DesignSettings#vibration()}; a plan without
+ * them takes {@link #defaults()}: offices, a paper office, the occupancy's vibration live load). The plan-file keys: {@code settings.vibration.use} ({@code offices}, {@code residences}, {@code quiet-areas},
  * {@code shopping-malls}, {@code indoor-footbridges}, {@code outdoor-footbridges}), {@code settings.vibration.fitOut}
  * ({@code electronic-office}, {@code paper-office}, {@code full-height-partitions}, {@code shopping-mall},
  * {@code footbridge}), {@code settings.vibration.damping} (a number) and {@code settings.vibration.live} (an

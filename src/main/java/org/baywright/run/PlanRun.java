@@ -97,11 +97,11 @@ public final class PlanRun {
     }
 
     /**
-     * The floor-vibration settings a run of {@code plan} uses: the defaults (offices, the usual fit-out, the use's
-     * vibration live load) until plan files carry them ({@link VibrationSettings} lists the keys meant for them).
+     * The floor-vibration settings a run of {@code plan} uses: the plan's ({@code settings.vibration} in its file;
+     * offices, the usual fit-out and the use's vibration live load where it gives none).
      */
     public static VibrationSettings vibrationSettings(Plan plan) {
-        return VibrationSettings.defaults();
+        return plan.settings().vibration();
     }
 
     /** Baywright's version from the jar manifest, or "development build". */

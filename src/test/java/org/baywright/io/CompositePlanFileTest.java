@@ -116,4 +116,23 @@ class CompositePlanFileTest {
         located(problems("\"ribWidth\": \"5in\"", "\"ribWidth\": \"14in\""), "/floors/0/decks/0/slab/ribWidth", "pitch");
         located(problems("\"studs\": 20", "\"studs\": -2"), "/floors/0/members/0/studs", "0 to 400");
     }
+
+    @Test
+    void theVibrationInputsSurviveTheFileAndWrongOnesAreLocated() {
+        Plan p = plan("us");
+        Plan v = new Plan(p.name(), p.units(), p.settings().withVibration(org.baywright.plan.VibrationSettings.defaults()
+                .withUse(org.baywright.plan.VibrationSettings.Use.RESIDENCES).withDamping(0.03).withLive(Units.PSF.toSi(6))),
+                p.grid(), p.levels(), p.floors(), p.columns(), p.notes());
+        String text = PlanFiles.write(v);
+        assertTrue(text.contains("\"vibration\""), text);
+        org.baywright.plan.VibrationSettings back = PlanFiles.read(text, "vib").plan().orElseThrow().settings().vibration();
+        assertEquals(v.settings().vibration().use(), back.use());
+        assertEquals(0.03, back.damping(), 0);
+        assertEquals(6, Units.PSF.fromSi(back.live()), 1e-9);
+        assertFalse(PlanFiles.write(p).contains("\"vibration\""), "defaults are not written");
+        List<Problem> ps = PlanFiles.read(text.replace("\"damping\": 0.03", "\"damping\": 3"), "bad").problems();
+        located(ps, "/settings/vibration/damping", "at most 0.2");
+        ps = PlanFiles.read(text.replace("\"residences\"", "\"hospital\""), "bad").problems();
+        located(ps, "/settings/vibration/use", "\"offices\"");
+    }
 }

@@ -123,11 +123,28 @@ public final class FloorDesigner {
         CompositeGeometry geometry = floor.composite().composite(m) ? CompositeGeometry.of(floor, in.members(), m) : null;
         Searches.Sized sized = size(m, reduction, loads, criteria, geometry != null);
         BeamDesign d = sized.design();
+        // a member stiffened for walking vibration (run.PlanRun): at least that section, its studs searched
+        Section stiff = vibrationSection(m);
+        if (stiff != null && geometry == null && d.section() != null && d.section().props().ix() < stiff.props().ix()) {
+            Searches.Sized s = searches.check(stiff, span, reduction.apply(loads), rules.liveLoad().deflectionUnreduced()
+                    ? MemberReduction.none(reduction).apply(loads) : null, criteria);
+            sized = s;
+            BeamDesign sd = s.design();
+            d = new BeamDesign(sd.status() == MemberStatus.FIXED_SIZE ? MemberStatus.SIZED : sd.status(), sd.section(), sd.checks(),
+                    d.rejected(), d.candidates());
+        }
         CompositeResult composite = null;
         if (geometry != null) {
             composite = composite(m, geometry, loads, reduction, d);
             CompositeDesign cd = composite.design();
-            d = new BeamDesign(cd.status(), cd.section(), cd.checks(), cd.rejected(), cd.alternatives().size());
+            if (stiff != null && cd.section() != null && cd.section().props().ix() < stiff.props().ix()) {
+                CompositeResult c2 = composite(m, geometry, loads, reduction, d, stiff);
+                CompositeDesign s2 = c2.design();
+                composite = c2;
+                cd = s2;
+            }
+            d = new BeamDesign(cd.status() == MemberStatus.FIXED_SIZE && stiff != null && m.fixedSection().isEmpty()
+                    ? MemberStatus.SIZED : cd.status(), cd.section(), cd.checks(), cd.rejected(), cd.alternatives().size());
         } else if (m.composite().orElse(false) && floor.composite().mode() != CompositeMode.NON_COMPOSITE) {
             problems.add(new Problem(Problem.Severity.WARNING, "no-slab", "floor " + floor.id(), m.id(), "member " + m.id()
                     + " is marked composite but no deck beside it describes a slab; it was designed as bare steel",
@@ -232,6 +249,18 @@ public final class FloorDesigner {
      * kept (its studs searched unless fixed too).
      */
     private CompositeResult composite(Member m, CompositeGeometry g, MemberLoads loads, MemberReduction reduction, BeamDesign bare) {
+        return composite(m, g, loads, reduction, bare, null);
+    }
+
+    /** The least section of a member stiffened for walking vibration, or null. */
+    private Section vibrationSection(Member m) {
+        String s = rules.vibrationSections().get(m.id());
+        return s == null ? null : searches.catalog().find(s).orElse(null);
+    }
+
+    /** As {@link #composite(Member, CompositeGeometry, MemberLoads, MemberReduction, BeamDesign)}, at {@code least} when not null (its studs searched). */
+    private CompositeResult composite(Member m, CompositeGeometry g, MemberLoads loads, MemberReduction reduction, BeamDesign bare,
+            Section least) {
         double span = m.length();
         org.baywright.plan.Slab slab = g.deck().slab();
         Map<LoadCase, List<SpanLoad>> caseLoads = reduction.applyComposite(loads);
@@ -247,9 +276,9 @@ public final class FloorDesigner {
                 loads.byComponent().get(Component.D_WET.ordinal()), loads.byComponent().get(Component.CONSTRUCTION.ordinal()), bl,
                 loads.bracing(m.kind()));
         CompositeCriteria cc = rules.compositeCriteria(shored, loads.bracing(m.kind()));
-        Optional<String> fixed = m.fixedSection();
+        Optional<String> fixed = least != null ? Optional.of(least.designation()) : m.fixedSection();
         Section fixedSection = fixed.flatMap(searches.catalog()::find).orElse(null);
-        int fixedStuds = fixedSection != null && m.fixedStuds().isPresent() ? m.fixedStuds().getAsInt() : -1;
+        int fixedStuds = least == null && fixedSection != null && m.fixedStuds().isPresent() ? m.fixedStuds().getAsInt() : -1;
         Searches.CompositeSized cs = searches.composite(member, caseLoads, deflectionLoads, cc,
                 m.kind() == MemberKind.GIRDER ? rules.girders() : rules.beams(), fixedSection, fixedStuds);
         CompositeDesign cd = cs.design();

@@ -363,7 +363,8 @@ public final class PlanCanvas extends Region {
         }
         if (laidOut == null) {
             laidOutScale = view.scale();
-            laidOut = picture.build(PX_PER_MM / laidOutScale);
+            laidOut = CompositeLabels.apply(picture.build(PX_PER_MM / laidOutScale), model.currentMembers(), model.units(),
+                    PX_PER_MM / laidOutScale, true);
         }
         return laidOut;
     }

@@ -1,11 +1,16 @@
 package org.baywright.design;
 
+import java.util.List;
+import java.util.Map;
 import java.util.Objects;
+import org.baywright.analysis.DistributedLoad;
+import org.baywright.analysis.SpanLoad;
 import org.baywright.design.aisc360.DeckRibs;
+import org.baywright.load.LoadCase;
 
 /**
  * One simple-span composite beam under uniform loads: what the designer needs to know of the floor
- * around it. SI: m, Pa (area loads), N/m (line loads).
+ * around it ({@link #member()} gives the same beam as the general {@link CompositeMember}). SI: m, Pa (area loads), N/m (line loads).
  *
  * <p>The line loads are the area loads times {@code tributaryWidth}; the slab's weight is computed
  * from {@link SlabOnDeck#weight} unless {@code slabWeightOverride} is a number.
@@ -56,6 +61,27 @@ public record CompositeBeam(double span, DeckRibs ribs, double toNeighbourLeft, 
         double inf = Double.POSITIVE_INFINITY;
         return new CompositeBeam(span, ribs, spacing, spacing, inf, inf, spacing, slab, studs, superimposedDead, live,
                 constructionLive, Double.NaN);
+    }
+
+    /** The slab weight per area used [Pa]: the override when given, else {@link SlabOnDeck#weight} of the slab. */
+    public double slabWeight() {
+        return Double.isNaN(slabWeightOverride) ? slab.weight(null) : slabWeightOverride;
+    }
+
+    /**
+     * The same beam as a {@link CompositeMember}: full-span uniform loads, each area load times the
+     * tributary width: the slab's weight as {@code wet}, the construction live load as
+     * {@code construction}, the superimposed dead load as D and the live load as L on the composite
+     * section; the criteria's construction bracing.
+     */
+    public CompositeMember member() {
+        double w = slabWeight();
+        List<SpanLoad> wet = List.of(DistributedLoad.full(span, w * tributaryWidth));
+        List<SpanLoad> cl = List.of(DistributedLoad.full(span, constructionLive * tributaryWidth));
+        BeamLoads composite = BeamLoads.of(span, Map.of(LoadCase.D, List.of(DistributedLoad.full(span, superimposedDead * tributaryWidth)),
+                LoadCase.L, List.of(DistributedLoad.full(span, live * tributaryWidth))));
+        return new CompositeMember(span, ribs, toNeighbourLeft, toNeighbourRight, toEdgeLeft, toEdgeRight, slab, studs, w, wet,
+                cl, composite, null);
     }
 
     /** The same beam with the slab weight given by the user [Pa]. */

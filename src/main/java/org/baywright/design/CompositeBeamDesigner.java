@@ -1,12 +1,18 @@
 package org.baywright.design;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Comparator;
+import java.util.EnumSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 import org.baywright.analysis.DistributedLoad;
+import org.baywright.analysis.Extreme;
+import org.baywright.analysis.PointLoad;
+import org.baywright.analysis.SimpleSpan;
+import org.baywright.analysis.SpanLoad;
 import org.baywright.calc.Arg;
 import org.baywright.calc.Calc;
 import org.baywright.calc.Quantity;
@@ -21,6 +27,7 @@ import org.baywright.design.aisc360.EffectiveWidthI3;
 import org.baywright.design.aisc360.IShapeShear;
 import org.baywright.design.aisc360.StudStrengthI8;
 import org.baywright.load.Combinations;
+import org.baywright.load.DesignMethod;
 import org.baywright.load.LoadCase;
 import org.baywright.load.LoadCombination;
 
@@ -68,6 +75,11 @@ public final class CompositeBeamDesigner {
     private static final String PRACTICE = "common practice";
     private static final String STATICS = "simple span, uniform load (AISC Manual Table 3-23 Case 1)";
 
+    private static final String STATICS_GENERAL = "simple span, loads as listed (statics)";
+    private static final String STUD_RULE = "studs spaced uniformly over each half span, common practice";
+
+    private final CompositeMember member;
+    /** The uniform-load beam this designer was made from, or null. */
     private final CompositeBeam beam;
     private final CompositeCriteria criteria;
     private final double span;
@@ -75,10 +87,6 @@ public final class CompositeBeamDesigner {
     private final double bRight;
     private final double beff;
     private final double slabWeight;
-    private final double wSlab;
-    private final double wSdl;
-    private final double wLive;
-    private final double wConstructionLive;
     private final double ec;
     private final double qn;
     private final double sMin;
@@ -88,45 +96,189 @@ public final class CompositeBeamDesigner {
     private final CompositeSlab concrete;
     private final List<LoadCombination> combos;
     private final BeamDesigner construction;
+    /**
+     * True when every load is a full-span uniform one, on D and L only, with no separate deflection
+     * loads: the closed forms of a uniform load (w·L²/8, 5·w·L⁴/(384·E·I)) then give the statics.
+     */
+    private final boolean uniform;
+    // the uniform case: line loads [N/m] (NaN otherwise)
+    private final double wSlab;
+    private final double wSdl;
+    private final double wLive;
+    private final double wConstructionLive;
+    // the general case (null otherwise): statics of the simple span
+    private final SimpleSpan[] comboSpans;
+    private final double[] comboDead;
+    private final SimpleSpan wetSpan;
+    private final SimpleSpan allSpan;
+    private final Extreme liveEi;
+    private final Extreme postEi;
+    /** Positions of the point loads inside the span (any strength case, wet included), ascending, distinct. */
+    private final double[] points;
+    private final String liveNote;
+    private final String totalNote;
 
+    /** A designer for a uniform-load beam, through {@link CompositeBeam#member()}. */
     public CompositeBeamDesigner(CompositeBeam beam, CompositeCriteria criteria) {
+        this(beam.member(), criteria, beam);
+    }
+
+    /** A designer for a composite member under any simple-span loads. */
+    public CompositeBeamDesigner(CompositeMember member, CompositeCriteria criteria) {
+        this(member, criteria, null);
+    }
+
+    private CompositeBeamDesigner(CompositeMember m, CompositeCriteria criteria, CompositeBeam beam) {
+        this.member = m;
         this.beam = beam;
         this.criteria = criteria;
-        this.span = beam.span();
-        this.bLeft = EffectiveWidthI3.side(span, beam.toNeighbourLeft(), beam.toEdgeLeft(), "left", null);
-        this.bRight = EffectiveWidthI3.side(span, beam.toNeighbourRight(), beam.toEdgeRight(), "right", null);
+        this.span = m.span();
+        this.bLeft = EffectiveWidthI3.side(span, m.toNeighbourLeft(), m.toEdgeLeft(), "left", null);
+        this.bRight = EffectiveWidthI3.side(span, m.toNeighbourRight(), m.toEdgeRight(), "right", null);
         this.beff = bLeft + bRight;
-        SlabOnDeck slab = beam.slab();
-        this.slabWeight = Double.isNaN(beam.slabWeightOverride()) ? slab.weight(null) : beam.slabWeightOverride();
-        double tw = beam.tributaryWidth();
-        this.wSlab = slabWeight * tw;
-        this.wSdl = beam.superimposedDead() * tw;
-        this.wLive = beam.live() * tw;
-        this.wConstructionLive = beam.constructionLive() * tw;
-        Studs st = beam.studs();
+        SlabOnDeck slab = m.slab();
+        this.slabWeight = m.slabWeight();
+        Studs st = m.studs();
         this.ec = StudStrengthI8.ec(slab.density(), slab.fc(), null);
         double asa = StudStrengthI8.asa(st.diameter(), null);
-        StudStrengthI8.Factors f = StudStrengthI8.factors(beam.ribs(), st.perRib(), st.position(), slab.wrOverHr(), null);
+        StudStrengthI8.Factors f = StudStrengthI8.factors(m.ribs(), st.perRib(), st.position(), slab.wrOverHr(), null);
         this.qn = StudStrengthI8.qn(asa, slab.fc(), ec, f, st.fu(), null);
         this.sMin = StudStrengthI8.minSpacing(st.diameter(), null);
         this.sMax = StudStrengthI8.maxSpacing(slab.thickness(), null);
         double half = span / 2;
-        if (beam.ribs() == DeckRibs.PERPENDICULAR) {
+        if (m.ribs() == DeckRibs.PERPENDICULAR) {
             int ribs = (int) Math.floor(span / slab.pitch() + 1e-9);
             this.maxPerHalf = ((ribs + 1) / 2) * st.perRib();
         } else {
             this.maxPerHalf = ((int) Math.floor(half / sMin + 1e-9)) * st.perRib();
         }
         this.spacingMinPerHalf = (int) Math.ceil(half / sMax - 1e-9);
-        this.concrete = CompositeSlab.of(beff, slab.topping(), slab.hr(), slab.wr(), slab.pitch(), beam.ribs(), slab.fc());
-        this.combos = Combinations.gravity(criteria.method(), Set.of(LoadCase.D, LoadCase.L));
-        Bracing bracing = beam.ribs() == DeckRibs.PERPENDICULAR ? Bracing.continuous() : criteria.constructionBracing();
-        BeamLoads cl = BeamLoads.of(span, Map.of(LoadCase.D, List.of(DistributedLoad.full(span, wSlab)),
-                LoadCase.L, List.of(DistributedLoad.full(span, wConstructionLive))));
+        this.concrete = CompositeSlab.of(beff, slab.topping(), slab.hr(), slab.wr(), slab.pitch(), m.ribs(), slab.fc());
+        BeamLoads comp = m.composite();
+        this.uniform = isUniform(m);
+        DeflectionLimits lim = criteria.deflection();
+        String unreduced = comp.separateDeflectionLoads() ? ", live load unreduced" : "";
+        this.liveNote = "I_LB, limit L/" + (long) lim.live() + unreduced;
+        this.totalNote = "limit L/" + (long) lim.total() + unreduced;
+        if (uniform) {
+            this.wSlab = uniformSum(m.wet());
+            this.wSdl = uniformSum(comp.of(LoadCase.D).loads());
+            this.wLive = uniformSum(comp.of(LoadCase.L).loads());
+            this.wConstructionLive = uniformSum(m.construction());
+            this.combos = Combinations.gravity(criteria.method(), Set.of(LoadCase.D, LoadCase.L));
+            this.comboSpans = null;
+            this.comboDead = null;
+            this.wetSpan = null;
+            this.allSpan = null;
+            this.liveEi = null;
+            this.postEi = null;
+            this.points = new double[0];
+        } else {
+            this.wSlab = Double.NaN;
+            this.wSdl = Double.NaN;
+            this.wLive = Double.NaN;
+            this.wConstructionLive = Double.NaN;
+            EnumSet<LoadCase> present = EnumSet.of(LoadCase.D);
+            present.addAll(comp.present());
+            this.combos = Combinations.gravity(criteria.method(), present);
+            LoadCase[] cases = LoadCase.values();
+            this.wetSpan = SimpleSpan.of(span, m.wet());
+            SimpleSpan[] strength = new SimpleSpan[cases.length];
+            SimpleSpan[] deflection = new SimpleSpan[cases.length];
+            double[] live = new double[cases.length];
+            double[] all = new double[cases.length];
+            for (int i = 0; i < cases.length; i++) {
+                strength[i] = comp.of(cases[i]);
+                deflection[i] = comp.forDeflection(cases[i]);
+                live[i] = cases[i] == LoadCase.D ? 0 : 1;
+                all[i] = 1;
+            }
+            strength[LoadCase.D.ordinal()] = strength[LoadCase.D.ordinal()].plus(wetSpan);
+            this.comboSpans = new SimpleSpan[combos.size()];
+            this.comboDead = new double[combos.size()];
+            for (int c = 0; c < combos.size(); c++) {
+                double[] fc = new double[cases.length];
+                for (int i = 0; i < cases.length; i++) {
+                    fc[i] = combos.get(c).factor(cases[i]);
+                }
+                comboSpans[c] = SimpleSpan.combine(fc, strength);
+                comboDead[c] = combos.get(c).factor(LoadCase.D);
+            }
+            this.liveEi = SimpleSpan.combine(live, deflection).maxDeflection(1.0);
+            SimpleSpan post = SimpleSpan.combine(all, deflection);
+            this.postEi = post.maxDeflection(1.0);
+            this.allSpan = post.plus(wetSpan);
+            this.points = pointPositions(m);
+        }
+        Bracing bracing = m.ribs() == DeckRibs.PERPENDICULAR ? Bracing.continuous()
+                : m.constructionBracing() != null ? m.constructionBracing() : criteria.constructionBracing();
+        BeamLoads cl = BeamLoads.of(span, Map.of(LoadCase.D, m.wet(), LoadCase.L, m.construction()));
         this.construction = new BeamDesigner(cl, new BeamCriteria(criteria.method(), criteria.steel(), bracing,
                 new DeflectionLimits(0, 0), criteria.selfWeight()));
     }
 
+    /** True when every load of {@code m} is a full-span uniform load on D or L and the deflection loads are the strength loads. */
+    private static boolean isUniform(CompositeMember m) {
+        BeamLoads comp = m.composite();
+        if (comp.separateDeflectionLoads() || !allFullUniform(m.wet(), m.span()) || !allFullUniform(m.construction(), m.span())) {
+            return false;
+        }
+        for (LoadCase c : LoadCase.values()) {
+            List<SpanLoad> l = comp.of(c).loads();
+            if (c == LoadCase.D || c == LoadCase.L ? !allFullUniform(l, m.span()) : comp.of(c).totalLoad() != 0) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static boolean allFullUniform(List<? extends SpanLoad> loads, double span) {
+        for (SpanLoad l : loads) {
+            if (!(l instanceof DistributedLoad d) || d.start() != 0 || d.end() != span || d.wStart() != d.wEnd()) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static double uniformSum(List<? extends SpanLoad> loads) {
+        double w = 0;
+        for (SpanLoad l : loads) {
+            w += ((DistributedLoad) l).wStart();
+        }
+        return w;
+    }
+
+    /** Positions of the point loads strictly inside the span, of the wet loads and every composite-stage case. */
+    private static double[] pointPositions(CompositeMember m) {
+        List<SpanLoad> all = new ArrayList<>(m.wet());
+        for (LoadCase c : LoadCase.values()) {
+            all.addAll(m.composite().of(c).loads());
+        }
+        double[] x = new double[all.size()];
+        int n = 0;
+        for (SpanLoad l : all) {
+            if (l instanceof PointLoad p && p.position() > 0 && p.position() < m.span() && p.force() != 0) {
+                x[n++] = p.position();
+            }
+        }
+        x = Arrays.copyOf(x, n);
+        Arrays.sort(x);
+        int k = 0;
+        for (int i = 0; i < n; i++) {
+            if (k == 0 || x[i] != x[k - 1]) {
+                x[k++] = x[i];
+            }
+        }
+        return Arrays.copyOf(x, k);
+    }
+
+    /** The member designed (for a designer made from a {@link CompositeBeam}, its {@link CompositeBeam#member()}). */
+    public CompositeMember member() {
+        return member;
+    }
+
+    /** The uniform-load beam this designer was made from; null when it was made from a {@link CompositeMember}. */
     public CompositeBeam beam() {
         return beam;
     }
@@ -175,18 +327,31 @@ public final class CompositeBeamDesigner {
 
     /**
      * What does not depend on the stud count: the pre-composite deflection and camber, the stud range,
-     * and (by {@link #stages}, which the search runs only for a section that passes at its most studs)
-     * the construction stage and the shear check.
+     * the composite-stage moment demand (own weight in D), the moments at the point loads and the studs
+     * they need, and (by {@link #stages}, which the search runs only for a section that passes at its
+     * most studs) the construction stage and the shear check.
      */
     private final class SectionState {
         final Section s;
         final double w;
         final double pre;
+        final double preAt;
         final double camber;
         final double full;
         final int minPerHalf;
         final int hiPerHalf;
         final boolean limitedByRibs;
+        /** The governing combination of the composite-stage maximum moment and that moment. */
+        final Combinations.Governing mu;
+        /** Where that moment acts. */
+        final double muAt;
+        /** E·I × the total-load deflection of a shored member (wet, composite and own weight), and where (general case). */
+        final double allEi;
+        final double allAt;
+        /** The moment at each point load (governing combination) and the studs it needs (−1 until computed). */
+        final double[] pointMu;
+        final LoadCombination[] pointCombo;
+        final int[] pointRequired;
         List<Check> constructionChecks = List.of();
         double constructionRatio;
         Check shear;
@@ -194,14 +359,23 @@ public final class CompositeBeamDesigner {
         SectionState(Section s, Calc calc) {
             this.s = s;
             this.w = criteria.selfWeight() ? s.weight() : 0;
+            double[] out = new double[2];
             if (criteria.shored()) {
                 pre = 0;
+                preAt = span / 2;
                 camber = 0;
             } else {
                 if (calc != null) {
                     calc.heading("Deflection of the bare steel under the wet slab and camber");
                 }
-                pre = deflection("Δ_pre", wSlab + w, s.props().ix(), "wet slab and steel on the bare steel", calc);
+                if (uniform) {
+                    pre = deflection("Δ_pre", wSlab + w, s.props().ix(), "wet slab and steel on the bare steel", calc);
+                    preAt = span / 2;
+                } else {
+                    wetSpan.maxEiDeflectionWithUniform(w, out);
+                    preAt = out[1];
+                    pre = deflection("Δ_pre", out[0], preAt, s.props().ix(), "I_s", "wet loads and steel on the bare steel", calc);
+                }
                 camber = criteria.camber().camber(pre, span, calc);
             }
             // the stud range
@@ -209,8 +383,74 @@ public final class CompositeBeamDesigner {
             int forDegree = (int) Math.ceil(criteria.minDegree() * full / qn - 1e-9);
             this.minPerHalf = Math.max(Math.max(forDegree, spacingMinPerHalf), 1);
             int forFull = (int) Math.ceil(full / qn - 1e-9);
-            this.hiPerHalf = Math.min(forFull, maxPerHalf);
-            this.limitedByRibs = forFull > maxPerHalf;
+            // the composite-stage moment demand
+            if (uniform) {
+                mu = Combinations.governing(byCase((wSlab + wSdl + w) * span * span / 8, wLive * span * span / 8), combos);
+                muAt = span / 2;
+                allEi = Double.NaN;
+                allAt = Double.NaN;
+                pointMu = null;
+                pointCombo = null;
+                pointRequired = null;
+            } else {
+                int nc = combos.size();
+                double[] values = new double[nc];
+                double[] at = new double[nc];
+                for (int c = 0; c < nc; c++) {
+                    comboSpans[c].maxMomentWithUniform(comboDead[c] * w, out);
+                    values[c] = out[0];
+                    at[c] = out[1];
+                }
+                int g = Combinations.governing(values);
+                mu = new Combinations.Governing(combos.get(g), g, values[g]);
+                muAt = at[g];
+                if (criteria.shored()) {
+                    allSpan.maxEiDeflectionWithUniform(w, out);
+                    allEi = out[0];
+                    allAt = out[1];
+                } else {
+                    allEi = Double.NaN;
+                    allAt = Double.NaN;
+                }
+                pointMu = new double[points.length];
+                pointCombo = new LoadCombination[points.length];
+                pointRequired = new int[points.length];
+                for (int p = 0; p < points.length; p++) {
+                    double x = points[p];
+                    for (int c = 0; c < nc; c++) {
+                        values[c] = comboSpans[c].moment(x) + comboDead[c] * w * x * (span - x) / 2;
+                    }
+                    int gp = Combinations.governing(values);
+                    pointMu[p] = values[gp];
+                    pointCombo[p] = combos.get(gp);
+                    pointRequired[p] = -1;
+                }
+            }
+            // the most studs worth having: full composite action at every point that needs it
+            int needed = forFull;
+            if (!uniform) {
+                if (mu.value() > 0) {
+                    needed = Math.max(needed, perHalfFor(forFull, muAt));
+                }
+                for (double x : points) {
+                    needed = Math.max(needed, perHalfFor(forFull, x));
+                }
+            }
+            this.hiPerHalf = Math.min(needed, maxPerHalf);
+            this.limitedByRibs = needed > maxPerHalf;
+        }
+
+        /**
+         * The least stud count k (from the support) whose φM_n(k·Q_n) carries the moment at point load
+         * {@code p} (I8.2c), or {@link Integer#MAX_VALUE} when even full composite action does not.
+         */
+        int required(int p) {
+            int r = pointRequired[p];
+            if (r < 0) {
+                r = leastStudsFor(this, pointMu[p]);
+                pointRequired[p] = r;
+            }
+            return r;
         }
 
         /** The construction stage (bare steel, F2/F3 and G2.1 by {@link BeamDesigner}) and the composite-stage shear. */
@@ -237,19 +477,86 @@ public final class CompositeBeamDesigner {
                 calc.heading("Shear: the steel section alone");
             }
             IShapeShear.Strength vs = shearStrength(s, criteria.steel(), calc);
-            double[] byCase = byCase((wSlab + wSdl + w) * span / 2, wLive * span / 2);
-            Combinations.Governing g = Combinations.governing(byCase, combos);
+            Combinations.Governing g;
+            double x = 0;
+            if (uniform) {
+                g = Combinations.governing(byCase((wSlab + wSdl + w) * span / 2, wLive * span / 2), combos);
+            } else {
+                double[] values = new double[combos.size()];
+                double[] at = new double[combos.size()];
+                for (int c = 0; c < values.length; c++) {
+                    double sw = comboDead[c] * w * span / 2;
+                    double r1 = comboSpans[c].leftReaction() + sw;
+                    double r2 = comboSpans[c].rightReaction() + sw;
+                    values[c] = Math.max(r1, r2);
+                    at[c] = r1 >= r2 ? 0 : span;
+                }
+                int i = Combinations.governing(values);
+                g = new Combinations.Governing(combos.get(i), i, values[i]);
+                x = at[i];
+            }
             double avail = criteria.method().available(vs.vn(), vs.phi(), vs.omega());
             if (calc != null) {
-                calc.eq("Vu", "w·L/2", STATICS, g.value(), Quantity.FORCE,
-                        Arg.of("w", g.value() * 2 / span, Quantity.LINE_LOAD), Arg.of("L", span, Quantity.SPAN_LENGTH));
+                if (uniform) {
+                    calc.eq("Vu", "w·L/2", STATICS, g.value(), Quantity.FORCE,
+                            Arg.of("w", g.value() * 2 / span, Quantity.LINE_LOAD), Arg.of("L", span, Quantity.SPAN_LENGTH));
+                } else {
+                    calc.value("Vu", g.value(), Quantity.FORCE, "the larger reaction, at the " + (x == 0 ? "left" : "right")
+                            + " support", STATICS_GENERAL);
+                }
                 calc.note("governing combination " + g.combination().name(), g.combination().reference());
                 calc.eq("ratio", "V_req/V_avail", CLAUSE_I4_2, g.value() / avail, Quantity.NUMBER,
                         Arg.of("V_req", g.value(), Quantity.FORCE), Arg.of("V_avail", avail, Quantity.FORCE));
             }
             this.shear = new Check("shear", g.value(), avail, g.value() / avail, g.combination(), CLAUSE_I4_2, Quantity.FORCE,
-                    0, null, Double.NaN, Double.NaN, "steel section alone");
+                    x, null, Double.NaN, Double.NaN, "steel section alone");
         }
+    }
+
+    /**
+     * The studs per half span at which the studs between the nearer support and {@code x} reach
+     * {@code count}: the inverse of {@link #studsTo}.
+     */
+    private int perHalfFor(int count, double x) {
+        double d = Math.min(x, span - x);
+        if (!(d > 0)) {
+            return Integer.MAX_VALUE;
+        }
+        double n = Math.ceil(count * (span / 2) / d - 1e-6);
+        return n >= Integer.MAX_VALUE ? Integer.MAX_VALUE : Math.max(count, (int) n);
+    }
+
+    /**
+     * Studs between the nearer support and {@code x} with {@code perHalf} studs spaced uniformly over
+     * each half span: ⌊n·d/(L/2)⌋, d = min(x, L − x) (common practice).
+     */
+    private int studsTo(double x, int perHalf) {
+        double d = Math.min(x, span - x);
+        return Math.min(perHalf, (int) Math.floor(perHalf * d / (span / 2) + 1e-9));
+    }
+
+    /** The least k ≥ 0 with M/(φM_n(k·Q_n)) passing; {@link Integer#MAX_VALUE} when full composite action does not pass. */
+    private int leastStudsFor(SectionState st, double m) {
+        int hi = (int) Math.ceil(st.full / qn - 1e-9);
+        if (!Check.passes(m / availableMoment(st.s, hi))) {
+            return Integer.MAX_VALUE;
+        }
+        int lo = 0;
+        while (lo < hi) {
+            int mid = (lo + hi) >>> 1;
+            if (Check.passes(m / availableMoment(st.s, mid))) {
+                hi = mid;
+            } else {
+                lo = mid + 1;
+            }
+        }
+        return lo;
+    }
+
+    private double availableMoment(Section s, int studs) {
+        CompositeFlexureI3.Result r = CompositeFlexureI3.strength(s, criteria.steel().fy(), criteria.steel().e(), concrete,
+                studs * qn, null);
+        return criteria.method().available(r.mn(), CompositeFlexureI3.PHI_B, CompositeFlexureI3.OMEGA_B);
     }
 
     /** Values by load case (D, L) in the order of {@link LoadCase}. */
@@ -271,33 +578,69 @@ public final class CompositeBeamDesigner {
                 Arg.of("L", span, Quantity.SPAN_LENGTH), Arg.of("E", e, Quantity.STRESS), Arg.of("I", i, Quantity.INERTIA));
     }
 
-    /** The stud-dependent checks of one section: composite flexure and the two deflections. */
-    private record Trial(CompositeFlexureI3.Result flexure, double ilb, Check moment, Check live, Check total, double ratio) {
+    /**
+     * A deflection of the general case from E·I × deflection {@code eiDelta} at {@code x}: Δ = EIΔ/(E·I),
+     * the maximum along the span of the simple span under the loads as listed.
+     */
+    private double deflection(String symbol, double eiDelta, double x, double i, String iName, String what, Calc calc) {
+        double e = criteria.steel().e();
+        double v = eiDelta / (e * i);
+        if (calc == null) {
+            return v;
+        }
+        return calc.value(symbol, v, Quantity.SECTION_LENGTH, what + ": maximum along the span with E·" + iName, STATICS_GENERAL,
+                Arg.of("x", x, Quantity.SPAN_LENGTH), Arg.of("E", e, Quantity.STRESS), Arg.of(iName, i, Quantity.INERTIA));
+    }
+
+    /** The stud-dependent checks of one section: composite flexure, the two deflections and the studs at point loads. */
+    private record Trial(CompositeFlexureI3.Result flexure, double sumQn, double ilb, Check moment, Check live, Check total,
+            Check points, double ratio) {
     }
 
     private Trial trial(SectionState st, int perHalf, Calc calc) {
         Section s = st.s;
         double fy = criteria.steel().fy();
-        double sumQn = perHalf * qn;
+        int nm = uniform ? perHalf : studsTo(st.muAt, perHalf);
+        double sumQn = nm * qn;
         if (calc != null) {
-            calc.eq("ΣQn", "n_h·Qn", CLAUSE_I8_2C, sumQn, Quantity.FORCE, Arg.num("n_h", perHalf), Arg.of("Qn", qn, Quantity.FORCE));
+            if (uniform) {
+                calc.eq("ΣQn", "n_h·Qn", CLAUSE_I8_2C, sumQn, Quantity.FORCE, Arg.num("n_h", perHalf), Arg.of("Qn", qn, Quantity.FORCE));
+            } else {
+                calc.value("n_m", nm, Quantity.NUMBER, "studs between the nearer support and the point of maximum moment, "
+                        + "⌊n_h·d/(L/2)⌋ with d = min(x, L − x)", STUD_RULE, Arg.num("n_h", perHalf),
+                        Arg.of("x", st.muAt, Quantity.SPAN_LENGTH), Arg.of("L", span, Quantity.SPAN_LENGTH));
+                calc.eq("ΣQn", "n_m·Qn", CLAUSE_I8_2C, sumQn, Quantity.FORCE, Arg.num("n_m", nm), Arg.of("Qn", qn, Quantity.FORCE));
+            }
         }
         CompositeFlexureI3.Result r = CompositeFlexureI3.strength(s, fy, criteria.steel().e(), concrete, sumQn, calc);
-        double[] byCase = byCase((wSlab + wSdl + st.w) * span * span / 8, wLive * span * span / 8);
-        Combinations.Governing g = Combinations.governing(byCase, combos);
+        Combinations.Governing g = st.mu;
         double avail = criteria.method().available(r.mn(), CompositeFlexureI3.PHI_B, CompositeFlexureI3.OMEGA_B);
         double ratio = g.value() / avail;
         if (calc != null) {
-            calc.eq("Mu", "w·L²/8", STATICS, g.value(), Quantity.MOMENT, Arg.of("w", g.value() * 8 / (span * span),
-                    Quantity.LINE_LOAD), Arg.of("L", span, Quantity.SPAN_LENGTH));
+            if (uniform) {
+                calc.eq("Mu", "w·L²/8", STATICS, g.value(), Quantity.MOMENT, Arg.of("w", g.value() * 8 / (span * span),
+                        Quantity.LINE_LOAD), Arg.of("L", span, Quantity.SPAN_LENGTH));
+            } else {
+                calc.value("Mu", g.value(), Quantity.MOMENT, "largest moment of the combination along the span", STATICS_GENERAL,
+                        Arg.of("x", st.muAt, Quantity.SPAN_LENGTH));
+            }
             calc.note("governing combination " + g.combination().name(), g.combination().reference());
             calc.eq("ratio", "M_req/M_avail", CLAUSE_I3_2A, ratio, Quantity.NUMBER, Arg.of("M_req", g.value(), Quantity.MOMENT),
                     Arg.of("M_avail", avail, Quantity.MOMENT));
         }
         String note = r.pna() == CompositeFlexureI3.Pna.SLAB ? "PNA in the slab"
                 : r.pna() == CompositeFlexureI3.Pna.TOP_FLANGE ? "PNA in the top flange" : "PNA in the web";
+        if (nm != perHalf) {
+            note = note + "; " + nm + " studs between the nearer support and the point of maximum moment";
+        }
         Check moment = new Check("composite flexure", g.value(), avail, ratio, g.combination(), CLAUSE_I3_2A, Quantity.MOMENT,
-                span / 2, null, 0, Double.NaN, note);
+                st.muAt, null, 0, Double.NaN, note);
+        double worst = ratio;
+        Check points = null;
+        if (points().length > 0) {
+            points = pointCheck(st, perHalf, calc);
+            worst = Math.max(worst, points.ratio());
+        }
         if (calc != null) {
             calc.heading("Stiffness and deflections");
         }
@@ -305,22 +648,46 @@ public final class CompositeBeamDesigner {
         DeflectionLimits lim = criteria.deflection();
         Check live = null;
         Check total = null;
-        double worst = ratio;
         if (lim.live() > 0) {
-            double d = deflection("Δ_LL", wLive, ilb, "live load on I_LB", calc);
+            double d;
+            double at;
+            if (uniform) {
+                d = deflection("Δ_LL", wLive, ilb, "live load on I_LB", calc);
+                at = span / 2;
+            } else {
+                d = deflection("Δ_LL", liveEi.value(), liveEi.position(), ilb, "I_LB", "live loads on I_LB", calc);
+                at = liveEi.position();
+            }
             double allow = span / lim.live();
             live = new Check("live-load deflection", d, allow, d / allow, null, DeflectionLimits.SOURCE,
-                    Quantity.SECTION_LENGTH, span / 2, null, Double.NaN, Double.NaN, "I_LB, limit L/" + (long) lim.live());
+                    Quantity.SECTION_LENGTH, at, null, Double.NaN, Double.NaN, liveNote);
             worst = Math.max(worst, live.ratio());
         }
         if (lim.total() > 0) {
             double d;
+            double at;
             String note2;
             if (criteria.shored()) {
-                d = deflection("Δ_TL", wSlab + wSdl + st.w + wLive, ilb, "every load on I_LB (shored)", calc);
+                if (uniform) {
+                    d = deflection("Δ_TL", wSlab + wSdl + st.w + wLive, ilb, "every load on I_LB (shored)", calc);
+                    at = span / 2;
+                } else {
+                    d = deflection("Δ_TL", st.allEi, st.allAt, ilb, "I_LB", "every load and the steel on I_LB (shored)", calc);
+                    at = st.allAt;
+                }
                 note2 = "shored: all loads on I_LB";
             } else {
-                double post = deflection("Δ_post", wSdl + wLive, ilb, "superimposed dead and live load on I_LB", calc);
+                double post;
+                if (uniform) {
+                    post = deflection("Δ_post", wSdl + wLive, ilb, "superimposed dead and live load on I_LB", calc);
+                    at = span / 2;
+                } else {
+                    post = deflection("Δ_post", postEi.value(), postEi.position(), ilb, "I_LB",
+                            "superimposed dead and live loads on I_LB", calc);
+                    at = postEi.position();
+                    Calc.branch(calc, "Δ_pre and Δ_post are each the maximum of their loads; their sum bounds the maximum of the total",
+                            PRACTICE);
+                }
                 d = Calc.eq(calc, "Δ_TL", "Δ_pre − camber + Δ_post", PRACTICE, st.pre - st.camber + post,
                         Quantity.SECTION_LENGTH, Arg.of("Δ_pre", st.pre, Quantity.SECTION_LENGTH),
                         Arg.of("camber", st.camber, Quantity.SECTION_LENGTH), Arg.of("Δ_post", post, Quantity.SECTION_LENGTH));
@@ -328,10 +695,81 @@ public final class CompositeBeamDesigner {
             }
             double allow = span / lim.total();
             total = new Check("total-load deflection", d, allow, d / allow, null, DeflectionLimits.SOURCE,
-                    Quantity.SECTION_LENGTH, span / 2, null, Double.NaN, Double.NaN, note2 + ", limit L/" + (long) lim.total());
+                    Quantity.SECTION_LENGTH, at, null, Double.NaN, Double.NaN, note2 + ", " + totalNote);
             worst = Math.max(worst, total.ratio());
         }
-        return new Trial(r, ilb, moment, live, total, worst);
+        return new Trial(r, sumQn, ilb, moment, live, total, points, worst);
+    }
+
+    private double[] points() {
+        return points;
+    }
+
+    /**
+     * AISC 360-16 I8.2c: the studs between each point load and the nearer support (a point of zero
+     * moment of a simple span) must develop the moment at the point load. For each point load x_p the
+     * studs required are the least k with φM_n(k·Q_n) ≥ M_u(x_p); those available, with n_h studs spaced
+     * uniformly over each half span, ⌊n_h·d_p/(L/2)⌋, d_p = min(x_p, L − x_p). The ratio is required over
+     * available; the point with the highest ratio governs.
+     */
+    private Check pointCheck(SectionState st, int perHalf, Calc calc) {
+        int gov = 0;
+        double worst = Double.NEGATIVE_INFINITY;
+        for (int p = 0; p < points.length; p++) {
+            double rp = pointRatio(st.required(p), studsTo(points[p], perHalf));
+            if (rp > worst || Double.isNaN(rp)) {
+                worst = rp;
+                gov = p;
+                if (Double.isNaN(rp)) {
+                    break;
+                }
+            }
+        }
+        if (calc != null) {
+            calc.heading("Studs at point loads: between each point load and the nearer support (I8.2c)");
+            Calc.branch(calc, perHalf + " studs per half span, spaced uniformly over each half span", STUD_RULE);
+            boolean lrfd = criteria.method() == DesignMethod.LRFD;
+            for (int p = 0; p < points.length; p++) {
+                double x = points[p];
+                int req = st.required(p);
+                int avail = studsTo(x, perHalf);
+                calc.value("Mu", st.pointMu[p], Quantity.MOMENT, "at point load " + (p + 1) + " of " + points.length + ", "
+                        + st.pointCombo[p].name(), STATICS_GENERAL, Arg.of("x", x, Quantity.SPAN_LENGTH));
+                if (req == Integer.MAX_VALUE) {
+                    Calc.branch(calc, "φMn at full composite action is below Mu → the moment cannot be developed", CLAUSE_I8_2C);
+                } else {
+                    calc.value("n_req", req, Quantity.NUMBER, "least studs k with " + (lrfd ? "φb·Mn" : "Mn/Ωb")
+                            + "(k·Qn) ≥ Mu", CLAUSE_I8_2C, Arg.of(lrfd ? "φb·Mn" : "Mn/Ωb", availableMoment(st.s, req), Quantity.MOMENT));
+                }
+                calc.value("n_p", avail, Quantity.NUMBER, "studs between the nearer support and the point, ⌊n_h·d/(L/2)⌋ with d = min(x, L − x)",
+                        STUD_RULE, Arg.num("n_h", perHalf), Arg.of("x", x, Quantity.SPAN_LENGTH), Arg.of("L", span, Quantity.SPAN_LENGTH));
+                if (req != Integer.MAX_VALUE && avail > 0) {
+                    calc.eq("ratio", "n_req/n_p", CLAUSE_I8_2C, (double) req / avail, Quantity.NUMBER, Arg.num("n_req", req),
+                            Arg.num("n_p", avail));
+                } else {
+                    calc.value("ratio", pointRatio(req, avail), Quantity.NUMBER, req == 0 ? "no studs needed" : "no studs to develop it",
+                            CLAUSE_I8_2C);
+                }
+            }
+            calc.note("point load " + (gov + 1) + " governs", CLAUSE_I8_2C);
+        }
+        int req = st.required(gov);
+        int avail = studsTo(points[gov], perHalf);
+        return new Check("studs at point loads", req == Integer.MAX_VALUE ? Double.POSITIVE_INFINITY : req, avail, worst,
+                st.pointCombo[gov], CLAUSE_I8_2C, Quantity.NUMBER, points[gov], null, Double.NaN, Double.NaN,
+                "point load " + (gov + 1) + " of " + points.length + " from the left governs: studs required over studs between "
+                        + "it and the nearer support");
+    }
+
+    /** Required over available studs: 0 when none are required, ∞ when required ones are missing or cannot do. */
+    private static double pointRatio(int required, int available) {
+        if (required == 0) {
+            return 0;
+        }
+        if (required == Integer.MAX_VALUE || available == 0) {
+            return Double.POSITIVE_INFINITY;
+        }
+        return (double) required / available;
     }
 
     // ---- public API --------------------------------------------------------------------------
@@ -480,12 +918,18 @@ public final class CompositeBeamDesigner {
         if (t.total != null) {
             l.add(t.total);
         }
+        if (t.points != null) {
+            l.add(t.points);
+        }
         return Check.governing(l);
     }
 
     private List<Check> checks(SectionState st, Trial t) {
-        List<Check> out = new ArrayList<>(6);
+        List<Check> out = new ArrayList<>(7);
         out.add(t.moment);
+        if (t.points != null) {
+            out.add(t.points);
+        }
         out.addAll(st.constructionChecks);
         out.add(st.shear);
         if (t.live != null) {
@@ -499,44 +943,71 @@ public final class CompositeBeamDesigner {
 
     private CompositeDesign result(MemberStatus status, SectionState st, int perHalf, Trial t, double itr,
             List<Rejection> rejected, List<CompositeDesign.Alternative> passing, long evaluations) {
-        return new CompositeDesign(status, st.s, perHalf, 2 * perHalf, qn, perHalf * qn, beff, bLeft, bRight, slabWeight,
+        return new CompositeDesign(status, st.s, perHalf, 2 * perHalf, qn, t.sumQn, beff, bLeft, bRight, slabWeight,
                 t.flexure, t.ilb, itr, st.pre, st.camber, st.constructionRatio, checks(st, t), rejected, passing,
                 st.s.weight() * span + 2 * perHalf * criteria.studWeight(), evaluations);
     }
 
     /** The slab, the effective width and the stud strength, recorded once at the head of a sheet. */
     private void recordSlab(Calc calc) {
-        SlabOnDeck slab = beam.slab();
-        calc.heading("Slab, effective width and studs (" + switch (beam.ribs()) {
+        SlabOnDeck slab = member.slab();
+        calc.heading("Slab, effective width and studs (" + switch (member.ribs()) {
             case NONE -> "solid slab";
             case PERPENDICULAR -> "deck ribs perpendicular to the beam: concrete above the deck only, I3.2c(2)";
             case PARALLEL -> "deck ribs parallel to the beam: the ribs' concrete counts, I3.2c(3)";
         } + ")");
-        if (Double.isNaN(beam.slabWeightOverride())) {
+        if (beam != null ? Double.isNaN(beam.slabWeightOverride()) : slabWeight == slab.weight(null)) {
             slab.weight(calc);
         } else {
-            calc.value("w_slab", slabWeight, Quantity.AREA_LOAD, "given by the user", "");
+            calc.value("w_slab", slabWeight, Quantity.AREA_LOAD, beam != null ? "given by the user" : "as given", "");
         }
-        double l = EffectiveWidthI3.side(span, beam.toNeighbourLeft(), beam.toEdgeLeft(), "left", calc);
-        double r = EffectiveWidthI3.side(span, beam.toNeighbourRight(), beam.toEdgeRight(), "right", calc);
+        double l = EffectiveWidthI3.side(span, member.toNeighbourLeft(), member.toEdgeLeft(), "left", calc);
+        double r = EffectiveWidthI3.side(span, member.toNeighbourRight(), member.toEdgeRight(), "right", calc);
         EffectiveWidthI3.total(l, r, calc);
-        Studs st = beam.studs();
+        Studs st = member.studs();
         StudStrengthI8.ec(slab.density(), slab.fc(), calc);
         double asa = StudStrengthI8.asa(st.diameter(), calc);
-        StudStrengthI8.Factors f = StudStrengthI8.factors(beam.ribs(), st.perRib(), st.position(), slab.wrOverHr(), calc);
+        StudStrengthI8.Factors f = StudStrengthI8.factors(member.ribs(), st.perRib(), st.position(), slab.wrOverHr(), calc);
         StudStrengthI8.qn(asa, slab.fc(), ec, f, st.fu(), calc);
         StudStrengthI8.minSpacing(st.diameter(), calc);
         StudStrengthI8.maxSpacing(slab.thickness(), calc);
-        for (String p : StudStrengthI8.deckLimits(beam.ribs(), slab.hr(), slab.wr(), st.diameter(), slab.topping(), Double.NaN)) {
+        for (String p : StudStrengthI8.deckLimits(member.ribs(), slab.hr(), slab.wr(), st.diameter(), slab.topping(), Double.NaN)) {
             calc.note("outside the limits: " + p, "");
         }
-        calc.value("w_D", wSlab + wSdl, Quantity.LINE_LOAD, "slab and superimposed dead load (own weight added per section)", "",
-                Arg.of("w_L", wLive, Quantity.LINE_LOAD), Arg.of("w_CL", wConstructionLive, Quantity.LINE_LOAD));
+        if (uniform) {
+            calc.value("w_D", wSlab + wSdl, Quantity.LINE_LOAD, "slab and superimposed dead load (own weight added per section)", "",
+                    Arg.of("w_L", wLive, Quantity.LINE_LOAD), Arg.of("w_CL", wConstructionLive, Quantity.LINE_LOAD));
+        } else {
+            calc.heading("Loads (service, own weight added per section)");
+            recordLoads(calc, "wet (D; unshored: on the bare steel)", member.wet());
+            if (!criteria.shored()) {
+                recordLoads(calc, "construction live (L on the bare steel)", member.construction());
+            }
+            BeamLoads comp = member.composite();
+            for (LoadCase c : LoadCase.values()) {
+                recordLoads(calc, c.label() + " (" + c.symbol() + ") on the composite section", comp.of(c).loads());
+                if (comp.separateDeflectionLoads() && c != LoadCase.D) {
+                    recordLoads(calc, c.label() + " (" + c.symbol() + ") for deflection, unreduced", comp.forDeflection(c).loads());
+                }
+            }
+        }
+    }
+
+    private static void recordLoads(Calc calc, String group, List<SpanLoad> loads) {
+        for (SpanLoad l : loads) {
+            if (l instanceof PointLoad p) {
+                calc.value("P", p.force(), Quantity.FORCE, group + ": point load", "", Arg.of("x", p.position(), Quantity.SPAN_LENGTH));
+            } else if (l instanceof DistributedLoad d) {
+                calc.value("w", d.wStart(), Quantity.LINE_LOAD, group + ": line load, w at x1 to w2 at x2", "",
+                        Arg.of("x1", d.start(), Quantity.SPAN_LENGTH), Arg.of("w2", d.wEnd(), Quantity.LINE_LOAD),
+                        Arg.of("x2", d.end(), Quantity.SPAN_LENGTH));
+            }
+        }
     }
 
     /** The detailing limits of I3.2c(1) the slab and studs break (empty when none). */
     public List<String> deckProblems() {
-        SlabOnDeck slab = beam.slab();
-        return StudStrengthI8.deckLimits(beam.ribs(), slab.hr(), slab.wr(), beam.studs().diameter(), slab.topping(), Double.NaN);
+        SlabOnDeck slab = member.slab();
+        return StudStrengthI8.deckLimits(member.ribs(), slab.hr(), slab.wr(), member.studs().diameter(), slab.topping(), Double.NaN);
     }
 }

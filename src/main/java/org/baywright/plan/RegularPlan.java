@@ -130,6 +130,30 @@ public final class RegularPlan {
         return new Plan(spec.name(), spec.units(), DesignSettings.defaults(), grid, levels, floors, columns);
     }
 
+    /**
+     * The plan with the slab {@code slab} described on every deck of its floors (not its roofs, whose deck
+     * carries no concrete) and those floors working with it as {@code mode} says, unshored, 20 psf
+     * construction live load. Their area loads' dead load becomes {@code otherDead} (Pa): the slab's own weight
+     * now comes from its description.
+     */
+    public static Plan withSlab(Plan plan, Slab slab, CompositeMode mode, double otherDead) {
+        List<Floor> floors = new ArrayList<>();
+        for (Floor f : plan.floors()) {
+            if (f.roof()) {
+                floors.add(f);
+                continue;
+            }
+            List<Deck> decks = f.decks().stream().map(d -> d.withSlab(slab)).toList();
+            List<AreaLoad> loads = f.areaLoads().stream().map(a -> new AreaLoad(a.id(), a.outline(),
+                    new LoadValues(otherDead, a.values().superimposed(), a.values().live(), a.values().roofLive(), a.values().snow(),
+                            a.values().partition()), a.use())).toList();
+            floors.add(new Floor(f.id(), f.name(), f.roof(), f.slabEdge(), decks, f.members(), f.infills(), f.openings(), loads,
+                    f.lineLoads(), f.pointLoads(), CompositeFloor.DEFAULT.withMode(mode)));
+        }
+        return new Plan(plan.name(), plan.units(), plan.settings(), plan.grid(), plan.levels(), floors, plan.columns(),
+                plan.notes());
+    }
+
     private static List<Double> cumulative(List<Double> bays) {
         List<Double> out = new ArrayList<>();
         double x = 0;

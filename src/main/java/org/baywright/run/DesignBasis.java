@@ -52,7 +52,7 @@ import org.baywright.units.UnitSystem;
 public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, String catalogFile, UnitSystem units,
         DeflectionLimits deflection, LiveLoadRules liveLoad, SearchFilter beams, SearchFilter girders,
         List<String> columnSeries, int spliceEvery, Map<String, DeflectionLimits> roofDeflection,
-        double connectionEccentricity) {
+        double connectionEccentricity, org.baywright.plan.CompositeRules composite) {
 
     public DesignBasis {
         columnSeries = List.copyOf(columnSeries);
@@ -79,7 +79,7 @@ public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, Str
                 new DeflectionLimits(s.liveDeflection(), s.totalDeflection()), new LiveLoadRules(s.liveLoadReduction(), s.partitionAsDead(), s.girderAreaDelivered(),
                         s.deflectionLiveReduced()),
                 filter(s.beamSeries(), s.maxBeamDepth()), filter(s.girderSeries(), s.maxBeamDepth()), s.columnSeries(),
-                s.spliceEvery(), roofDeflection(plan), s.connectionEccentricity());
+                s.spliceEvery(), roofDeflection(plan), s.connectionEccentricity(), s.composite());
     }
 
     /** The deflection limits of the members of every roof layout of a plan, by floor id. */
@@ -166,17 +166,17 @@ public record DesignBasis(DesignMethod method, Steel steel, Catalog catalog, Str
     /** The same basis with another catalog (e.g. one a command line names). */
     public DesignBasis withCatalog(Catalog other) {
         return new DesignBasis(method, steel, other, catalogFile, units, deflection, liveLoad, beams, girders, columnSeries,
-                spliceEvery, roofDeflection, connectionEccentricity);
+                spliceEvery, roofDeflection, connectionEccentricity, composite);
     }
 
     /** What the design of a floor (not roof) layout reads from the basis (besides the catalog). */
     public FloorRules floorRules() {
-        return new FloorRules(method, steel, deflection, beams, girders, liveLoad, units);
+        return new FloorRules(method, steel, deflection, beams, girders, liveLoad, units, composite);
     }
 
     /** What the design of {@code floor} reads from the basis: its own deflection limits (roof rows for a roof). */
     public FloorRules floorRules(Floor floor) {
-        return new FloorRules(method, steel, deflectionOf(floor), beams, girders, liveLoad, units);
+        return new FloorRules(method, steel, deflectionOf(floor), beams, girders, liveLoad, units, composite);
     }
 
     /** The designer of column tiers: the catalog's non-slender shapes of the allowed series. */

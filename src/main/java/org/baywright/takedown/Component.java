@@ -8,8 +8,14 @@ import org.baywright.load.LoadCase;
  * reactions passed on are always unreduced.
  */
 public enum Component {
-    /** Dead and superimposed dead load, with the self-weight of the framing. */
+    /** Dead and superimposed dead load, with the self-weight of the framing (on floors without a slab described). */
     D(LoadCase.D),
+    /**
+     * Dead load in place before the concrete hardens, on a floor whose decks describe their slab: the slab and
+     * deck (worked out from the slab's geometry) and the framing's own weight. Dead load (D) in every
+     * combination; kept apart because an unshored composite member carries it on the bare steel.
+     */
+    D_WET(LoadCase.D),
     /** Ordinary reducible floor live load (L0 ≤ 100 psf), including a partition allowance carried as live. */
     L_ORDINARY(LoadCase.L),
     /**
@@ -36,7 +42,13 @@ public enum Component {
      */
     LR_CONCENTRATED(LoadCase.LR),
     /** Snow. */
-    S(LoadCase.S);
+    S(LoadCase.S),
+    /**
+     * Construction live load on the bare steel while the concrete is placed (ASCE/SEI 37): only for the
+     * construction stage of unshored composite members; in no combination of the finished floor, so it
+     * belongs to no load case and reaches no column.
+     */
+    CONSTRUCTION(null);
 
     private final LoadCase loadCase;
 
@@ -44,7 +56,7 @@ public enum Component {
         this.loadCase = c;
     }
 
-    /** The load case of the combinations this component belongs to. */
+    /** The load case of the combinations this component belongs to (null for {@link #CONSTRUCTION}). */
     public LoadCase loadCase() {
         return loadCase;
     }
@@ -69,7 +81,9 @@ public enum Component {
     public static double[] byCase(double[] components) {
         double[] out = new double[LoadCase.values().length];
         for (Component c : values()) {
-            out[c.loadCase.ordinal()] += components[c.ordinal()];
+            if (c.loadCase != null) {
+                out[c.loadCase.ordinal()] += components[c.ordinal()];
+            }
         }
         return out;
     }

@@ -62,6 +62,10 @@ public record EquilibriumCheck(List<Equilibrium> cases, List<Problem> problems) 
             double area = lv.design().areaLoadAreas().getOrDefault(al.id(), 0.0);
             add(applied, ServiceLoads.split(al.values(), al.use(), partitionAsDead, null), area);
         }
+        // the slabs the decks describe, carried as area loads over their decks
+        for (java.util.Map.Entry<String, double[]> slab : SlabLoads.components(lv.floor()).entrySet()) {
+            add(applied, slab.getValue(), lv.design().areaLoadAreas().getOrDefault(slab.getKey(), 0.0));
+        }
         for (LineLoad ll : lv.floor().lineLoads()) {
             double len = 0;
             for (int k = 0; k + 1 < ll.path().size(); k++) {

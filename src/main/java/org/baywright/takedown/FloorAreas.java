@@ -22,7 +22,7 @@ public record FloorAreas(FloorTributary tributary, List<Problem> problems) {
      * problems' quantities in {@code units}.
      */
     public static FloorAreas of(FloorInput in, org.baywright.units.UnitSystem units) {
-        FloorTributary trib = TributaryAnalysis.compute(in.floor(), in.members(), Takedown.GRID, units);
+        FloorTributary trib = TributaryAnalysis.compute(in.designFloor(), in.members(), Takedown.GRID, units);
         List<Problem> problems = new ArrayList<>();
         for (GeometryProblem g : trib.problems()) {
             problems.add(new Problem(Problem.Severity.ERROR, g.kind(), "floor " + in.floor().id(), g.objectId(), g.message(),

@@ -12,11 +12,16 @@ import org.baywright.analysis.SpanLoad;
 import org.baywright.catalog.Section;
 import org.baywright.design.BeamCriteria;
 import org.baywright.design.BeamDesign;
+import org.baywright.design.BeamLoads;
+import org.baywright.design.CompositeCriteria;
+import org.baywright.design.CompositeDesign;
+import org.baywright.design.CompositeMember;
 import org.baywright.design.MemberStatus;
 import org.baywright.geometry.FloorTributary;
 import org.baywright.geometry.MemberTributary;
 import org.baywright.geometry.TributaryAnalysis;
 import org.baywright.load.LoadCase;
+import org.baywright.plan.CompositeMode;
 import org.baywright.plan.Deck;
 import org.baywright.plan.Floor;
 import org.baywright.plan.Member;
@@ -50,6 +55,8 @@ public final class FloorDesigner {
     private final FloorInput in;
     private final Floor floor;
     private final FloorTributary trib;
+    /** The components of the slab area loads, by id ({@link SlabLoads}). */
+    private final Map<String, double[]> slabs;
     private final FloorRules rules;
     private final Searches searches;
     private final Map<String, List<Incoming>> incoming = new HashMap<>();
@@ -64,7 +71,8 @@ public final class FloorDesigner {
 
     private FloorDesigner(FloorInput in, FloorTributary trib, FloorRules rules, Searches searches) {
         this.in = in;
-        this.floor = in.floor();
+        this.floor = in.designFloor();
+        this.slabs = SlabLoads.components(in.floor());
         this.trib = trib;
         this.rules = rules;
         this.searches = searches;
@@ -109,17 +117,29 @@ public final class FloorDesigner {
         }
         double span = m.length();
         MemberLoads loads = MemberLoads.of(m, floor, trib, incoming.getOrDefault(m.id(), List.of()),
-                rules.liveLoad().partitionAsDead());
+                rules.liveLoad().partitionAsDead(), slabs);
         MemberReduction reduction = MemberReduction.of(loads, reductionArea(m, loads), kll(m), rules.liveLoad().reduce());
         BeamCriteria criteria = new BeamCriteria(rules.method(), rules.steel(), loads.bracing(m.kind()), rules.deflection(), true);
-        Searches.Sized sized = size(m, reduction, loads, criteria);
+        CompositeGeometry geometry = floor.composite().composite(m) ? CompositeGeometry.of(floor, in.members(), m) : null;
+        Searches.Sized sized = size(m, reduction, loads, criteria, geometry != null);
         BeamDesign d = sized.design();
+        CompositeResult composite = null;
+        if (geometry != null) {
+            composite = composite(m, geometry, loads, reduction, d);
+            CompositeDesign cd = composite.design();
+            d = new BeamDesign(cd.status(), cd.section(), cd.checks(), cd.rejected(), cd.alternatives().size());
+        } else if (m.composite().orElse(false) && floor.composite().mode() != CompositeMode.NON_COMPOSITE) {
+            problems.add(new Problem(Problem.Severity.WARNING, "no-slab", "floor " + floor.id(), m.id(), "member " + m.id()
+                    + " is marked composite but no deck beside it describes a slab; it was designed as bare steel",
+                    List.of(m.start(), m.end())));
+        }
         MemberLoads.Reactions rx = loads.reactions(span, d.section());
         passThrough(m, rx, 0, span);
         MemberTributary mt = trib.members().get(m.id());
         MemberResult r = new MemberResult(m.id(), floor.id(), m.kind(), m.start(), m.end(), span, d.status(), d,
                 loads.ownArea(), reduction.area(), reduction.kll(), reduction.ordinaryLive(), reduction.roofLive(), rx.start(), rx.end(),
-                ends.start().describe(), ends.end().describe(), mt == null ? List.of() : mt.polygons(), sized.loads(), criteria);
+                ends.start().describe(), ends.end().describe(), mt == null ? List.of() : mt.polygons(), sized.loads(), criteria,
+                composite);
         return new Designed(r, new Handoff(loads.l0(), loads.startShare(), loads.deliveredArea()));
     }
 
@@ -134,10 +154,10 @@ public final class FloorDesigner {
         double a = ends.free() == 0 ? ends.overAt() : 0;
         double b = ends.free() == 0 ? span : ends.overAt();
         MemberLoads loads = MemberLoads.of(m, floor, trib, incoming.getOrDefault(m.id(), List.of()),
-                rules.liveLoad().partitionAsDead(), a, b);
+                rules.liveLoad().partitionAsDead(), slabs, a, b);
         MemberReduction reduction = MemberReduction.of(loads, reductionArea(m, loads), 1, rules.liveLoad().reduce());
         BeamCriteria criteria = new BeamCriteria(rules.method(), rules.steel(), loads.bracing(m.kind()), rules.deflection(), true);
-        Searches.Sized sized = size(m, reduction, loads, criteria, a, b);
+        Searches.Sized sized = size(m, reduction, loads, criteria, a, b, false);
         BeamDesign d = sized.design();
         MemberLoads.Reactions rx = loads.reactions(span, d.section(), a, b);
         passThrough(m, rx, a, b);
@@ -163,13 +183,17 @@ public final class FloorDesigner {
         return new Designed(r, new Handoff(loads.l0(), loads.startShare(), loads.deliveredArea()));
     }
 
-    /** The search, or the check of the member's fixed size when the catalog has it; problems for what went wrong. */
-    private Searches.Sized size(Member m, MemberReduction reduction, MemberLoads loads, BeamCriteria criteria) {
-        return size(m, reduction, loads, criteria, 0, m.length());
+    /**
+     * The search, or the check of the member's fixed size when the catalog has it; problems for what went wrong
+     * (none for the bare-steel comparison of a composite member, {@code comparison}).
+     */
+    private Searches.Sized size(Member m, MemberReduction reduction, MemberLoads loads, BeamCriteria criteria, boolean comparison) {
+        return size(m, reduction, loads, criteria, 0, m.length(), comparison);
     }
 
     /** {@link #size(Member, MemberReduction, MemberLoads, BeamCriteria)} on supports at a and b along the member. */
-    private Searches.Sized size(Member m, MemberReduction reduction, MemberLoads loads, BeamCriteria criteria, double a, double b) {
+    private Searches.Sized size(Member m, MemberReduction reduction, MemberLoads loads, BeamCriteria criteria, double a, double b,
+            boolean comparison) {
         double span = m.length();
         Optional<String> fixed = m.fixedSection();
         Optional<Section> fixedSection = fixed.flatMap(searches.catalog()::find);
@@ -181,7 +205,7 @@ public final class FloorDesigner {
         if (fixedSection.isPresent()) {
             sized = searches.check(fixedSection.get(), span, a, b, caseLoads, deflectionLoads, criteria);
         } else {
-            if (fixed.isPresent()) {
+            if (fixed.isPresent() && !comparison) {
                 problems.add(new Problem(Problem.Severity.ERROR, "unknown-section", "floor " + floor.id(), m.id(),
                         "member " + m.id() + ": section " + fixed.get() + " is not in the catalog " + searches.catalog().name()
                                 + "; the member was sized instead", List.of(m.start(), m.end())));
@@ -190,7 +214,7 @@ public final class FloorDesigner {
                     m.kind() == MemberKind.GIRDER ? rules.girders() : rules.beams());
         }
         BeamDesign d = sized.design();
-        if (d.status() == MemberStatus.OVERSTRESSED) {
+        if (d.status() == MemberStatus.OVERSTRESSED && !comparison) {
             problems.add(new Problem(Problem.Severity.ERROR, "overstressed", "floor " + floor.id(), m.id(),
                     "member " + m.id() + (d.section() == null ? ": no section is allowed by the filters"
                             : ": " + (fixed.isPresent() ? "the fixed size " : "no section passes; closest ")
@@ -198,6 +222,56 @@ public final class FloorDesigner {
                     List.of(m.start(), m.end())));
         }
         return sized;
+    }
+
+    /**
+     * The composite design of a simple-span member acting with the slab of the deck beside it (AISC 360-16
+     * Chapter I): the slab's weight and the framing's own weight (D_WET) on the bare steel while the concrete
+     * hardens, with the construction live load, unless the floor is shored; every other load on the composite
+     * section; the effective width from the plan's geometry ({@link CompositeGeometry}). A fixed section is
+     * kept (its studs searched unless fixed too).
+     */
+    private CompositeResult composite(Member m, CompositeGeometry g, MemberLoads loads, MemberReduction reduction, BeamDesign bare) {
+        double span = m.length();
+        org.baywright.plan.Slab slab = g.deck().slab();
+        Map<LoadCase, List<SpanLoad>> caseLoads = reduction.applyComposite(loads);
+        Map<LoadCase, List<SpanLoad>> deflectionLoads = rules.liveLoad().deflectionUnreduced()
+                ? MemberReduction.none(reduction).applyComposite(loads) : null;
+        BeamLoads bl = BeamLoads.of(span, caseLoads);
+        if (deflectionLoads != null) {
+            bl = bl.withDeflectionLoads(deflectionLoads);
+        }
+        boolean shored = floor.composite().shored();
+        CompositeMember member = new CompositeMember(span, g.ribs(), g.neighbourLeft(), g.neighbourRight(), g.edgeLeft(),
+                g.edgeRight(), SlabDesign.slabOnDeck(slab), SlabDesign.studs(slab), SlabDesign.weight(slab),
+                loads.byComponent().get(Component.D_WET.ordinal()), loads.byComponent().get(Component.CONSTRUCTION.ordinal()), bl,
+                loads.bracing(m.kind()));
+        CompositeCriteria cc = rules.compositeCriteria(shored, loads.bracing(m.kind()));
+        Optional<String> fixed = m.fixedSection();
+        Section fixedSection = fixed.flatMap(searches.catalog()::find).orElse(null);
+        int fixedStuds = fixedSection != null && m.fixedStuds().isPresent() ? m.fixedStuds().getAsInt() : -1;
+        Searches.CompositeSized cs = searches.composite(member, caseLoads, deflectionLoads, cc,
+                m.kind() == MemberKind.GIRDER ? rules.girders() : rules.beams(), fixedSection, fixedStuds);
+        CompositeDesign cd = cs.design();
+        if (fixed.isPresent() && fixedSection == null) {
+            problems.add(new Problem(Problem.Severity.ERROR, "unknown-section", "floor " + floor.id(), m.id(),
+                    "member " + m.id() + ": section " + fixed.get() + " is not in the catalog " + searches.catalog().name()
+                            + "; the member was sized instead", List.of(m.start(), m.end())));
+        }
+        if (cd.status() == MemberStatus.OVERSTRESSED) {
+            problems.add(new Problem(Problem.Severity.ERROR, "overstressed", "floor " + floor.id(), m.id(),
+                    "member " + m.id() + " (composite)" + (cd.section() == null ? ": no section is allowed by the filters"
+                            : ": " + (fixedSection != null ? "the fixed size " : "no section passes; closest ")
+                                    + cd.section().designation() + " with " + cd.studs() + " studs at ratio "
+                                    + String.format(Locale.ROOT, "%.2f", cd.governing() == null ? Double.NaN : cd.governing().ratio())),
+                    List.of(m.start(), m.end())));
+        }
+        String ribs = switch (g.ribs()) {
+            case PERPENDICULAR -> "perpendicular";
+            case PARALLEL -> "parallel";
+            case NONE -> "solid slab";
+        };
+        return new CompositeResult(cd, cs.designer(), bare, ribs, shored, g.deck().id());
     }
 
     /** Passes a member's reactions to what supports each end, with the deck area and live intensities behind them. */

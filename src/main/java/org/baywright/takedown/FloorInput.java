@@ -53,6 +53,14 @@ public record FloorInput(Floor floor, List<Member> members, List<Problem> leftOu
         return new FloorInput(floor, out, left, columns);
     }
 
+    /**
+     * The layout the design reads: as drawn, with the weight of each slab a deck describes as an area load over
+     * that deck ({@link SlabLoads}).
+     */
+    public Floor designFloor() {
+        return SlabLoads.withSlabs(floor);
+    }
+
     /** The members by id (of two with the same id, the later). */
     public Map<String, Member> byId() {
         Map<String, Member> out = new HashMap<>();
@@ -78,11 +86,11 @@ public record FloorInput(Floor floor, List<Member> members, List<Problem> leftOu
     public Object key(FloorRules rules) {
         Floor f = floor;
         return new Key(f.id(), f.name(), f.roof(), f.slabEdge(), f.decks(), members, leftOut, f.openings(), f.areaLoads(),
-                f.lineLoads(), f.pointLoads(), columns, rules);
+                f.lineLoads(), f.pointLoads(), columns, rules, f.composite());
     }
 
     private record Key(String id, String name, boolean roof, Polygon slabEdge, List<Deck> decks, List<Member> members,
             List<Problem> leftOut, List<Opening> openings, List<AreaLoad> areaLoads, List<LineLoad> lineLoads,
-            List<PointLoadItem> pointLoads, List<Column> columns, FloorRules rules) {
+            List<PointLoadItem> pointLoads, List<Column> columns, FloorRules rules, org.baywright.plan.CompositeFloor composite) {
     }
 }

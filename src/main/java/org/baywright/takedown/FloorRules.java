@@ -15,7 +15,27 @@ import org.baywright.load.LiveLoadRules;
  * @param beams the sections a beam may be
  * @param girders the sections a girder may be
  * @param units the plan's unit system, in which the floor's problems are written (so it is part of the key)
+ * @param composite the plan-wide rules of composite design
  */
 public record FloorRules(DesignMethod method, Steel steel, DeflectionLimits deflection, SearchFilter beams,
-        SearchFilter girders, LiveLoadRules liveLoad, UnitSystem units) {
+        SearchFilter girders, LiveLoadRules liveLoad, UnitSystem units, org.baywright.plan.CompositeRules composite) {
+    public FloorRules {
+        composite = composite == null ? org.baywright.plan.CompositeRules.DEFAULT : composite;
+    }
+
+    /** Rules with the default composite rules. */
+    public FloorRules(DesignMethod method, Steel steel, DeflectionLimits deflection, SearchFilter beams, SearchFilter girders,
+            LiveLoadRules liveLoad, UnitSystem units) {
+        this(method, steel, deflection, beams, girders, liveLoad, units, null);
+    }
+
+    /** The criteria of a composite member of a floor shored ({@code shored}) or not, bracing {@code bracing} where the deck does not brace. */
+    public org.baywright.design.CompositeCriteria compositeCriteria(boolean shored, org.baywright.design.Bracing bracing) {
+        org.baywright.design.CamberRule def = org.baywright.design.CamberRule.defaults();
+        org.baywright.design.CamberRule camber = composite.camber()
+                ? new org.baywright.design.CamberRule(composite.camberShare(), def.increment(), def.minimum(), def.minSpan())
+                : org.baywright.design.CamberRule.none();
+        return new org.baywright.design.CompositeCriteria(method, steel, composite.minDegree(), composite.studWeight(), camber,
+                deflection, shored, bracing, true);
+    }
 }

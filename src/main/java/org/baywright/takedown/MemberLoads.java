@@ -2,6 +2,7 @@ package org.baywright.takedown;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import org.baywright.analysis.DistributedLoad;
 import org.baywright.analysis.OverhangSpan;
 import org.baywright.analysis.PointLoad;
@@ -32,9 +33,11 @@ import org.baywright.plan.PointLoadItem;
  * @param deliveredArea the deck area whose load it receives: its own and what frames into it, m²
  * @param startShare the part of the delivered area that passes on at the start end
  * @param bracePoints positions of the members framing in, as fractions of the span (interior ones only)
+ * @param wetOwnWeight the member's own weight is dead load in place before the concrete hardens
+ *     ({@link Component#D_WET}: a floor whose decks describe their slab), else plain dead load
  */
 record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea, double deliveredArea, double startShare,
-        List<Double> bracePoints) {
+        List<Double> bracePoints, boolean wetOwnWeight) {
     /** A load piece shorter than this along the span (m, a nanometre) has no length and carries nothing. */
     static final double NO_LENGTH = 1e-9;
 
@@ -45,8 +48,9 @@ record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea
     }
 
     /** Assembles the loads of member {@code m} of {@code floor}. */
-    static MemberLoads of(Member m, Floor floor, FloorTributary trib, List<Incoming> incoming, boolean partitionAsDead) {
-        return of(m, floor, trib, incoming, partitionAsDead, 0, m.length());
+    static MemberLoads of(Member m, Floor floor, FloorTributary trib, List<Incoming> incoming, boolean partitionAsDead,
+            Map<String, double[]> slabs) {
+        return of(m, floor, trib, incoming, partitionAsDead, slabs, 0, m.length());
     }
 
     /**
@@ -55,7 +59,7 @@ record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea
      * follows the statics of the member on those supports.
      */
     static MemberLoads of(Member m, Floor floor, FloorTributary trib, List<Incoming> incoming, boolean partitionAsDead,
-            double a, double b) {
+            Map<String, double[]> slabs, double a, double b) {
         double span = m.length();
         List<List<SpanLoad>> comp = new ArrayList<>();
         for (int c = 0; c < NC; c++) {
@@ -66,7 +70,7 @@ record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea
         MemberTributary mt = trib.members().get(m.id());
         double own = mt == null ? 0 : mt.area();
         if (mt != null) {
-            deck(mt, floor, span, partitionAsDead, comp, areaFlow, l0);
+            deck(mt, floor, span, partitionAsDead, slabs, comp, areaFlow, l0);
         }
         lineLoads(m, floor, trib, span, partitionAsDead, comp);
         pointLoads(m, floor, trib, span, partitionAsDead, comp);
@@ -96,12 +100,12 @@ record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea
             // an overhanging member: the area goes to its two supports by the lever rule (kept within [0, 1])
             share = at > 0 ? Math.max(0, Math.min(1, OverhangSpan.of(span, a, b, areaFlow).reactionA() / at)) : 0.5;
         }
-        return new MemberLoads(comp, l0, own, at, share, bracePoints);
+        return new MemberLoads(comp, l0, own, at, share, bracePoints, !slabs.isEmpty());
     }
 
     /** The deck: its width profile into the area flow, each area load through its widths by component. */
-    private static void deck(MemberTributary mt, Floor floor, double span, boolean partitionAsDead, List<List<SpanLoad>> comp,
-            List<SpanLoad> areaFlow, double[] l0) {
+    private static void deck(MemberTributary mt, Floor floor, double span, boolean partitionAsDead, Map<String, double[]> slabs,
+            List<List<SpanLoad>> comp, List<SpanLoad> areaFlow, double[] l0) {
         for (WidthSegment w : mt.widths()) {
             if (clamp(w.s1(), span) - clamp(w.s0(), span) <= NO_LENGTH) {
                 continue;
@@ -113,7 +117,8 @@ record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea
             if (segs == null || segs.isEmpty()) {
                 continue;
             }
-            double[] q = ServiceLoads.split(al.values(), al.use(), partitionAsDead, l0);
+            double[] slab = slabs.get(al.id());
+            double[] q = slab != null ? slab : ServiceLoads.split(al.values(), al.use(), partitionAsDead, l0);
             for (WidthSegment w : segs) {
                 if (clamp(w.s1(), span) - clamp(w.s0(), span) <= NO_LENGTH) {
                     continue;
@@ -198,8 +203,9 @@ record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea
             r1[c] = s.rightReaction();
         }
         double sw = section == null ? 0 : section.weight() * span / 2;
-        r0[Component.D.ordinal()] += sw;
-        r1[Component.D.ordinal()] += sw;
+        int own = wetOwnWeight ? Component.D_WET.ordinal() : Component.D.ordinal();
+        r0[own] += sw;
+        r1[own] += sw;
         return new Reactions(r0, r1);
     }
 
@@ -212,7 +218,7 @@ record MemberLoads(List<List<SpanLoad>> byComponent, double[] l0, double ownArea
         double[] r1 = new double[NC];
         for (int c = 0; c < NC; c++) {
             List<SpanLoad> l = new ArrayList<>(byComponent.get(c));
-            if (c == Component.D.ordinal() && section != null) {
+            if (c == (wetOwnWeight ? Component.D_WET : Component.D).ordinal() && section != null) {
                 l.add(DistributedLoad.full(span, section.weight()));
             }
             if (l.isEmpty()) {

@@ -47,8 +47,24 @@ record MemberReduction(double area, double kll, double[] factor) {
 
     /** The member's service loads by load case, each component scaled by its factor. */
     Map<LoadCase, List<SpanLoad>> apply(MemberLoads loads) {
+        return apply(loads, false);
+    }
+
+    /**
+     * The loads of the finished floor acting on a composite section: as {@link #apply(MemberLoads)} without the
+     * dead load in place before the concrete hardens ({@link Component#D_WET}), which an unshored member
+     * carries on the bare steel.
+     */
+    Map<LoadCase, List<SpanLoad>> applyComposite(MemberLoads loads) {
+        return apply(loads, true);
+    }
+
+    private Map<LoadCase, List<SpanLoad>> apply(MemberLoads loads, boolean withoutWet) {
         Map<LoadCase, List<SpanLoad>> caseLoads = new EnumMap<>(LoadCase.class);
         for (Component c : Component.values()) {
+            if (c.loadCase() == null || withoutWet && c == Component.D_WET) {
+                continue;
+            }
             List<SpanLoad> list = caseLoads.computeIfAbsent(c.loadCase(), k -> new ArrayList<>());
             double f = factor[c.ordinal()];
             for (SpanLoad l : loads.byComponent().get(c.ordinal())) {

@@ -32,8 +32,21 @@ public final class Searches {
             SearchFilter filter) {
     }
 
+    /** The inputs that fix a composite search: the member (its loads by case as lists), the criteria, filter and fixed choices. */
+    private record CompositeKey(double span, org.baywright.design.aisc360.DeckRibs ribs, double nl, double nr, double el,
+            double er, org.baywright.design.SlabOnDeck slab, org.baywright.design.Studs studs, double slabWeight,
+            List<SpanLoad> wet, List<SpanLoad> construction, List<List<SpanLoad>> loads, List<List<SpanLoad>> deflectionLoads,
+            org.baywright.design.Bracing bracing, org.baywright.design.CompositeCriteria criteria, SearchFilter filter,
+            Section fixed, int fixedStuds) {
+    }
+
+    /** A composite member's design and the designer that made it (for its calculation sheet). */
+    record CompositeSized(org.baywright.design.CompositeBeamDesigner designer, org.baywright.design.CompositeDesign design) {
+    }
+
     private final Catalog catalog;
     private final Map<Key, Sized> done = new ConcurrentHashMap<>();
+    private final Map<CompositeKey, CompositeSized> compositeDone = new ConcurrentHashMap<>();
 
     /** Searches in {@code catalog}. */
     public Searches(Catalog catalog) {
@@ -83,6 +96,39 @@ public final class Searches {
             Map<LoadCase, List<SpanLoad>> deflectionLoads) {
         BeamLoads bl = a == 0 && b == span ? BeamLoads.of(span, caseLoads) : BeamLoads.overhanging(span, a, b, caseLoads);
         return deflectionLoads == null ? bl : bl.withDeflectionLoads(deflectionLoads);
+    }
+
+    /**
+     * The composite design of a member: the search of (section, studs) of least cost-equivalent weight allowed by
+     * {@code filter}, or with {@code fixed} given, the least studs for that section (or the check of
+     * {@code fixedStuds} studs on the whole member when ≥ 0).
+     */
+    CompositeSized composite(org.baywright.design.CompositeMember member, Map<LoadCase, List<SpanLoad>> caseLoads,
+            Map<LoadCase, List<SpanLoad>> deflectionLoads, org.baywright.design.CompositeCriteria criteria, SearchFilter filter,
+            Section fixed, int fixedStuds) {
+        CompositeKey key = new CompositeKey(member.span(), member.ribs(), member.toNeighbourLeft(), member.toNeighbourRight(),
+                member.toEdgeLeft(), member.toEdgeRight(), member.slab(), member.studs(), member.slabWeight(), member.wet(),
+                member.construction(), byCase(caseLoads), deflectionLoads == null ? null : byCase(deflectionLoads),
+                member.constructionBracing(), criteria, filter, fixed, fixedStuds);
+        CompositeSized sized = compositeDone.get(key);
+        if (sized == null) {
+            org.baywright.design.CompositeBeamDesigner d = new org.baywright.design.CompositeBeamDesigner(member, criteria);
+            org.baywright.design.CompositeDesign cd;
+            if (fixed == null) {
+                cd = d.search(catalog, filter);
+            } else if (fixedStuds >= 0) {
+                cd = d.check(fixed, (fixedStuds + 1) / 2, null);
+            } else {
+                cd = d.search(new Catalog(catalog.name(), catalog.source(), List.of(fixed)), SearchFilter.ALL);
+                if (cd.section() != null && cd.status() == org.baywright.design.MemberStatus.SIZED) {
+                    cd = d.check(fixed, cd.studsPerHalf(), null);
+                }
+            }
+            sized = new CompositeSized(d, cd);
+            CompositeSized raced = compositeDone.putIfAbsent(key, sized);
+            sized = raced != null ? raced : sized;
+        }
+        return sized;
     }
 
     /** The check of a fixed section for these loads (deflection loads as for {@link #search}). */

@@ -116,4 +116,43 @@ class CompositeEditorFxTest {
         undo(robot);
         assertTrue(before.equals(model.plan()), "undone");
     }
+
+    /**
+     * A floor with the typical slab on its decks, switched composite: the run designs its members with the
+     * slab, the canvas labels them in plan notation (size, studs in brackets, camber: common practice) and a
+     * composite member's Properties list its composite design and the bare-steel section for comparison.
+     */
+    @Test
+    void compositeMembersAreLabelledWithStudsAndCamber(FxRobot robot) {
+        String floor = model.currentFloorId();
+        robot.interact(() -> {
+            for (Deck d : model.currentFloor().orElseThrow().decks()) {
+                model.edit(p -> org.baywright.plan.PlanEdits.setSlab(p, floor, d.id(), org.baywright.plan.Slab.typical()), "slab");
+            }
+            model.edit(p -> org.baywright.plan.PlanEdits.setComposite(p, floor, org.baywright.plan.CompositeFloor.DEFAULT),
+                    "composite");
+        });
+        WaitForAsyncUtils.waitForFxEvents();
+        var composite = model.currentMembers().stream().filter(m -> m.isComposite() && !m.section().isEmpty()
+                && m.length() > 8).toList();
+        assertTrue(!composite.isEmpty(), "the run designs members with the slab");
+        var labels = window.canvas().content().stream()
+                .filter(p -> p instanceof org.baywright.report.drawing.Primitive.Text t
+                        && t.layer() == org.baywright.report.drawing.Layer.MEMBER_LABELS)
+                .map(p -> ((org.baywright.report.drawing.Primitive.Text) p).text()).toList();
+        assertTrue(labels.stream().anyMatch(t -> t.matches("\\[?W\\d+X[\\d.]+]? \\(\\d+\\)( c=.+\")?")),
+                "a label in plan notation among " + labels);
+        var m = composite.get(0);
+        robot.interact(() -> model.select(m.id()));
+        WaitForAsyncUtils.waitForFxEvents();
+        assertAll(() -> assertTrue(robot.lookup("#prop-effective-width-b-eff").queryAs(Label.class).getText().contains("left"),
+                        "b_eff by side"),
+                () -> assertEquals(m.studs() + " (" + m.studs() / 2 + " each side of mid-span)",
+                        robot.lookup("#prop-studs").queryAs(Label.class).getText()),
+                () -> assertTrue(robot.lookup("#prop-composite-action").queryAs(Label.class).getText().endsWith("% of full")),
+                () -> assertTrue(robot.lookup("#prop-plastic-neutral-axis").queryAs(Label.class).getText().startsWith("in the ")),
+                () -> assertTrue(robot.lookup("#prop-bare-steel-instead").tryQuery().isPresent()),
+                () -> assertTrue(robot.lookup("#choose-composite").tryQuery().isPresent(), "the member's own choice"),
+                () -> assertTrue(robot.lookup("#edit-fixed-studs").tryQuery().isPresent(), "fixed studs beside the fixed size"));
+    }
 }

@@ -426,7 +426,13 @@ public final class PropertiesViewModel {
 
     private void member(MemberResult m, UnitSystem us, List<Item> out) {
         boolean infill = m.id().contains("/");
+        List<Readouts.Row> composite = Readouts.composite(m, us);
         for (Readouts.Row r : Readouts.member(m, us, method())) {
+            if (r.label().equals("Start reaction, service")) {
+                // the composite design next to its checks, before the reactions
+                composite.forEach(c -> out.add(new Row(c.label(), c.value())));
+                composite = List.of();
+            }
             out.add(new Row(r.label(), r.value()));
             if (r.label().equals("Status") && !infill) {
                 // the size field beside the size, not below the loads and reactions
@@ -435,9 +441,7 @@ public final class PropertiesViewModel {
                 memberComposite(m, out);
             }
         }
-        for (Readouts.Row r : Readouts.composite(m, us)) {
-            out.add(new Row(r.label(), r.value()));
-        }
+        composite.forEach(c -> out.add(new Row(c.label(), c.value())));
         if (m.design() != null && !m.design().rejected().isEmpty()) {
             // the heaviest rejected sections are the informative ones: the last before the one chosen
             var rejected = m.design().rejected();

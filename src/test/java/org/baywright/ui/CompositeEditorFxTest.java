@@ -136,6 +136,13 @@ class CompositeEditorFxTest {
         var composite = model.currentMembers().stream().filter(m -> m.isComposite() && !m.section().isEmpty()
                 && m.length() > 8).toList();
         assertTrue(!composite.isEmpty(), "the run designs members with the slab");
+        // closer in, where a label has room for its studs and camber (zoomed out they are left off, as labels that do not fit)
+        robot.interact(() -> {
+            PlanCanvas canvas = window.canvas();
+            Point2D mid = canvas.transform().toScreen(Units.FT_.toSi(40), Units.FT_.toSi(55));
+            canvas.setTransform(canvas.transform().zoomAt(mid.getX(), mid.getY(), 2.5));
+        });
+        WaitForAsyncUtils.waitForFxEvents();
         var labels = window.canvas().content().stream()
                 .filter(p -> p instanceof org.baywright.report.drawing.Primitive.Text t
                         && t.layer() == org.baywright.report.drawing.Layer.MEMBER_LABELS)

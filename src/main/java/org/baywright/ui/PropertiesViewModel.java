@@ -179,6 +179,10 @@ public final class PropertiesViewModel {
     public boolean setField(Field field, String typed) {
         UnitSystem us = model.units();
         String text = typed == null ? "" : typed.trim();
+        if (text.equals(field.current())) {
+            // the value as shown: nothing to do (read back, a rounded value would move by its rounding)
+            return false;
+        }
         if (field.kind() == FieldKind.LEVEL_NAME || field.kind() == FieldKind.STOREY_HEIGHT) {
             return model.edit(p -> {
                 Level lv = p.levels().stream().filter(l -> l.name().equals(field.owner())).findFirst()

@@ -151,6 +151,27 @@ class PropertiesViewModelTest {
         assertEquals(before, model.plan());
     }
 
+    /** In an SI plan the slab's fields are in mm, kPa, kN/m³ and MPa, and what they show reads back unchanged. */
+    @Test
+    void aSlabInAnSiPlanIsInSiUnits() {
+        assertTrue(model.edit(p -> org.baywright.plan.PlanEdits.withUnits(p, "si"), "SI"));
+        var deck = model.currentFloor().orElseThrow().decks().get(0);
+        model.select(deck.id());
+        if (deck.slab() == null) {
+            assertTrue(vm.setChoice(choice("Slab"), "Concrete on deck"));
+        }
+        var slab = model.currentFloor().orElseThrow().decks().get(0).slab();
+        assertAll(() -> assertEquals("76.2mm", field("Rib height").current()),
+                () -> assertTrue(field("Concrete unit weight").current().endsWith("kN/m³"), field("Concrete unit weight").current()),
+                () -> assertTrue(field("f′c").current().endsWith("MPa"), field("f′c").current()));
+        assertFalse(vm.setField(field("Concrete unit weight"), field("Concrete unit weight").current()), "the same value: no edit");
+        assertEquals(slab, model.currentFloor().orElseThrow().decks().get(0).slab());
+        assertTrue(vm.setField(field("Topping"), "115"), "a bare number is in mm");
+        assertEquals(0.115, model.currentFloor().orElseThrow().decks().get(0).slab().topping(), 1e-12);
+        assertTrue(vm.setField(field("Concrete unit weight"), "18kN/m3"));
+        assertEquals(18_000, model.currentFloor().orElseThrow().decks().get(0).slab().density(), 1e-9);
+    }
+
     /** The floor's composite setting is on the level's Properties: mode, shoring, construction live load. */
     @Test
     void aFloorIsSwitchedCompositeFromTheLevel() {

@@ -1,5 +1,7 @@
 package org.baywright.plan;
 
+import org.baywright.units.Units;
+
 /**
  * The concrete slab on composite steel deck that a deck area carries, with its headed studs. SI:
  * m, Pa (area loads and strengths), N/m³, N.
@@ -22,10 +24,6 @@ package org.baywright.plan;
  */
 public record Slab(double ribHeight, double ribWidth, double ribPitch, double deckWeight, double topping, double density,
         double fc, double studDiameter, double studFu, int studsPerRib, StudPlacement studPosition, double weightOverride) {
-    private static final double IN = 0.0254;
-    private static final double PSF = 4.4482216152605 / (0.3048 * 0.3048);
-    private static final double PCF = 4.4482216152605 / (0.3048 * 0.3048 * 0.3048);
-    private static final double KSI = 4448.2216152605 / (IN * IN);
 
     public Slab {
         if (studPosition == null) {
@@ -39,8 +37,8 @@ public record Slab(double ribHeight, double ribWidth, double ribPitch, double de
      * position. Common practice for an office floor (CHECK-VALUES §10: about 75 psf).
      */
     public static Slab typical() {
-        return new Slab(3 * IN, 6 * IN, 12 * IN, 2.5 * PSF, 4.5 * IN, 145 * PCF, 4 * KSI, 0.75 * IN, 65 * KSI, 1,
-                StudPlacement.WEAK, Double.NaN);
+        return new Slab(Units.IN.toSi(3), Units.IN.toSi(6), Units.IN.toSi(12), Units.PSF.toSi(2.5), Units.IN.toSi(4.5),
+                Units.PCF.toSi(145), Units.KSI.toSi(4), Units.IN.toSi(0.75), Units.KSI.toSi(65), 1, StudPlacement.WEAK, Double.NaN);
     }
 
     /** True when the user gave the slab weight. */

@@ -16,8 +16,9 @@ import org.baywright.units.Units;
 /**
  * A full run of a 20-storey, 8 × 6-bay building (30 × 40 ft bays, beams at 10 ft): wall time per run
  * and members designed per second. A benchmark main, not a test:
- * {@code mvn -B -q -Pbench -Dbench=takedown [-Dbench.args=RUNS]} (default 15 runs). The building is
- * invented for benchmarking.
+ * {@code mvn -B -q -Pbench -Dbench=takedown [-Dbench.args="RUNS [composite]"]} (default 15 runs; with
+ * {@code composite}, the same building with a 3 in deck + 4½ in slab described on its floors, which act
+ * compositely). The building is invented for benchmarking.
  */
 public final class TakedownBenchmark {
     private TakedownBenchmark() {
@@ -34,7 +35,10 @@ public final class TakedownBenchmark {
     }
 
     public static void main(String[] args) {
-        Plan plan = building();
+        boolean composite = args.length > 1 && args[1].equals("composite");
+        Plan plan = composite ? org.baywright.plan.RegularPlan.withSlab(building(), org.baywright.plan.Slab.typical(),
+                org.baywright.plan.CompositeMode.COMPOSITE, 0) : building();
+        System.out.println(composite ? "composite floors" : "bare steel (no slab described)");
         Catalog catalog = CatalogFile.loadDefault();
         int runs = args.length > 0 ? Integer.parseInt(args[0]) : 15;
         List<Double> times = new ArrayList<>();

@@ -2,6 +2,7 @@ package org.baywright.cli;
 
 import static org.junit.jupiter.api.Assertions.assertAll;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -42,7 +43,7 @@ class NewCommandTest {
     void theOfficeDefaultsCarryPartitions(@TempDir Path dir) {
         // ASCE 7-16 §4.3.2: partition allowance 15 psf for offices; Table 4.3-1 office 50 psf; slab 50 psf and
         // services 15 psf (common practice); roof live 20 psf (Table 4.3-1, ordinary flat roof)
-        Plan p = written(dir.resolve("a.bay.json"));
+        Plan p = written(dir.resolve("a.bay.json"), "--composite", "none");
         LoadValues floor = loads(p, false);
         LoadValues roof = loads(p, true);
         assertAll(
@@ -64,9 +65,9 @@ class NewCommandTest {
 
     @Test
     void theRoofTakesItsOwnDeadLoad(@TempDir Path dir) {
-        Plan own = written(dir.resolve("a.bay.json"), "--dead", "56psf", "--roof-dead", "20psf");
-        // an existing command (no --roof-dead) writes the same roof as before: the floor's dead load
-        Plan same = written(dir.resolve("b.bay.json"), "--dead", "56psf");
+        Plan own = written(dir.resolve("a.bay.json"), "--dead", "56psf", "--roof-dead", "20psf", "--composite", "none");
+        // a plan without a slab described (no --roof-dead) writes the same roof as before: the floor's dead load
+        Plan same = written(dir.resolve("b.bay.json"), "--dead", "56psf", "--composite", "none");
         assertAll(
                 () -> assertEquals(20, Units.PSF.fromSi(loads(own, true).dead()), PSF),
                 () -> assertEquals(56, Units.PSF.fromSi(loads(own, false).dead()), PSF),
@@ -101,6 +102,34 @@ class NewCommandTest {
                 () -> assertTrue(out.contains("default 0klf: no cladding load"), out),
                 () -> assertTrue(out.contains("(default 15psf, ASCE 7-16 §4."), out),
                 () -> assertTrue(out.contains("--roof-dead"), out),
-                () -> assertTrue(out.contains("default: the same as --dead"), out));
+                () -> assertTrue(out.contains("or --dead with --composite none"), out),
+                () -> assertTrue(out.contains("--composite=on|off|none") && out.contains("(default on)"), out));
+    }
+
+    @Test
+    void newPlansDescribeTheSlabAndActCompositelyByDefault(@TempDir Path dir) {
+        Plan on = written(dir.resolve("a.bay.json"));
+        Plan off = written(dir.resolve("b.bay.json"), "--composite", "off", "--topping", "3.25in", "--concrete", "110pcf");
+        org.baywright.plan.Floor f = on.floor("typical").orElseThrow();
+        org.baywright.plan.Floor roof = on.floor("roof").orElseThrow();
+        org.baywright.plan.Slab slab = f.decks().get(0).slab();
+        org.baywright.plan.Slab light = off.floor("typical").orElseThrow().decks().get(0).slab();
+        assertAll(
+                () -> assertEquals(org.baywright.plan.CompositeMode.COMPOSITE, f.composite().mode()),
+                () -> assertFalse(f.composite().shored()),
+                // ASCE/SEI 37 construction live load 20 psf (from memory)
+                () -> assertEquals(20, Units.PSF.fromSi(f.composite().constructionLive()), PSF),
+                () -> assertEquals(org.baywright.plan.Slab.typical(), slab),
+                // the slab's weight comes from its description, so the area load carries no other dead load
+                () -> assertEquals(0, loads(on, false).dead(), 0),
+                // 3 in deck + 4½ in normal-weight concrete: about 75 psf (CHECK-VALUES §10; AISC DE I.1 uses 75 psf)
+                () -> assertEquals(75, Units.PSF.fromSi(org.baywright.takedown.SlabDesign.weight(slab)), 0.5),
+                // 3 in deck + 3¼ in lightweight at 110 pcf: about 46 psf (CHECK-VALUES §10)
+                () -> assertEquals(46, Units.PSF.fromSi(org.baywright.takedown.SlabDesign.weight(light)), 0.5),
+                () -> assertEquals(org.baywright.plan.CompositeMode.NON_COMPOSITE,
+                        off.floor("typical").orElseThrow().composite().mode()),
+                // the roof's deck carries no concrete: no slab, its own dead load (50 psf default)
+                () -> assertNull(roof.decks().get(0).slab()),
+                () -> assertEquals(50, Units.PSF.fromSi(loads(on, true).dead()), PSF));
     }
 }

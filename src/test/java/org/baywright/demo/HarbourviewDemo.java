@@ -8,7 +8,10 @@ import java.util.Optional;
 import org.baywright.io.PlanFiles;
 import org.baywright.plan.AreaLoad;
 import org.baywright.plan.Column;
+import org.baywright.plan.CompositeFloor;
+import org.baywright.plan.CompositeMode;
 import org.baywright.plan.Deck;
+import org.baywright.plan.Slab;
 import org.baywright.plan.Floor;
 import org.baywright.plan.Infill;
 import org.baywright.plan.Level;
@@ -55,7 +58,45 @@ public final class HarbourviewDemo {
         return Units.PSF.toSi(v);
     }
 
+    /**
+     * The demo's floor slab: 3 in composite deck (6 in average rib width at 12 in pitch, 2.5 psf) with 3½ in of
+     * normal-weight concrete above it (145 pcf, f′c 4 ksi), ¾ in studs one per rib, weak position: about 63 psf.
+     */
+    public static Slab slab() {
+        return Slab.typical().withTopping(Units.IN.toSi(3.5));
+    }
+
+    /** The demo building: composite floors (the floors act with their slab, unshored; the roof is bare steel). */
     public static Plan plan() {
+        return plan(CompositeMode.COMPOSITE);
+    }
+
+    /**
+     * The demo building with its floors' members acting with the slab as {@code mode} says: composite (the demo)
+     * or non-composite (the same building and slab in bare steel, the comparison example).
+     */
+    public static Plan plan(CompositeMode mode) {
+        Plan bare = barePlan();
+        List<Floor> floors = new ArrayList<>();
+        for (Floor f : bare.floors()) {
+            if (f.roof()) {
+                floors.add(f);
+                continue;
+            }
+            // the slab's weight now comes from its description: the area loads keep no dead load of their own
+            List<AreaLoad> loads = f.areaLoads().stream().map(a -> new AreaLoad(a.id(), a.outline(), new LoadValues(0,
+                    a.values().superimposed(), a.values().live(), a.values().roofLive(), a.values().snow(), a.values().partition()),
+                    a.use())).toList();
+            floors.add(new Floor(f.id(), f.name(), f.roof(), f.slabEdge(), f.decks().stream().map(d -> d.withSlab(slab())).toList(),
+                    f.members(), f.infills(), f.openings(), loads, f.lineLoads(), f.pointLoads(),
+                    CompositeFloor.DEFAULT.withMode(mode)));
+        }
+        return new Plan(mode == CompositeMode.COMPOSITE ? bare.name() : bare.name().replace("(demo)", "(demo, bare steel)"),
+                bare.units(), bare.settings(), bare.grid(), bare.levels(), floors, bare.columns(), bare.notes());
+    }
+
+    /** The building as first drawn: the slab as a 56 psf dead load, no slab described, bare steel. */
+    static Plan barePlan() {
         Plan base = RegularPlan.generate(new RegularPlan.Spec("Harbourview Offices (demo)", "us",
                 Collections.nCopies(4, ft(30)), Collections.nCopies(3, ft(35)), List.of(ft(14), ft(13), ft(13), ft(13)), true,
                 ft(10), new LoadValues(psf(56), psf(10), psf(50), 0, 0, psf(15)),
@@ -157,9 +198,12 @@ public final class HarbourviewDemo {
         return out;
     }
 
+    /** Writes the demo, and beside it in plans/examples/ the same building in bare steel. */
     public static void main(String[] args) throws Exception {
         Path out = Path.of(args.length > 0 ? args[0] : "plans/harbourview-offices.bay.json");
         PlanFiles.write(plan(), out);
-        System.out.println("wrote " + out);
+        Path bare = Path.of(args.length > 1 ? args[1] : "plans/examples/harbourview-offices-bare-steel.bay.json");
+        PlanFiles.write(plan(CompositeMode.NON_COMPOSITE), bare);
+        System.out.println("wrote " + out + " and " + bare);
     }
 }

@@ -192,7 +192,7 @@ class CliContractTest {
                         + "ft, in, m, mm or cm, e.g. 35ft, 30'-6\", 420in, 10.5m, 250mm",
                 wrong + ": error: /settings/colour: unknown field \"colour\" in the settings; the fields of the settings are method, "
                         + "fy, deflection, deflectionLiveLoad, beamSeries, girderSeries, columnSeries, maxBeamDepth, spliceEvery, liveLoadReduction, "
-                        + "partition, girderArea, catalog, connectionEccentricity",
+                        + "partition, girderArea, catalog, connectionEccentricity, composite",
                 wrong + ": error: /units: units: \"yards\" is not a unit system; use \"us\" (feet, kips, psf) or \"si\" (metres, "
                         + "kN, kPa)"),
                 w.errLines().stream().sorted().toList());

@@ -220,7 +220,14 @@ class CalculationPackageTest {
         String floor = MemberGroups.floorOrder(run).get(0);
         MemberResult m = MemberGroups.of(floor, run.takedown().members().get(floor)).get(0).first();
         assertTrue(first.title().contains(m.section()), first.title());
-        String sheet = stripReferences(pages.get(first.page() - 1) + " " + pages.get(first.page()), m.calculation().lines());
+        // the sheet runs to the page before the next entry (a composite member's sheet takes several pages)
+        int next = summary.contents().stream().filter(e -> e.page() > first.page()).mapToInt(PackageSummary.Entry::page).min()
+                .orElse(pages.size());
+        StringBuilder sheetText = new StringBuilder();
+        for (int k = first.page() - 1; k < Math.max(next, first.page() + 1) && k < pages.size(); k++) {
+            sheetText.append(pages.get(k)).append(' ');
+        }
+        String sheet = stripReferences(sheetText.toString(), m.calculation().lines());
         List<Executable> checks = new ArrayList<>();
         for (CalcLine l : m.calculation().lines()) {
             String text = mainText(l, UnitSystem.US);

@@ -23,8 +23,8 @@ import org.baywright.ui.Tool;
 
 /**
  * Takes the composite-floor screenshots in {@code docs/images/} from the real window (under Xvfb, with
- * {@code docs/images/make-editor-shots}): the demo's Level 2 with the typical slab on its decks and the floor
- * composite, first with the deck picked by the Deck tool (its slab in Properties), then with a composite
+ * {@code docs/images/make-editor-shots}): the demo's Level 2 (a composite floor; a plan without a slab is given the
+ * typical one), first with the deck picked by the Deck tool (its slab in Properties), then with a composite
  * beam selected (studs and camber on the canvas, its composite design in Properties).
  */
 public final class CompositeScreenshots {
@@ -49,10 +49,15 @@ public final class CompositeScreenshots {
             stage.show();
             window.open(Path.of("plans/harbourview-offices.bay.json"));
             String floor = model.currentFloorId();
+            // the demo is a composite floor; a plan without a slab gets the typical one
             for (Deck d : model.currentFloor().orElseThrow().decks()) {
-                model.edit(p -> PlanEdits.setSlab(p, floor, d.id(), Slab.typical()), "Slab on " + d.id());
+                if (d.slab() == null) {
+                    model.edit(p -> PlanEdits.setSlab(p, floor, d.id(), Slab.typical()), "Slab on " + d.id());
+                }
             }
-            model.edit(p -> PlanEdits.setComposite(p, floor, CompositeFloor.DEFAULT), "Composite floor");
+            if (model.currentFloor().orElseThrow().composite().mode() != org.baywright.plan.CompositeMode.COMPOSITE) {
+                model.edit(p -> PlanEdits.setComposite(p, floor, CompositeFloor.DEFAULT), "Composite floor");
+            }
             window.canvas().zoomToFit();
 
             // 1. the Deck tool with the main deck picked: its slab in Properties

@@ -18,7 +18,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The composite parameters of a study: composite action on or off, the concrete above the deck and its unit
- * weight, on the demo plan with a slab described on its typical floor (Slab.typical: 3 in deck, 4½ in of
+ * weight, on the demo plan with its slabs taken away and one described on its typical floor only (Slab.typical: 3 in deck, 4½ in of
  * 145 pcf concrete, common practice).
  */
 class CompositeVariationsTest {
@@ -26,11 +26,22 @@ class CompositeVariationsTest {
 
     /** The demo with the typical slab on every deck of its typical floor, that floor bare steel. */
     private static Plan withSlab() {
-        Plan p = DEMO;
+        Plan p = noSlab();
         for (Deck d : DEMO.floor("typical").orElseThrow().decks()) {
             p = PlanEdits.setSlab(p, "typical", d.id(), Slab.typical());
         }
         return PlanEdits.setComposite(p, "typical", org.baywright.plan.CompositeFloor.NONE);
+    }
+
+    /** The demo with no slab described anywhere. */
+    private static Plan noSlab() {
+        Plan p = DEMO;
+        for (Floor f : DEMO.floors()) {
+            for (Deck d : f.decks()) {
+                p = PlanEdits.setSlab(p, f.id(), d.id(), null);
+            }
+        }
+        return p;
     }
 
     private static Sweep sweep(String text) {
@@ -44,11 +55,11 @@ class CompositeVariationsTest {
         Plan off = Variations.apply(on, Setting.composite(false));
         assertAll(() -> assertEquals(CompositeMode.COMPOSITE, on.floor("typical").orElseThrow().composite().mode()),
                 () -> assertEquals(base.floor("roof").orElseThrow(), on.floor("roof").orElseThrow(), "no slab: untouched"),
-                () -> assertEquals(base.floor("level2").orElseThrow(), on.floor("level2").orElseThrow()),
+                () -> assertEquals(base.floor("level2").orElseThrow(), on.floor("level2").orElseThrow(), "no slab: untouched"),
                 () -> assertEquals(CompositeMode.NON_COMPOSITE, off.floor("typical").orElseThrow().composite().mode()),
                 () -> assertEquals(base.floor("typical").orElseThrow().composite().constructionLive(),
                         on.floor("typical").orElseThrow().composite().constructionLive(), "construction live load kept"));
-        var e = assertThrows(IllegalArgumentException.class, () -> Variations.apply(DEMO, Setting.composite(true)));
+        var e = assertThrows(IllegalArgumentException.class, () -> Variations.apply(noSlab(), Setting.composite(true)));
         assertTrue(e.getMessage().startsWith("composite: no deck of the plan carries a slab"), e.getMessage());
     }
 
@@ -69,7 +80,7 @@ class CompositeVariationsTest {
                 () -> assertEquals(base.floor("roof").orElseThrow(), thick.floor("roof").orElseThrow()),
                 () -> assertEquals(57.5, Units.PSF.fromSi(org.baywright.takedown.SlabDesign.weight(l.decks().get(0).slab())), 1e-9),
                 () -> assertEquals(Units.IN.toSi(4.5), l.decks().get(0).slab().topping(), 1e-12, "topping kept"));
-        assertThrows(IllegalArgumentException.class, () -> Variations.apply(DEMO, sweep("topping=5in").values().get(0)));
+        assertThrows(IllegalArgumentException.class, () -> Variations.apply(noSlab(), sweep("topping=5in").values().get(0)));
     }
 
     @Test

@@ -15,13 +15,17 @@ import org.junit.jupiter.api.Test;
 
 /**
  * A composite member as the editor shows it: its plan notation, its Properties rows and its label on the
- * canvas, from a hand-made result ({@link CompositeFixture}: AISC Design Examples V15, Example I.1).
+ * canvas, on the bare-steel demo with one member given a hand-made composite result ({@link CompositeFixture}: AISC Design Examples V15, Example I.1).
  */
 class CompositeReadoutsTest {
     private final EditorModel model = new EditorModel(TaskRunner.direct());
 
+    /** The demo framed in bare steel (its composite twin is the demo itself): every member's own result is bare. */
+    static final java.nio.file.Path BARE = java.nio.file.Path.of("plans/examples/harbourview-offices-bare-steel.bay.json");
+
     CompositeReadoutsTest() {
-        assertTrue(model.open(EditorModelTest.DEMO).opened());
+        assertTrue(model.open(BARE).opened());
+        assertTrue(model.currentMembers().stream().noneMatch(MemberResult::isComposite), "a bare-steel plan");
     }
 
     private MemberResult aBeam() {

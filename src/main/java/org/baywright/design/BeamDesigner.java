@@ -109,12 +109,17 @@ public final class BeamDesigner {
         for (int i = 0; i < cases.length; i++) {
             deflectionSpans[i] = loads.forDeflection(cases[i]);
         }
-        SimpleSpan liveSpan = SimpleSpan.combine(new double[] {0, 1, 1, 1}, deflectionSpans);
         this.totalSpan = SimpleSpan.combine(new double[] {1, 1, 1, 1}, deflectionSpans);
-        org.baywright.analysis.Extreme ld = liveSpan.maxDeflection(1.0);
-        this.liveDeflectionEi = ld.value();
-        this.totalDeflectionEi = totalSpan.maxDeflection(1.0).value();
-        this.liveDeflectionAt = ld.position();
+        // the extremes only where a limit asks for them (the composite designer's construction stage has none)
+        if (criteria.deflection().live() > 0) {
+            org.baywright.analysis.Extreme ld = SimpleSpan.combine(new double[] {0, 1, 1, 1}, deflectionSpans).maxDeflection(1.0);
+            this.liveDeflectionEi = ld.value();
+            this.liveDeflectionAt = ld.position();
+        } else {
+            this.liveDeflectionEi = Double.NaN;
+            this.liveDeflectionAt = Double.NaN;
+        }
+        this.totalDeflectionEi = criteria.deflection().total() > 0 ? totalSpan.maxDeflection(1.0).value() : Double.NaN;
         // the service combinations of the deflection checks: the live cases present (L when none is), and D with them
         Map<LoadCase, Double> live = new EnumMap<>(LoadCase.class);
         for (LoadCase c : new LoadCase[] {LoadCase.L, LoadCase.LR, LoadCase.S}) {
@@ -229,6 +234,14 @@ public final class BeamDesigner {
             out.add(toCheck(t.total, st, w));
         }
         return out;
+    }
+
+    /**
+     * The governing ratio of {@link #check(Section, Calc)}, the same number, without building its check
+     * records: for a caller that needs pass or fail only (the composite search's construction stage).
+     */
+    double governingRatio(Section s) {
+        return evaluate(null, s, strengths(s, criteria.steel()), new Trial(), true).ratio;
     }
 
     // ---- the checks, one function each --------------------------------------------------------

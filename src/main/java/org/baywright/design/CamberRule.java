@@ -42,8 +42,11 @@ public record CamberRule(double fraction, double increment, double minimum, doub
             Calc.branch(calc, "span below the shortest cambered span → no camber", PRACTICE);
             return 0;
         }
-        double raw = Calc.eq(calc, "c_raw", "f_c·Δ_pre", PRACTICE, fraction * deflection, Quantity.SECTION_LENGTH,
-                Arg.num("f_c", fraction), Arg.of("Δ_pre", deflection, Quantity.SECTION_LENGTH));
+        double raw = fraction * deflection;
+        if (calc != null) {
+            calc.eq("c_raw", "f_c·Δ_pre", PRACTICE, raw, Quantity.SECTION_LENGTH, Arg.num("f_c", fraction),
+                    Arg.of("Δ_pre", deflection, Quantity.SECTION_LENGTH));
+        }
         // rounded down to the increment; the small allowance keeps an exact multiple (2.0 in) from dropping a step
         double steps = Math.floor(raw / increment + 1e-9);
         double v = steps * increment;
@@ -51,7 +54,10 @@ public record CamberRule(double fraction, double increment, double minimum, doub
             Calc.branch(calc, "camber below the minimum → no camber", PRACTICE);
             return 0;
         }
-        return Calc.eq(calc, "camber", "n_c·Δc", PRACTICE, v, Quantity.SECTION_LENGTH, Arg.num("n_c", steps),
-                Arg.of("Δc", increment, Quantity.SECTION_LENGTH));
+        if (calc != null) {
+            calc.eq("camber", "n_c·Δc", PRACTICE, v, Quantity.SECTION_LENGTH, Arg.num("n_c", steps),
+                    Arg.of("Δc", increment, Quantity.SECTION_LENGTH));
+        }
+        return v;
     }
 }

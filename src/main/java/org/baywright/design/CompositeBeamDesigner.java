@@ -32,40 +32,66 @@ import org.baywright.load.LoadCase;
 import org.baywright.load.LoadCombination;
 
 /**
- * Designs one simple-span composite beam under uniform loads (AISC 360-16 Chapter I with the bare-steel
- * construction stage of Chapters F and G): checks a section with a number of studs, and searches a
- * catalog for the pair (section, studs) of least cost-equivalent weight, steel weight plus studs × an
- * equivalent weight per stud.
+ * Designs one simple-span composite member, a beam or a girder, under any simple-span gravity loads
+ * (AISC 360-16 Chapter I with the bare-steel construction stage of Chapters F and G): checks a section
+ * with a number of studs, and searches a catalog for the pair (section, studs) of least cost-equivalent
+ * weight, steel weight plus studs × an equivalent weight per stud.
+ *
+ * <p>The input is a {@link CompositeMember}: the wet loads (before the concrete hardens), the
+ * construction live load, and the composite-stage loads by case ({@link BeamLoads}); a
+ * {@link CompositeBeam} (uniform loads from area loads and a tributary width) is converted by
+ * {@link CompositeBeam#member()}. When every load is a full-span uniform one on D and L (no separate
+ * deflection loads) the statics are the closed forms of a uniform load and the sheet prints them
+ * (w·L²/8, w·L/2, 5·w·L⁴/(384·E·I)); otherwise they are those of the simple span under the loads as
+ * listed ({@link SimpleSpan}: the largest moment of each combination and where it acts, the larger
+ * reaction, the largest deflection of each load group), stated as such on the sheet.
  *
  * <p>The checks of a section with n studs per half span:
  * <ul>
- * <li><b>composite flexure</b>: M_u (or M_a) of the strength combinations on D = slab + superimposed
- * dead + own weight and L, against φ_b·M_n (M_n/Ω_b) of the plastic stress distribution with
- * ΣQ_n = n·Q_n (I3.2a, I3.2d(1), I8.2a); in an unshored beam too, the composite section carries the
- * total moment (I3.2a);</li>
+ * <li><b>composite flexure</b>: M_u (or M_a) of the strength combinations of the cases present, D = the
+ * wet loads + superimposed dead + own weight, against φ_b·M_n (M_n/Ω_b) of the plastic stress
+ * distribution with ΣQ_n the studs between the nearer support and the point of maximum moment
+ * (I3.2a, I3.2d(1), I8.2a); in an unshored member too, the composite section carries the total moment
+ * (I3.2a);</li>
+ * <li><b>studs at point loads</b> (when there are point loads; I8.2c): the studs between each point
+ * load and the nearer support must develop the moment there: required, the least k with
+ * φM_n(k·Q_n) ≥ M_u(x_p); available, ⌊n·d_p/(L/2)⌋ with the studs spaced uniformly over each half
+ * span (common practice) and d_p the distance to the nearer support; ratio required/available, the
+ * point of the highest ratio reported;</li>
  * <li><b>construction flexure</b> and <b>construction shear</b> (unshored): the bare steel under the wet
- * slab and its own weight as D and the construction live load as L, by {@link BeamDesigner} (F2/F3 with
- * the deck bracing the top flange when its ribs are perpendicular, the criteria's bracing otherwise;
- * G2.1);</li>
- * <li><b>shear</b>: the steel section alone (I4.2 → G2.1) under the composite-stage combinations;</li>
- * <li><b>live-load deflection</b> on I_LB (Commentary C-I3-1) under L; <b>total-load deflection</b>: the
- * pre-composite deflection less the camber, plus superimposed dead and live load on I_LB (shored:
- * everything on I_LB).</li>
+ * loads and its own weight as D and the construction live load as L, by {@link BeamDesigner} (F2/F3
+ * with the deck bracing the top flange when its ribs are perpendicular, the member's or the criteria's
+ * bracing otherwise; G2.1);</li>
+ * <li><b>shear</b>: the steel section alone (I4.2 → G2.1) under the composite-stage combinations, at the
+ * supports;</li>
+ * <li><b>live-load deflection</b> on I_LB (Commentary C-I3-1) under the live cases (L, Lr, S; the
+ * deflection loads when given); <b>total-load deflection</b>: the pre-composite deflection (wet loads and
+ * own weight on the bare steel's I_x) less the camber, plus the composite-stage loads on I_LB, each
+ * group's maximum along the span (their sum bounds the maximum of the total); shored: everything on
+ * I_LB.</li>
  * </ul>
  * The studs per half span range from the least the rules require (the minimum degree of composite
  * action, and the maximum spacing of I8.2d) to the most that fit (one rib per pitch with the ribs
  * perpendicular, the minimum spacing of I8.2d otherwise) or the number that gives full composite
- * action, whichever is less. Flexural strength and I_LB rise with ΣQ_n, so the least stud count that
- * passes is found by bisection.
+ * action at the point of maximum moment and at every point load, whichever is less. Flexural strength,
+ * the studs reaching each point and I_LB rise with n, so the least stud count that passes is found by
+ * bisection.
  *
  * <p>Ribs per half span (deck perpendicular): the ribs crossing the beam are ⌊L/pitch⌋; each half span
  * counts ⌈⌊L/pitch⌋/2⌉ of them, the rib at midspan (odd count) serving both halves, since it sits at the
- * point of maximum moment. The studs on the beam are reported as 2 × the studs per half span.
+ * point of maximum moment of a symmetric load. The studs on the member are reported as 2 × the studs
+ * per half span.
  *
- * <p>Known limitations: uniform loads on a simple span (a girder's point loads and the stud
- * requirement between a point load and the zero-moment point of I8.2c are not covered); positive
- * moment only; short-term stiffness (no creep or shrinkage); no vibration check; ponding of the wet
- * concrete is not added (the user can add it to the slab weight).
+ * <p>Speed: what does not depend on the section (stud strength, combinations, the statics of each
+ * combination and load group, the construction-stage designer) is built once per designer; what does
+ * not depend on the stud count (moment demands with the own weight, the pre-composite deflection and
+ * camber, the studs each point load needs) once per section; the search builds no check records or
+ * words except for its result and its rejections.
+ *
+ * <p>Known limitations: simple spans with downward loads only; positive moment only; the studs are
+ * spaced uniformly over each half span (no denser groups near point loads); the total-load deflection
+ * adds the maxima of its groups; short-term stiffness (no creep or shrinkage); no vibration check;
+ * ponding of the wet concrete is not added (the user can add it to the wet loads).
  */
 public final class CompositeBeamDesigner {
     private static final String CLAUSE_I3_2A = Aisc360.clause("I3.2a");
@@ -110,6 +136,8 @@ public final class CompositeBeamDesigner {
     private final SimpleSpan[] comboSpans;
     private final double[] comboDead;
     private final SimpleSpan wetSpan;
+    /** E·I × the largest deflection of the wet loads alone (general case, unshored; NaN otherwise). */
+    private final double wetEi;
     private final SimpleSpan allSpan;
     private final Extreme liveEi;
     private final Extreme postEi;
@@ -117,6 +145,12 @@ public final class CompositeBeamDesigner {
     private final double[] points;
     private final String liveNote;
     private final String totalNote;
+
+    /** What R_g and R_p depend on (I8.2a); their words are built once per kind of deck and stud. */
+    private record FactorKey(DeckRibs ribs, int perRib, org.baywright.design.aisc360.StudPosition position, double wrOverHr) {
+    }
+
+    private static final Map<FactorKey, StudStrengthI8.Factors> FACTORS = new ConcurrentHashMap<>();
 
     /** A designer for a uniform-load beam, through {@link CompositeBeam#member()}. */
     public CompositeBeamDesigner(CompositeBeam beam, CompositeCriteria criteria) {
@@ -141,7 +175,8 @@ public final class CompositeBeamDesigner {
         Studs st = m.studs();
         this.ec = StudStrengthI8.ec(slab.density(), slab.fc(), null);
         double asa = StudStrengthI8.asa(st.diameter(), null);
-        StudStrengthI8.Factors f = StudStrengthI8.factors(m.ribs(), st.perRib(), st.position(), slab.wrOverHr(), null);
+        StudStrengthI8.Factors f = FACTORS.computeIfAbsent(new FactorKey(m.ribs(), st.perRib(), st.position(), slab.wrOverHr()),
+                k -> StudStrengthI8.factors(k.ribs(), k.perRib(), k.position(), k.wrOverHr(), null));
         this.qn = StudStrengthI8.qn(asa, slab.fc(), ec, f, st.fu(), null);
         this.sMin = StudStrengthI8.minSpacing(st.diameter(), null);
         this.sMax = StudStrengthI8.maxSpacing(slab.thickness(), null);
@@ -169,6 +204,7 @@ public final class CompositeBeamDesigner {
             this.comboSpans = null;
             this.comboDead = null;
             this.wetSpan = null;
+            this.wetEi = Double.NaN;
             this.allSpan = null;
             this.liveEi = null;
             this.postEi = null;
@@ -183,6 +219,7 @@ public final class CompositeBeamDesigner {
             this.combos = Combinations.gravity(criteria.method(), present);
             LoadCase[] cases = LoadCase.values();
             this.wetSpan = SimpleSpan.of(span, m.wet());
+            this.wetEi = criteria.shored() ? Double.NaN : wetSpan.maxDeflection(1.0).value();
             SimpleSpan[] strength = new SimpleSpan[cases.length];
             SimpleSpan[] deflection = new SimpleSpan[cases.length];
             double[] live = new double[cases.length];
@@ -302,6 +339,14 @@ public final class CompositeBeamDesigner {
         return ec;
     }
 
+    /**
+     * The least studs per half span the rules allow on {@code s}: the minimum degree of composite action
+     * and the maximum spacing of I8.2d (at least one).
+     */
+    public int minStudsPerHalf(Section s) {
+        return new SectionState(s, null).minPerHalf;
+    }
+
     /** The most studs per half span the ribs (or the minimum spacing) allow. */
     public int maxStudsPerHalf() {
         return maxPerHalf;
@@ -334,9 +379,16 @@ public final class CompositeBeamDesigner {
     private final class SectionState {
         final Section s;
         final double w;
-        final double pre;
-        final double preAt;
-        final double camber;
+        /** The pre-composite deflection, where, and the camber: see {@link #pre()} (general loads, no sheet: on demand). */
+        private double pre;
+        private double preAt;
+        private double camber;
+        private boolean preKnown;
+        /**
+         * An upper bound of the pre-composite deflection (general loads, unshored): the maximum of the wet
+         * loads' deflection plus that of the own weight, each on E·I_s, which bounds the maximum of their sum.
+         */
+        final double preBound;
         final double full;
         final int minPerHalf;
         final int hiPerHalf;
@@ -355,28 +407,17 @@ public final class CompositeBeamDesigner {
         List<Check> constructionChecks = List.of();
         double constructionRatio;
         Check shear;
+        /** True once {@link #stages} has run (the construction checks are there). */
+        boolean staged;
 
         SectionState(Section s, Calc calc) {
             this.s = s;
             this.w = criteria.selfWeight() ? s.weight() : 0;
             double[] out = new double[2];
-            if (criteria.shored()) {
-                pre = 0;
-                preAt = span / 2;
-                camber = 0;
-            } else {
-                if (calc != null) {
-                    calc.heading("Deflection of the bare steel under the wet slab and camber");
-                }
-                if (uniform) {
-                    pre = deflection("Δ_pre", wSlab + w, s.props().ix(), "wet slab and steel on the bare steel", calc);
-                    preAt = span / 2;
-                } else {
-                    wetSpan.maxEiDeflectionWithUniform(w, out);
-                    preAt = out[1];
-                    pre = deflection("Δ_pre", out[0], preAt, s.props().ix(), "I_s", "wet loads and steel on the bare steel", calc);
-                }
-                camber = criteria.camber().camber(pre, span, calc);
+            this.preBound = uniform || criteria.shored() ? Double.NaN
+                    : (wetEi + w * 5 * span * span * span * span / 384) / (criteria.steel().e() * s.props().ix());
+            if (uniform || criteria.shored() || calc != null) {
+                computePre(calc);
             }
             // the stud range
             this.full = Math.min(0.85 * concrete.fc() * concrete.ac(), s.props().a() * criteria.steel().fy());
@@ -440,6 +481,50 @@ public final class CompositeBeamDesigner {
             this.limitedByRibs = needed > maxPerHalf;
         }
 
+        /** The pre-composite deflection (0 when shored), computed once. */
+        double pre() {
+            if (!preKnown) {
+                computePre(null);
+            }
+            return pre;
+        }
+
+        /** The camber (0 when shored), with {@link #pre()}. */
+        double camber() {
+            if (!preKnown) {
+                computePre(null);
+            }
+            return camber;
+        }
+
+        /** True when the pre-composite deflection has been computed. */
+        boolean preKnown() {
+            return preKnown;
+        }
+
+        private void computePre(Calc calc) {
+            preKnown = true;
+            if (criteria.shored()) {
+                pre = 0;
+                preAt = span / 2;
+                camber = 0;
+                return;
+            }
+            if (calc != null) {
+                calc.heading("Deflection of the bare steel under the wet slab and camber");
+            }
+            if (uniform) {
+                pre = deflection("Δ_pre", wSlab + w, s.props().ix(), "wet slab and steel on the bare steel", calc);
+                preAt = span / 2;
+            } else {
+                double[] out = new double[2];
+                wetSpan.maxEiDeflectionWithUniform(w, out);
+                preAt = out[1];
+                pre = deflection("Δ_pre", out[0], preAt, s.props().ix(), "I_s", "wet loads and steel on the bare steel", calc);
+            }
+            camber = criteria.camber().camber(pre, span, calc);
+        }
+
         /**
          * The least stud count k (from the support) whose φM_n(k·Q_n) carries the moment at point load
          * {@code p} (I8.2c), or {@link Integer#MAX_VALUE} when even full composite action does not.
@@ -453,8 +538,18 @@ public final class CompositeBeamDesigner {
             return r;
         }
 
+        /**
+         * The search's part of {@link #stages}: the construction stage's governing ratio only (the same
+         * number) and the shear check.
+         */
+        void stageRatios() {
+            constructionRatio = criteria.shored() ? 0 : Math.max(0, construction.governingRatio(s));
+            shear(null);
+        }
+
         /** The construction stage (bare steel, F2/F3 and G2.1 by {@link BeamDesigner}) and the composite-stage shear. */
         void stages(Calc calc) {
+            staged = true;
             if (criteria.shored()) {
                 Calc.branch(calc, "shored: the composite section carries every load; no construction stage, no camber", PRACTICE);
             } else {
@@ -472,7 +567,11 @@ public final class CompositeBeamDesigner {
                 constructionChecks = renamed;
                 constructionRatio = r;
             }
-            // shear on the steel section alone (I4.2 → G2.1)
+            shear(calc);
+        }
+
+        /** Shear on the steel section alone (I4.2 → G2.1) under the composite-stage combinations. */
+        void shear(Calc calc) {
             if (calc != null) {
                 calc.heading("Shear: the steel section alone");
             }
@@ -523,7 +622,14 @@ public final class CompositeBeamDesigner {
             return Integer.MAX_VALUE;
         }
         double n = Math.ceil(count * (span / 2) / d - 1e-6);
-        return n >= Integer.MAX_VALUE ? Integer.MAX_VALUE : Math.max(count, (int) n);
+        if (n >= Integer.MAX_VALUE / 2) {
+            return Integer.MAX_VALUE;
+        }
+        int k = Math.max(count, (int) n);
+        while (studsTo(x, k) < count) { // the rounding of the estimate, exactly as studsTo counts
+            k++;
+        }
+        return k;
     }
 
     /**
@@ -592,12 +698,87 @@ public final class CompositeBeamDesigner {
                 Arg.of("x", x, Quantity.SPAN_LENGTH), Arg.of("E", e, Quantity.STRESS), Arg.of(iName, i, Quantity.INERTIA));
     }
 
-    /** The stud-dependent checks of one section: composite flexure, the two deflections and the studs at point loads. */
-    private record Trial(CompositeFlexureI3.Result flexure, double sumQn, double ilb, Check moment, Check live, Check total,
-            Check points, double ratio) {
+    /**
+     * The stud-dependent checks of one section with one stud count: composite flexure, the studs at point
+     * loads, the two deflections. Plain numbers: the search makes thousands of these and needs only
+     * {@link #ratio}; the {@link Check} records are built on demand, for a result or a rejection.
+     */
+    private final class Trial {
+        final SectionState st;
+        final int perHalf;
+        CompositeFlexureI3.Result flexure;
+        int nm;
+        double sumQn;
+        double ilb;
+        double momentAvail;
+        double momentRatio;
+        /** The governing point load (−1 when none), the studs it needs and has, and the ratio. */
+        int point = -1;
+        int pointRequired;
+        int pointAvailable;
+        double pointRatio;
+        double live = Double.NaN;
+        double liveAllow;
+        double liveAt;
+        double total = Double.NaN;
+        double totalAllow;
+        double totalAt;
+        /** The governing ratio of the checks above. */
+        double ratio;
+
+        Trial(SectionState st, int perHalf) {
+            this.st = st;
+            this.perHalf = perHalf;
+        }
+
+        Check moment() {
+            CompositeFlexureI3.Result r = flexure;
+            String note = r.pna() == CompositeFlexureI3.Pna.SLAB ? "PNA in the slab"
+                    : r.pna() == CompositeFlexureI3.Pna.TOP_FLANGE ? "PNA in the top flange" : "PNA in the web";
+            if (nm != perHalf) {
+                note = note + "; " + nm + " studs between the nearer support and the point of maximum moment";
+            }
+            return new Check("composite flexure", st.mu.value(), momentAvail, momentRatio, st.mu.combination(), CLAUSE_I3_2A,
+                    Quantity.MOMENT, st.muAt, null, 0, Double.NaN, note);
+        }
+
+        Check points() {
+            if (point < 0) {
+                return null;
+            }
+            return new Check("studs at point loads", pointRequired == Integer.MAX_VALUE ? Double.POSITIVE_INFINITY : pointRequired,
+                    pointAvailable, pointRatio, st.pointCombo[point], CLAUSE_I8_2C, Quantity.NUMBER, points[point], null, Double.NaN,
+                    Double.NaN, "point load " + (point + 1) + " of " + points.length + " from the left governs: studs required "
+                            + "over studs between it and the nearer support");
+        }
+
+        Check live() {
+            return Double.isNaN(live) ? null : new Check("live-load deflection", live, liveAllow, live / liveAllow, null,
+                    DeflectionLimits.SOURCE, Quantity.SECTION_LENGTH, liveAt, null, Double.NaN, Double.NaN, liveNote);
+        }
+
+        Check total() {
+            if (Double.isNaN(total)) {
+                return null;
+            }
+            String note = criteria.shored() ? "shored: all loads on I_LB" : "pre-composite less camber, plus SDL and L on I_LB";
+            return new Check("total-load deflection", total, totalAllow, total / totalAllow, null, DeflectionLimits.SOURCE,
+                    Quantity.SECTION_LENGTH, totalAt, null, Double.NaN, Double.NaN, note + ", " + totalNote);
+        }
     }
 
     private Trial trial(SectionState st, int perHalf, Calc calc) {
+        return trial(st, perHalf, calc, false);
+    }
+
+    /**
+     * The checks of {@code st} with {@code perHalf} studs per half span. With {@code search} (no sheet),
+     * the total-load deflection of an unshored member under general loads is left out when even its
+     * upper bound (the bound of the pre-composite deflection, no camber) stays below another check's
+     * ratio: it could not govern, and the search needs only the governing ratio and check.
+     */
+    private Trial trial(SectionState st, int perHalf, Calc calc, boolean search) {
+        Trial t = new Trial(st, perHalf);
         Section s = st.s;
         double fy = criteria.steel().fy();
         int nm = uniform ? perHalf : studsTo(st.muAt, perHalf);
@@ -628,26 +809,22 @@ public final class CompositeBeamDesigner {
             calc.eq("ratio", "M_req/M_avail", CLAUSE_I3_2A, ratio, Quantity.NUMBER, Arg.of("M_req", g.value(), Quantity.MOMENT),
                     Arg.of("M_avail", avail, Quantity.MOMENT));
         }
-        String note = r.pna() == CompositeFlexureI3.Pna.SLAB ? "PNA in the slab"
-                : r.pna() == CompositeFlexureI3.Pna.TOP_FLANGE ? "PNA in the top flange" : "PNA in the web";
-        if (nm != perHalf) {
-            note = note + "; " + nm + " studs between the nearer support and the point of maximum moment";
-        }
-        Check moment = new Check("composite flexure", g.value(), avail, ratio, g.combination(), CLAUSE_I3_2A, Quantity.MOMENT,
-                st.muAt, null, 0, Double.NaN, note);
+        t.flexure = r;
+        t.nm = nm;
+        t.sumQn = sumQn;
+        t.momentAvail = avail;
+        t.momentRatio = ratio;
         double worst = ratio;
-        Check points = null;
-        if (points().length > 0) {
-            points = pointCheck(st, perHalf, calc);
-            worst = Math.max(worst, points.ratio());
+        if (points.length > 0) {
+            pointCheck(t, calc);
+            worst = Math.max(worst, t.pointRatio);
         }
         if (calc != null) {
             calc.heading("Stiffness and deflections");
         }
         double ilb = CompositeStiffness.ilb(s, fy, r, calc);
+        t.ilb = ilb;
         DeflectionLimits lim = criteria.deflection();
-        Check live = null;
-        Check total = null;
         if (lim.live() > 0) {
             double d;
             double at;
@@ -658,15 +835,14 @@ public final class CompositeBeamDesigner {
                 d = deflection("Δ_LL", liveEi.value(), liveEi.position(), ilb, "I_LB", "live loads on I_LB", calc);
                 at = liveEi.position();
             }
-            double allow = span / lim.live();
-            live = new Check("live-load deflection", d, allow, d / allow, null, DeflectionLimits.SOURCE,
-                    Quantity.SECTION_LENGTH, at, null, Double.NaN, Double.NaN, liveNote);
-            worst = Math.max(worst, live.ratio());
+            t.live = d;
+            t.liveAllow = span / lim.live();
+            t.liveAt = at;
+            worst = Math.max(worst, d / t.liveAllow);
         }
         if (lim.total() > 0) {
             double d;
             double at;
-            String note2;
             if (criteria.shored()) {
                 if (uniform) {
                     d = deflection("Δ_TL", wSlab + wSdl + st.w + wLive, ilb, "every load on I_LB (shored)", calc);
@@ -675,7 +851,6 @@ public final class CompositeBeamDesigner {
                     d = deflection("Δ_TL", st.allEi, st.allAt, ilb, "I_LB", "every load and the steel on I_LB (shored)", calc);
                     at = st.allAt;
                 }
-                note2 = "shored: all loads on I_LB";
             } else {
                 double post;
                 if (uniform) {
@@ -687,22 +862,26 @@ public final class CompositeBeamDesigner {
                     at = postEi.position();
                     Calc.branch(calc, "Δ_pre and Δ_post are each the maximum of their loads; their sum bounds the maximum of the total",
                             PRACTICE);
+                    if (search && calc == null && !st.preKnown() && (st.preBound + post) / (span / lim.total()) * (1 + 1e-9) < worst) {
+                        t.ratio = worst;
+                        return t;
+                    }
                 }
-                d = Calc.eq(calc, "Δ_TL", "Δ_pre − camber + Δ_post", PRACTICE, st.pre - st.camber + post,
-                        Quantity.SECTION_LENGTH, Arg.of("Δ_pre", st.pre, Quantity.SECTION_LENGTH),
-                        Arg.of("camber", st.camber, Quantity.SECTION_LENGTH), Arg.of("Δ_post", post, Quantity.SECTION_LENGTH));
-                note2 = "pre-composite less camber, plus SDL and L on I_LB";
+                if (calc == null) {
+                    d = st.pre() - st.camber() + post;
+                } else {
+                    d = calc.eq("Δ_TL", "Δ_pre − camber + Δ_post", PRACTICE, st.pre() - st.camber() + post,
+                            Quantity.SECTION_LENGTH, Arg.of("Δ_pre", st.pre(), Quantity.SECTION_LENGTH),
+                            Arg.of("camber", st.camber(), Quantity.SECTION_LENGTH), Arg.of("Δ_post", post, Quantity.SECTION_LENGTH));
+                }
             }
-            double allow = span / lim.total();
-            total = new Check("total-load deflection", d, allow, d / allow, null, DeflectionLimits.SOURCE,
-                    Quantity.SECTION_LENGTH, at, null, Double.NaN, Double.NaN, note2 + ", " + totalNote);
-            worst = Math.max(worst, total.ratio());
+            t.total = d;
+            t.totalAllow = span / lim.total();
+            t.totalAt = at;
+            worst = Math.max(worst, d / t.totalAllow);
         }
-        return new Trial(r, sumQn, ilb, moment, live, total, points, worst);
-    }
-
-    private double[] points() {
-        return points;
+        t.ratio = worst;
+        return t;
     }
 
     /**
@@ -710,19 +889,18 @@ public final class CompositeBeamDesigner {
      * moment of a simple span) must develop the moment at the point load. For each point load x_p the
      * studs required are the least k with φM_n(k·Q_n) ≥ M_u(x_p); those available, with n_h studs spaced
      * uniformly over each half span, ⌊n_h·d_p/(L/2)⌋, d_p = min(x_p, L − x_p). The ratio is required over
-     * available; the point with the highest ratio governs.
+     * available; the point with the highest ratio governs. Writes the governing point into {@code t}.
      */
-    private Check pointCheck(SectionState st, int perHalf, Calc calc) {
+    private void pointCheck(Trial t, Calc calc) {
+        SectionState st = t.st;
+        int perHalf = t.perHalf;
         int gov = 0;
         double worst = Double.NEGATIVE_INFINITY;
         for (int p = 0; p < points.length; p++) {
             double rp = pointRatio(st.required(p), studsTo(points[p], perHalf));
-            if (rp > worst || Double.isNaN(rp)) {
+            if (rp > worst) {
                 worst = rp;
                 gov = p;
-                if (Double.isNaN(rp)) {
-                    break;
-                }
             }
         }
         if (calc != null) {
@@ -753,12 +931,10 @@ public final class CompositeBeamDesigner {
             }
             calc.note("point load " + (gov + 1) + " governs", CLAUSE_I8_2C);
         }
-        int req = st.required(gov);
-        int avail = studsTo(points[gov], perHalf);
-        return new Check("studs at point loads", req == Integer.MAX_VALUE ? Double.POSITIVE_INFINITY : req, avail, worst,
-                st.pointCombo[gov], CLAUSE_I8_2C, Quantity.NUMBER, points[gov], null, Double.NaN, Double.NaN,
-                "point load " + (gov + 1) + " of " + points.length + " from the left governs: studs required over studs between "
-                        + "it and the nearer support");
+        t.point = gov;
+        t.pointRequired = st.required(gov);
+        t.pointAvailable = studsTo(points[gov], perHalf);
+        t.pointRatio = worst;
     }
 
     /** Required over available studs: 0 when none are required, ∞ when required ones are missing or cannot do. */
@@ -835,7 +1011,7 @@ public final class CompositeBeamDesigner {
             }
             int hi = Math.max(st.hiPerHalf, st.minPerHalf);
             evaluations++;
-            Trial top = trial(st, hi, null);
+            Trial top = trial(st, hi, null, true);
             if (!Check.passes(top.ratio)) {
                 Check g = governingOf(top);
                 String why = st.limitedByRibs ? "with " + hi + " studs per half span, the most that fit"
@@ -851,7 +1027,10 @@ public final class CompositeBeamDesigner {
                 continue;
             }
             // the stud count does not change these: checked only for a section the composite checks let through
-            st.stages(null);
+            st.stageRatios();
+            if (st.constructionRatio > 1 + Check.RATIO_TOLERANCE) {
+                st.stages(null);
+            }
             Check fail = st.constructionRatio > 1 + Check.RATIO_TOLERANCE ? Check.governing(st.constructionChecks)
                     : !st.shear.passes() ? st.shear : null;
             if (fail != null) {
@@ -869,13 +1048,14 @@ public final class CompositeBeamDesigner {
             while (lo < upper) {
                 int mid = (lo + upper) >>> 1;
                 evaluations++;
-                if (Check.passes(trial(st, mid, null).ratio)) {
+                if (Check.passes(trial(st, mid, null, true).ratio)) {
                     upper = mid;
                 } else {
                     lo = mid + 1;
                 }
             }
-            double cost = steel + 2 * lo * criteria.studWeight();
+            double cost = steel + 2 * lo * criteria.studWeight()
+                    + (criteria.camberAllowance() > 0 && st.camber() > 0 ? criteria.camberAllowance() : 0);
             passing.add(new CompositeDesign.Alternative(s, 2 * lo, cost));
             if (cost < bestCost) {
                 bestCost = cost;
@@ -897,6 +1077,9 @@ public final class CompositeBeamDesigner {
         }
         // only the sections lighter than the chosen one count as rejected on the way
         double chosenWeight = best.s.weight();
+        if (!best.staged) {
+            best.stages(null);
+        }
         rejected.removeIf(r -> r.section().weight() > chosenWeight);
         Trial t = trial(best, bestN, null);
         return result(MemberStatus.SIZED, best, bestN, t,
@@ -910,42 +1093,37 @@ public final class CompositeBeamDesigner {
     }
 
     private static Check governingOf(Trial t) {
-        List<Check> l = new ArrayList<>(3);
-        l.add(t.moment);
-        if (t.live != null) {
-            l.add(t.live);
-        }
-        if (t.total != null) {
-            l.add(t.total);
-        }
-        if (t.points != null) {
-            l.add(t.points);
-        }
+        List<Check> l = new ArrayList<>(4);
+        l.add(t.moment());
+        addIfAny(l, t.live());
+        addIfAny(l, t.total());
+        addIfAny(l, t.points());
         return Check.governing(l);
     }
 
     private List<Check> checks(SectionState st, Trial t) {
         List<Check> out = new ArrayList<>(7);
-        out.add(t.moment);
-        if (t.points != null) {
-            out.add(t.points);
-        }
+        out.add(t.moment());
+        addIfAny(out, t.points());
         out.addAll(st.constructionChecks);
         out.add(st.shear);
-        if (t.live != null) {
-            out.add(t.live);
-        }
-        if (t.total != null) {
-            out.add(t.total);
-        }
+        addIfAny(out, t.live());
+        addIfAny(out, t.total());
         return out;
+    }
+
+    private static void addIfAny(List<Check> l, Check c) {
+        if (c != null) {
+            l.add(c);
+        }
     }
 
     private CompositeDesign result(MemberStatus status, SectionState st, int perHalf, Trial t, double itr,
             List<Rejection> rejected, List<CompositeDesign.Alternative> passing, long evaluations) {
         return new CompositeDesign(status, st.s, perHalf, 2 * perHalf, qn, t.sumQn, beff, bLeft, bRight, slabWeight,
-                t.flexure, t.ilb, itr, st.pre, st.camber, st.constructionRatio, checks(st, t), rejected, passing,
-                st.s.weight() * span + 2 * perHalf * criteria.studWeight(), evaluations);
+                t.flexure, t.ilb, itr, st.pre(), st.camber(), st.constructionRatio, checks(st, t), rejected, passing,
+                st.s.weight() * span + 2 * perHalf * criteria.studWeight()
+                        + (criteria.camberAllowance() > 0 && st.camber() > 0 ? criteria.camberAllowance() : 0), evaluations);
     }
 
     /** The slab, the effective width and the stud strength, recorded once at the head of a sheet. */

@@ -21,9 +21,16 @@ import org.baywright.units.Units;
  *     the ribs perpendicular the deck braces the top flange (Lb = 0).
  * @param selfWeight add the candidate's own weight to the dead load (off only to reproduce published
  *     examples whose dead load includes an assumed beam weight)
+ * @param camberAllowance the steel weight a cambered piece is worth in the cost comparison [N] (default 0)
  */
 public record CompositeCriteria(DesignMethod method, Steel steel, double minDegree, double studWeight, CamberRule camber,
-        DeflectionLimits deflection, boolean shored, Bracing constructionBracing, boolean selfWeight) {
+        DeflectionLimits deflection, boolean shored, Bracing constructionBracing, boolean selfWeight, double camberAllowance) {
+
+    /** Criteria without a camber allowance. */
+    public CompositeCriteria(DesignMethod method, Steel steel, double minDegree, double studWeight, CamberRule camber,
+            DeflectionLimits deflection, boolean shored, Bracing constructionBracing, boolean selfWeight) {
+        this(method, steel, minDegree, studWeight, camber, deflection, shored, constructionBracing, selfWeight, 0);
+    }
 
     public CompositeCriteria {
         Objects.requireNonNull(method, "method");
@@ -33,6 +40,9 @@ public record CompositeCriteria(DesignMethod method, Steel steel, double minDegr
         Objects.requireNonNull(constructionBracing, "constructionBracing");
         if (!(minDegree >= 0 && minDegree <= 1)) {
             throw new IllegalArgumentException("the minimum degree of composite action must lie in [0, 1], got " + minDegree);
+        }
+        if (!(camberAllowance >= 0) || !Double.isFinite(camberAllowance)) {
+            throw new IllegalArgumentException("the equivalent weight of a cambered piece must be ≥ 0, got " + camberAllowance);
         }
         if (!(studWeight >= 0) || !Double.isFinite(studWeight)) {
             throw new IllegalArgumentException("the equivalent weight of a stud must be ≥ 0, got " + studWeight);
@@ -46,34 +56,38 @@ public record CompositeCriteria(DesignMethod method, Steel steel, double minDegr
     }
 
     public CompositeCriteria withMethod(DesignMethod m) {
-        return new CompositeCriteria(m, steel, minDegree, studWeight, camber, deflection, shored, constructionBracing, selfWeight);
+        return new CompositeCriteria(m, steel, minDegree, studWeight, camber, deflection, shored, constructionBracing, selfWeight, camberAllowance);
     }
 
     public CompositeCriteria withMinDegree(double d) {
-        return new CompositeCriteria(method, steel, d, studWeight, camber, deflection, shored, constructionBracing, selfWeight);
+        return new CompositeCriteria(method, steel, d, studWeight, camber, deflection, shored, constructionBracing, selfWeight, camberAllowance);
     }
 
     public CompositeCriteria withStudWeight(double w) {
-        return new CompositeCriteria(method, steel, minDegree, w, camber, deflection, shored, constructionBracing, selfWeight);
+        return new CompositeCriteria(method, steel, minDegree, w, camber, deflection, shored, constructionBracing, selfWeight, camberAllowance);
     }
 
     public CompositeCriteria withCamber(CamberRule c) {
-        return new CompositeCriteria(method, steel, minDegree, studWeight, c, deflection, shored, constructionBracing, selfWeight);
+        return new CompositeCriteria(method, steel, minDegree, studWeight, c, deflection, shored, constructionBracing, selfWeight, camberAllowance);
     }
 
     public CompositeCriteria withDeflection(DeflectionLimits d) {
-        return new CompositeCriteria(method, steel, minDegree, studWeight, camber, d, shored, constructionBracing, selfWeight);
+        return new CompositeCriteria(method, steel, minDegree, studWeight, camber, d, shored, constructionBracing, selfWeight, camberAllowance);
     }
 
     public CompositeCriteria withShored(boolean s) {
-        return new CompositeCriteria(method, steel, minDegree, studWeight, camber, deflection, s, constructionBracing, selfWeight);
+        return new CompositeCriteria(method, steel, minDegree, studWeight, camber, deflection, s, constructionBracing, selfWeight, camberAllowance);
     }
 
     public CompositeCriteria withConstructionBracing(Bracing b) {
-        return new CompositeCriteria(method, steel, minDegree, studWeight, camber, deflection, shored, b, selfWeight);
+        return new CompositeCriteria(method, steel, minDegree, studWeight, camber, deflection, shored, b, selfWeight, camberAllowance);
+    }
+
+    public CompositeCriteria withCamberAllowance(double w) {
+        return new CompositeCriteria(method, steel, minDegree, studWeight, camber, deflection, shored, constructionBracing, selfWeight, w);
     }
 
     public CompositeCriteria withSelfWeight(boolean on) {
-        return new CompositeCriteria(method, steel, minDegree, studWeight, camber, deflection, shored, constructionBracing, on);
+        return new CompositeCriteria(method, steel, minDegree, studWeight, camber, deflection, shored, constructionBracing, on, camberAllowance);
     }
 }

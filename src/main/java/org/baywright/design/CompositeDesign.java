@@ -5,15 +5,16 @@ import org.baywright.catalog.Section;
 import org.baywright.design.aisc360.CompositeFlexureI3;
 
 /**
- * The design (or check) of one composite beam: the section, the studs, the composite properties, every
+ * The design (or check) of one composite member (beam or girder): the section, the studs, the composite properties, every
  * check, and what the search rejected. SI: m, N, N·m, m⁴.
  *
  * @param status sized, fixed size (checked and passes) or overstressed
  * @param section the chosen or checked section (when overstressed, the best candidate; null if none)
- * @param studsPerHalf studs between the support and midspan (the point of maximum moment)
+ * @param studsPerHalf studs between each support and midspan, spaced uniformly over the half span
  * @param studs studs on the beam, 2 × {@code studsPerHalf}
  * @param qn strength of one stud Q_n (I8-1)
- * @param sumQn ΣQ_n = studsPerHalf × Q_n
+ * @param sumQn ΣQ_n of the composite flexure: Q_n × the studs between the nearer support and the point of
+ *     maximum moment (studsPerHalf × Q_n when that point is at midspan)
  * @param beff effective width b (I3.1a)
  * @param beffLeft effective width on the left
  * @param beffRight effective width on the right
@@ -21,10 +22,11 @@ import org.baywright.design.aisc360.CompositeFlexureI3;
  * @param flexure the plastic stress distribution (C, a, d1, PNA, M_n, degree of composite action)
  * @param ilb lower-bound moment of inertia I_LB
  * @param itr full transformed moment of inertia I_tr
- * @param preDeflection deflection of the bare steel under the wet concrete and its own weight (0 when shored)
+ * @param preDeflection deflection of the bare steel under the wet loads and its own weight (0 when shored)
  * @param camber camber specified (0 for none)
  * @param constructionRatio the construction stage's governing ratio (0 when shored)
- * @param checks every check: composite flexure, construction flexure and shear, shear, live- and total-load deflection
+ * @param checks every check: composite flexure, studs at point loads (with point loads, I8.2c), construction
+ *     flexure and shear, shear, live- and total-load deflection
  * @param rejected lighter sections rejected, lightest first, each with the check that failed
  * @param alternatives every section that passed in the search with its least studs, by cost
  * @param costWeight steel weight of the beam plus studs × the equivalent stud weight [N]

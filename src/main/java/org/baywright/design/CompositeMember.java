@@ -3,7 +3,7 @@ package org.baywright.design;
 import java.util.List;
 import java.util.Objects;
 import org.baywright.analysis.DistributedLoad;
-import org.baywright.analysis.SimpleSpan;
+import org.baywright.analysis.PointLoad;
 import org.baywright.analysis.SpanLoad;
 import org.baywright.design.aisc360.DeckRibs;
 
@@ -75,12 +75,14 @@ public record CompositeMember(double span, DeckRibs ribs, double toNeighbourLeft
     }
 
     private static void checkLoads(String group, List<SpanLoad> loads, double span) {
-        try {
-            SimpleSpan.of(span, loads);
-        } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("composite member, " + group + " loads: " + e.getMessage(), e);
-        }
-        for (SpanLoad l : loads) {
+        for (int i = 0; i < loads.size(); i++) {
+            SpanLoad l = Objects.requireNonNull(loads.get(i), group + " loads[" + i + "]");
+            boolean inside = l instanceof PointLoad p ? p.position() >= 0 && p.position() <= span
+                    : l instanceof DistributedLoad d && d.start() >= 0 && d.end() <= span;
+            if (!inside) {
+                throw new IllegalArgumentException("composite member, " + group + " loads[" + i + "] " + l
+                        + " lies outside the span: allowed range is [0, " + span + "] m");
+            }
             boolean up = l instanceof DistributedLoad d ? d.wStart() < 0 || d.wEnd() < 0 : l.total() < 0;
             if (up) {
                 throw new IllegalArgumentException("composite member, " + group + " load " + l

@@ -6,7 +6,10 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.baywright.calc.Caution;
+import org.baywright.design.BeamDesign;
 import org.baywright.design.Check;
+import org.baywright.design.CompositeDesign;
+import org.baywright.design.aisc360.CompositeFlexureI3;
 import org.baywright.design.MemberStatus;
 import org.baywright.load.LoadCase;
 import org.baywright.plan.Level;
@@ -14,6 +17,7 @@ import org.baywright.plan.Problem;
 import org.baywright.run.RunResult;
 import org.baywright.takedown.ColumnResult;
 import org.baywright.takedown.ColumnTier;
+import org.baywright.takedown.CompositeResult;
 import org.baywright.takedown.Equilibrium;
 import org.baywright.takedown.MemberResult;
 import org.baywright.takedown.StoreyLoad;
@@ -115,6 +119,13 @@ public final class RunSummary {
                 "weight", weightUnit(us), "weightPerArea", weightPerAreaUnit(us), "moment", us.moment().symbol(),
                 "deflection", us.smallLength().symbol()));
         TakedownResult t = run.takedown();
+        boolean composite = hasComposite(t);
+        if (composite) {
+            // only runs with composite members carry it, so older outputs stay byte for byte the same
+            @SuppressWarnings("unchecked")
+            Map<String, Object> units = (Map<String, Object>) o.get("units");
+            units.put("inertia", us.inertia().symbol());
+        }
         List<Object> members = new ArrayList<>();
         List<Object> columns = new ArrayList<>();
         List<Object> foundations = new ArrayList<>();
@@ -154,6 +165,13 @@ public final class RunSummary {
             totals.put("floorArea", us.floorArea().fromSi(t.floorArea()));
             totals.put("weightPerArea", t.floorArea() > 0 ? weight(w, us) / us.floorArea().fromSi(t.floorArea()) : null);
             totals.put("maxRatio", maxRatio(t));
+            if (composite) {
+                CompositeTotals c = CompositeTotals.of(t);
+                totals.put("studs", c.studs());
+                totals.put("camberedPieces", c.cambered());
+                totals.put("compositeMembers", c.members());
+                totals.put("steelWeightNonComposite", weight(c.nonCompositeWeight(), us));
+            }
             Map<String, Object> counts = new LinkedHashMap<>();
             statusCounts(t).forEach((k, v) -> counts.put(k.label(), v));
             totals.put("byStatus", counts);
@@ -203,7 +221,65 @@ public final class RunSummary {
         reactions.put("end", perCase(org.baywright.takedown.Component.byCase(m.endReaction()), us));
         j.put("reactions", reactions);
         j.put("supports", List.of(m.startSupport(), m.endSupport()));
+        if (m.isComposite()) {
+            j.put("composite", composite(m, us));
+        }
         return j;
+    }
+
+    /** True when any member of the run acts compositely with its slab. */
+    public static boolean hasComposite(TakedownResult t) {
+        if (t == null) {
+            return false;
+        }
+        for (List<MemberResult> ms : t.members().values()) {
+            for (MemberResult m : ms) {
+                if (m.isComposite()) {
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
+    /** The PNA's place as the JSON and the sheets name it: "slab", "top flange" or "web". */
+    public static String pnaName(CompositeFlexureI3.Pna p) {
+        return switch (p) {
+            case SLAB -> "slab";
+            case TOP_FLANGE -> "top flange";
+            case WEB -> "web";
+        };
+    }
+
+    /**
+     * A composite member's {@code composite} object: widths, camber and b_eff in the {@code deflection}
+     * unit (in, mm), forces in the force unit, I_LB in the inertia unit, weights per length as the member's.
+     */
+    static Map<String, Object> composite(MemberResult m, UnitSystem us) {
+        CompositeResult cr = m.composite();
+        CompositeDesign d = cr.design();
+        Map<String, Object> c = new LinkedHashMap<>();
+        boolean designed = d.section() != null;
+        c.put("beff", us.smallLength().fromSi(d.beff()));
+        c.put("beffLeft", us.smallLength().fromSi(d.beffLeft()));
+        c.put("beffRight", us.smallLength().fromSi(d.beffRight()));
+        c.put("qn", us.force().fromSi(d.qn()));
+        c.put("sumQn", designed ? us.force().fromSi(d.sumQn()) : null);
+        c.put("studs", cr.studs());
+        c.put("studsPerHalf", designed ? d.studsPerHalf() : 0);
+        c.put("degree", designed && d.flexure() != null ? d.flexure().degree() : null);
+        c.put("pna", designed && d.flexure() != null ? pnaName(d.flexure().pna()) : null);
+        c.put("ILB", designed ? us.inertia().fromSi(d.ilb()) : null);
+        c.put("camber", us.smallLength().fromSi(cr.camber()));
+        c.put("constructionRatio", designed ? d.constructionRatio() : null);
+        c.put("ribs", cr.ribs());
+        c.put("shored", cr.shored());
+        c.put("deck", cr.deck());
+        BeamDesign bare = cr.bare();
+        boolean bareDesigned = bare != null && bare.section() != null;
+        c.put("bareSection", bareDesigned ? bare.section().designation() : null);
+        c.put("bareWeight", bareDesigned ? us.weightPerLength(bare.section().weight()) : null);
+        return c;
     }
 
     private static Map<String, Object> column(ColumnResult c, UnitSystem us) {
@@ -286,6 +362,12 @@ public final class RunSummary {
                     us.floorArea().fromSi(t.floorArea()), us.floorArea().symbol(),
                     t.floorArea() > 0 ? weight(w, us) / us.floorArea().fromSi(t.floorArea()) : 0, weightPerAreaUnit(us),
                     maxRatio(t)));
+            if (hasComposite(t)) {
+                CompositeTotals c = CompositeTotals.of(t);
+                b.append(String.format(Locale.ROOT, "Composite: %d members, %,d headed studs, %d pieces cambered; without composite"
+                        + " action the steel would weigh %,.0f %s%n", c.members(), c.studs(), c.cambered(),
+                        weight(c.nonCompositeWeight(), us), weightUnit(us)));
+            }
             b.append(String.format(Locale.ROOT, "Run time: %.0f ms%n", run.milliseconds()));
             b.append("Equilibrium:");
             for (Equilibrium e : t.equilibrium()) {

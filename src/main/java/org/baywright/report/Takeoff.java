@@ -26,6 +26,11 @@ import org.baywright.units.Units;
  * splices) is one piece, counted on the lowest level it spans, where it is erected; its length and
  * weight are split over the storeys it spans, each on the level at the top of the storey. So every
  * table counts the same pieces and the same weight, and each sums to the totals.
+ *
+ * <p>Composite members: a line also counts the headed studs on its pieces and gives their camber
+ * (pieces of one size, level and kind with different cambers are separate lines); the totals add the
+ * studs, the pieces cambered and the steel weight without composite action. A run without composite
+ * members has none of these, and its CSV and workbook read as they did before composite floors.
  */
 public final class Takeoff {
     /**
@@ -35,8 +40,22 @@ public final class Takeoff {
      * @param pieces pieces erected on this level
      * @param length total length on this level, m
      * @param weight total weight on this level, N
+     * @param studs headed studs on these pieces (0 for bare steel)
+     * @param camber the camber of each of these pieces, m (0 for none): pieces with another camber are a
+     *     line of their own
      */
-    public record Line(String section, String level, String kind, int pieces, double length, double weight) {
+    public record Line(String section, String level, String kind, int pieces, double length, double weight, int studs,
+            double camber) {
+
+        /** A line of bare-steel pieces: no studs, no camber. */
+        public Line(String section, String level, String kind, int pieces, double length, double weight) {
+            this(section, level, kind, pieces, length, weight, 0, 0);
+        }
+
+        /** Pieces of this line that are cambered. */
+        public int cambered() {
+            return camber > 0 ? pieces : 0;
+        }
     }
 
     /**
@@ -55,9 +74,11 @@ public final class Takeoff {
     private final double total;
     private final double allowancePercent;
     private final double floorArea;
+    private final CompositeTotals composite;
 
     private Takeoff(List<Line> lines, Map<String, Row> bySection, Map<String, Row> byKind, Map<String, Row> byLevel,
-            double total, double allowancePercent, double floorArea) {
+            double total, double allowancePercent, double floorArea, CompositeTotals composite) {
+        this.composite = composite;
         this.lines = List.copyOf(lines);
         this.bySection = bySection;
         this.byKind = byKind;
@@ -74,7 +95,7 @@ public final class Takeoff {
         }
         TakedownResult t = run.takedown();
         List<String> levelOrder = run.plan().levels().stream().map(Level::name).toList();
-        // size × level × kind, in the order of the levels, then kinds, then sizes
+        // size × level × kind (× camber), in the order of the levels, then kinds, then sizes, then cambers
         Map<List<String>, Line> cells = new TreeMap<>((a, b) -> {
             int c = Integer.compare(levelOrder.indexOf(a.get(1)), levelOrder.indexOf(b.get(1)));
             if (c == 0) {
@@ -82,6 +103,9 @@ public final class Takeoff {
             }
             if (c == 0) {
                 c = compareSections(a.get(0), b.get(0));
+            }
+            if (c == 0) {
+                c = Double.compare(Double.parseDouble(a.get(3)), Double.parseDouble(b.get(3)));
             }
             return c;
         });
@@ -91,8 +115,8 @@ public final class Takeoff {
             for (Level lv : run.plan().levels()) {
                 for (MemberResult m : t.members().getOrDefault(t.levelFloors().get(lv.name()), List.of())) {
                     if (!m.section().isEmpty()) {
-                        cell(cells, m.section(), lv.name(), m.kind().name().toLowerCase(Locale.ROOT), 1, m.length(),
-                                m.steelWeight());
+                        cell(cells, new Line(m.section(), lv.name(), m.kind().name().toLowerCase(Locale.ROOT), 1, m.length(),
+                                m.steelWeight(), m.studs(), m.camber()));
                     }
                 }
             }
@@ -103,8 +127,8 @@ public final class Takeoff {
                     }
                     boolean first = true;
                     for (StoreyLoad st : tier.storeys()) { // bottom first: the piece counts on the lowest
-                        cell(cells, tier.section(), st.level(), "column", first ? 1 : 0, st.storeyHeight(),
-                                tier.weight() * st.storeyHeight());
+                        cell(cells, new Line(tier.section(), st.level(), "column", first ? 1 : 0, st.storeyHeight(),
+                                tier.weight() * st.storeyHeight()));
                         first = false;
                     }
                 }
@@ -127,17 +151,16 @@ public final class Takeoff {
             add(level, l.level(), l.pieces(), l.length(), l.weight());
             total += l.weight();
         }
-        return new Takeoff(lines, section, kind, level, total, allowancePercent, floorArea);
+        return new Takeoff(lines, section, kind, level, total, allowancePercent, floorArea, CompositeTotals.of(t));
     }
 
     /** The kinds of piece, in the order the tables list them. */
     static final List<String> KINDS = List.of("beam", "girder", "column");
 
-    private static void cell(Map<List<String>, Line> cells, String section, String level, String kind, int pieces,
-            double length, double weight) {
-        cells.merge(List.of(section, level, kind), new Line(section, level, kind, pieces, length, weight),
-                (a, b) -> new Line(section, level, kind, a.pieces() + b.pieces(), a.length() + b.length(),
-                        a.weight() + b.weight()));
+    private static void cell(Map<List<String>, Line> cells, Line l) {
+        cells.merge(List.of(l.section(), l.level(), l.kind(), Double.toString(l.camber())), l,
+                (a, b) -> new Line(a.section(), a.level(), a.kind(), a.pieces() + b.pieces(), a.length() + b.length(),
+                        a.weight() + b.weight(), a.studs() + b.studs(), a.camber()));
     }
 
     private static void add(Map<String, Row> m, String key, int count, double length, double weight) {
@@ -213,6 +236,29 @@ public final class Takeoff {
         return total + allowance();
     }
 
+    /** True when the run has members acting with their slab: the takeoff then lists studs and camber. */
+    public boolean composite() {
+        return composite.members() > 0;
+    }
+
+    /** Headed studs in all. */
+    public int studs() {
+        return lines.stream().mapToInt(Line::studs).sum();
+    }
+
+    /** Pieces cambered in all. */
+    public int camberedPieces() {
+        return lines.stream().mapToInt(Line::cambered).sum();
+    }
+
+    /**
+     * Member and column weight the floors would take without composite action (each composite member at
+     * its bare-steel design), N; equal to {@link #total()} for a run without composite members.
+     */
+    public double nonCompositeTotal() {
+        return composite() ? composite.nonCompositeWeight() : total;
+    }
+
     /** Floor area of every level, m². */
     public double floorArea() {
         return floorArea;
@@ -241,16 +287,26 @@ public final class Takeoff {
     /**
      * The tidy table as CSV, for a spreadsheet: a header with the units in the column names, then one
      * row per section size × level × kind with its pieces, length and weight. Weights are whole pounds
-     * (kilograms in SI), lengths to 0.01 ft (0.001 m). The totals are {@link #totalsCsv(UnitSystem)}.
+     * (kilograms in SI), lengths to 0.01 ft (0.001 m). When the run has composite members two columns
+     * follow: the studs on the line's pieces and the camber of each piece (in to 0.01, mm to 0.1). The
+     * totals are {@link #totalsCsv(UnitSystem)}.
      */
     public String csv(UnitSystem us) {
         StringBuilder b = new StringBuilder();
+        boolean comp = composite();
         b.append("section,level,kind,pieces,length[").append(ascii(us.length().symbol())).append("],weight[")
-                .append(RunSummary.weightUnit(us)).append("]\n");
+                .append(RunSummary.weightUnit(us)).append("]");
+        if (comp) {
+            b.append(",studs,camber[").append(ascii(us.smallLength().symbol())).append("]");
+        }
+        b.append('\n');
         for (Line l : lines) {
             b.append(csvText(l.section())).append(',').append(csvText(l.level())).append(',').append(l.kind()).append(',')
-                    .append(l.pieces()).append(',').append(length(l.length(), us)).append(',').append(wholeWeight(l.weight(), us))
-                    .append('\n');
+                    .append(l.pieces()).append(',').append(length(l.length(), us)).append(',').append(wholeWeight(l.weight(), us));
+            if (comp) {
+                b.append(',').append(l.studs()).append(',').append(camber(l.camber(), us));
+            }
+            b.append('\n');
         }
         return b.toString();
     }
@@ -293,6 +349,15 @@ public final class Takeoff {
         out.add(new Total("weight per floor area", fmt(area > 0 ? bare / area : 0, 2), area > 0 ? bare / area : 0, per));
         out.add(new Total("weight per floor area with allowance", fmt(area > 0 ? with / area : 0, 2), area > 0 ? with / area : 0,
                 per));
+        if (composite()) {
+            // only for runs with composite members, so the totals of bare-steel runs read as before
+            out.add(new Total("headed studs", Integer.toString(studs()), studs(), "studs"));
+            out.add(new Total("cambered pieces", Integer.toString(camberedPieces()), camberedPieces(), "beams and girders"));
+            out.add(whole("members and columns without composite action", RunSummary.weight(nonCompositeTotal(), us), wu));
+            out.add(new Total("members and columns without composite action", tons(nonCompositeTotal(), us),
+                    tonsValue(nonCompositeTotal(), us), tu));
+            out.add(whole("steel saved by composite action", RunSummary.weight(nonCompositeTotal() - total, us), wu));
+        }
         return out;
     }
 
@@ -311,6 +376,11 @@ public final class Takeoff {
     /** Length in the system's unit, to 0.01 ft or 0.001 m. */
     static String length(double metres, UnitSystem us) {
         return fmt(us.length().fromSi(metres), us == UnitSystem.US ? 2 : 3);
+    }
+
+    /** Camber in inches to 0.01 (mm to 0.1); 0 for none. */
+    static String camber(double metres, UnitSystem us) {
+        return fmt(us.smallLength().fromSi(metres), us == UnitSystem.US ? 2 : 1);
     }
 
     /** Weight in whole pounds or kilograms. */

@@ -36,6 +36,6 @@ public record FloorRules(DesignMethod method, Steel steel, DeflectionLimits defl
                 ? new org.baywright.design.CamberRule(composite.camberShare(), def.increment(), def.minimum(), def.minSpan())
                 : org.baywright.design.CamberRule.none();
         return new org.baywright.design.CompositeCriteria(method, steel, composite.minDegree(), composite.studWeight(), camber,
-                deflection, shored, bracing, true);
+                deflection, shored, bracing, true, composite.camberAllowance());
     }
 }

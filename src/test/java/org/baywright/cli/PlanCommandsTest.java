@@ -94,7 +94,10 @@ class PlanCommandsTest {
         assertEquals(0, d.code(), d.err());
         assertTrue(Files.size(pdf) > 10_000);
         assertTrue(Files.readString(svg).contains("<svg"), "svg");
-        assertTrue(Files.readString(csv).startsWith("section,level,kind,pieces,length[ft],weight[lb]\n"));
+        // new plans are composite floors (new --composite on, the default): the takeoff adds studs and camber
+        assertTrue(Files.readString(csv).startsWith("section,level,kind,pieces,length[ft],weight[lb],studs,camber[in]\n"),
+                Files.readString(csv).lines().findFirst().orElse(""));
+        assertTrue(Files.readString(dir.resolve("takeoff-totals.csv")).contains("\nheaded studs,"));
         assertTrue(Files.readString(dir.resolve("takeoff-totals.csv")).contains("\nconnections and miscellaneous allowance,10.0,%\n"));
         assertTrue(d.err().contains("wrote " + dir.resolve("takeoff-totals.csv")), d.err());
         assertTrue(d.out().matches("(?s).*\nTakeoff: [\\d,]+ lb members and columns \\+ 10 % allowance [\\d,]+ lb = [\\d,]+ lb .*"),

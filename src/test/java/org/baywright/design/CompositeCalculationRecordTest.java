@@ -8,6 +8,8 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import org.baywright.analysis.DistributedLoad;
+import org.baywright.analysis.PointLoad;
 import org.baywright.calc.Arg;
 import org.baywright.calc.Calc;
 import org.baywright.calc.CalcFormat;
@@ -19,6 +21,7 @@ import org.baywright.catalog.Section;
 import org.baywright.design.aisc360.DeckRibs;
 import org.baywright.design.aisc360.StudPosition;
 import org.baywright.load.DesignMethod;
+import org.baywright.load.LoadCase;
 import org.baywright.units.UnitSystem;
 import org.baywright.units.Units;
 import org.junit.jupiter.api.Test;
@@ -72,6 +75,51 @@ class CompositeCalculationRecordTest {
             }
         }
         assertTrue(equations > 1000, "equations verified: " + equations);
+        assertAll(checks);
+    }
+
+    /**
+     * The same for a member under general loads: the girder with point loads at its third points
+     * ({@link CompositeMemberTest}), a point load and partial trapezoidal loads, LRFD and ASD, shored and
+     * unshored, few and many studs (the I8.2c lines included).
+     */
+    @Test
+    void everyRecordedEquationOfAGeneralMemberEvaluatesToItsResult() {
+        List<Executable> checks = new ArrayList<>();
+        int equations = 0;
+        CompositeMember g = CompositeMemberTest.girder();
+        double l = g.span();
+        CompositeMember odd = new CompositeMember(l, g.ribs(), g.toNeighbourLeft(), g.toNeighbourRight(), g.toEdgeLeft(),
+                g.toEdgeRight(), g.slab(), g.studs(), g.slabWeight(),
+                List.of(new PointLoad(0.2 * l, 40e3), new DistributedLoad(0, 0.6 * l, 8e3, 2e3)), List.of(),
+                BeamLoads.of(l, Map.of(LoadCase.D, List.of(new DistributedLoad(0.3 * l, l, 1e3, 3e3)),
+                        LoadCase.L, List.of(new PointLoad(0.2 * l, 60e3), new PointLoad(0.7 * l, 20e3)),
+                        LoadCase.S, List.of(DistributedLoad.full(l, 2e3)))), null);
+        for (CompositeMember member : List.of(g, odd)) {
+            for (DesignMethod m : DesignMethod.values()) {
+                for (boolean shored : new boolean[] {false, true}) {
+                    CompositeBeamDesigner d = new CompositeBeamDesigner(member, CompositeCriteria.defaults().withMethod(m)
+                            .withShored(shored));
+                    for (String name : List.of("W16X26", "W21X44", "W24X55")) {
+                        Section s = CATALOG.find(name).orElseThrow();
+                        for (int n : new int[] {1, 8, 40}) {
+                            Calc calc = new Calc();
+                            CompositeDesign plain = d.check(s, n, null);
+                            CompositeDesign recorded = d.check(s, n, calc);
+                            String where = name + " " + m + (shored ? " shored" : "") + " n = " + n + " " + member.wet();
+                            checks.add(() -> assertEquals(plain.checks(), recorded.checks(), where));
+                            checks.add(() -> assertTrue(recorded.check("studs at point loads") != null, where));
+                            equations += verify(calc, where, checks);
+                            for (CalcLine line : calc.lines()) {
+                                checks.add(() -> assertTrue(!CalcFormat.render(line, UnitSystem.US).isEmpty()
+                                        && !CalcFormat.render(line, UnitSystem.SI).isEmpty(), where));
+                            }
+                        }
+                    }
+                }
+            }
+        }
+        assertTrue(equations > 500, "equations verified: " + equations);
         assertAll(checks);
     }
 

@@ -79,14 +79,15 @@ class TakeoffTest {
         Takeoff t = Takeoff.of(run, 5);
         String csv = t.csv(UnitSystem.US);
         List<String> lines = csv.lines().toList();
-        assertEquals("section,level,kind,pieces,length[ft],weight[lb]", lines.get(0));
+        // the demo is a composite floor: each row also gives its studs and its pieces' camber
+        assertEquals("section,level,kind,pieces,length[ft],weight[lb],studs,camber[in]", lines.get(0));
         assertEquals(t.lines().size() + 1, lines.size());
         java.util.Set<String> keys = new java.util.HashSet<>();
         long pounds = 0;
         for (String l : lines.subList(1, lines.size())) {
             String[] f = l.split(",", -1);
-            assertEquals(6, f.length, l);
-            assertTrue(keys.add(f[0] + "|" + f[1] + "|" + f[2]), "one row per size × level × kind: " + l);
+            assertEquals(8, f.length, l);
+            assertTrue(keys.add(f[0] + "|" + f[1] + "|" + f[2] + "|" + f[7]), "one row per size × level × kind × camber: " + l);
             assertTrue(f[2].matches("beam|girder|column"), l);
             assertTrue(f[4].matches("\\d+\\.\\d{2}"), "length to 0.01 ft: " + l);
             assertTrue(f[5].matches("\\d+"), "whole pounds: " + l);
@@ -94,7 +95,18 @@ class TakeoffTest {
         }
         double lb = t.total() / Units.NEWTONS_PER_POUND;
         assertEquals(lb, pounds, lines.size(), "the rows add up to the total, within a pound a row of rounding");
+        assertTrue(t.csv(UnitSystem.SI).startsWith("section,level,kind,pieces,length[m],weight[kg],studs,camber[mm]\n"));
+    }
+
+    /** A bare-steel plan's CSV reads as before composite floors: no stud or camber columns, no composite totals. */
+    @Test
+    void bareSteelCsvHasTheSixColumns() {
+        RunResult bare = PlanRun.run(PlanFiles.read(Path.of("plans", "examples", "harbourview-offices-bare-steel.bay.json"))
+                .plan().orElseThrow());
+        Takeoff t = Takeoff.of(bare, 5);
+        assertEquals("section,level,kind,pieces,length[ft],weight[lb]", t.csv(UnitSystem.US).lines().findFirst().orElseThrow());
         assertTrue(t.csv(UnitSystem.SI).startsWith("section,level,kind,pieces,length[m],weight[kg]\n"));
+        assertTrue(!t.totalsCsv(UnitSystem.US).contains("studs"), "no composite totals");
     }
 
     @Test

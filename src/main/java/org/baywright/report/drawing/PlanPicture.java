@@ -764,6 +764,12 @@ public final class PlanPicture {
         Pt above = new Pt(mid.x() + nx * offMm * k, mid.y() + ny * offMm * k);
         double sizeW = TextMetrics.width(sizeText, t, false);
         boolean fits = !style.fitLabels() || sizeW + t <= lenMm;
+        if (!fits && m.isComposite()) {
+            // on the screen at small zoom: the size alone where its studs and camber do not fit
+            sizeText = bareSizeLabel(m);
+            sizeW = TextMetrics.width(sizeText, t, false);
+            fits = sizeW + t <= lenMm;
+        }
         if (fits) {
             fits = label(above, sizeText, t, rot, Anchor.MIDDLE_BASELINE);
         }
@@ -891,8 +897,17 @@ public final class PlanPicture {
         return pts;
     }
 
-    /** The size as written along a member: W21X44, [W21X44] when fixed in the plan. */
+    /**
+     * The size as written along a member: W21X44, [W21X44] when fixed in the plan; a composite member
+     * adds its studs and camber ({@link MemberLabels}): W16X26 (16) c=3/4".
+     */
     String sizeLabel(MemberResult m) {
+        String size = bareSizeLabel(m);
+        return m.isComposite() && m.design() != null && m.design().section() != null
+                ? MemberLabels.size(size, m.studs(), m.camber(), units) : size;
+    }
+
+    private String bareSizeLabel(MemberResult m) {
         boolean sized = m.design() != null && m.design().section() != null;
         if (!sized) {
             return switch (m.status()) {

@@ -110,6 +110,10 @@ final class SheetBuilder {
         double y = northAndScale(panelX + 4, w - margin - 4, h - margin - 4);
         y = legend(panelX + 4, w - margin - 4, y - 2 * t);
         double titleTop = titleBlock(panelX, w - margin, margin);
+        List<String> slab = SlabNotes.of(floor, members, units);
+        if (!slab.isEmpty()) {
+            y = block("SLAB AND STUDS", slab, panelX + 4, w - margin - 4, y - 1.5 * t, titleTop);
+        }
         notes(panelX + 4, w - margin - 4, y - 1.5 * t, titleTop);
 
         List<Primitive> sorted = new ArrayList<>(out);
@@ -324,7 +328,6 @@ final class SheetBuilder {
     }
 
     private void notes(double x0, double x1, double top, double floorOfNotes) {
-        double size = 0.8 * t;
         List<String> notes = new ArrayList<>();
         AreaLoad base = picture.floorLoad();
         notes.add(base == null ? "No floor-wide area load on this layout; every area load is outlined and tagged."
@@ -345,17 +348,23 @@ final class SheetBuilder {
         notes.add("Sizes: the lightest adequate section for strength (AISC 360-16) and deflection; ratios are the highest"
                 + " demand/capacity of all checks.");
         notes.add("Dimensions between grid lines in " + (units == UnitSystem.SI ? "millimetres" : "feet and inches") + ".");
+        block("NOTES", notes, x0, x1, top, floorOfNotes);
+    }
+
+    /** A titled block of numbered notes from {@code top} down, stopping above {@code floorOfNotes}; returns the y below it. */
+    private double block(String title, List<String> notes, double x0, double x1, double top, double floorOfNotes) {
+        double size = 0.8 * t;
         double y = top;
         if (y - 3 * t < floorOfNotes) {
-            return;
+            return y;
         }
-        text(Layer.NOTES, new Pt(x0, y), "NOTES", t, Anchor.START_TOP, true);
+        text(Layer.NOTES, new Pt(x0, y), title, t, Anchor.START_TOP, true);
         y -= 2.0 * t;
         for (int i = 0; i < notes.size(); i++) {
             List<String> lines = TextMetrics.wrap(notes.get(i), size, false, x1 - x0 - 2.2 * t);
             for (int j = 0; j < lines.size(); j++) {
                 if (y - 1.3 * size < floorOfNotes) {
-                    return;
+                    return y;
                 }
                 if (j == 0) {
                     text(Layer.NOTES, new Pt(x0, y), (i + 1) + ".", size, Anchor.START_TOP, false);
@@ -365,6 +374,7 @@ final class SheetBuilder {
             }
             y -= 0.4 * size;
         }
+        return y;
     }
 
     /** The title block at the bottom of the panel, bottom up; returns its top. */

@@ -50,11 +50,26 @@ final class CheckerPages {
                 + Fmt.unit(Quantity.SECTION_LENGTH, cx.us) + " beyond the column face (plan setting; common practice),"
                 + " with live load on one side where that governs (ASCE 7-16 §4.3.3), split between the storeys above and"
                 + " below by stiffness, by AISC 360-16 H1.1 with B1 of Appendix 8 (part \"Column moments and interaction\").");
-        f.bullet(f.body, "Beams and girders are simple spans of bare steel, or spans overhanging one support (a cantilever"
-                + " with its backspan, live load patterned by ASCE 7-16 §4.3.3): no composite action with the slab is counted"
-                + " (conservative for strength and stiffness), and no continuity or end restraint.");
+        boolean composite = FrontMatter.composite(cx);
+        if (composite) {
+            f.bullet(f.body, "Beams and girders are simple spans. Members on a floor whose deck carries a described slab act"
+                    + " with it (AISC 360-16 Chapter I): effective width by I3.1a from the plan's geometry, headed studs by"
+                    + " I8 (Q_n, spacing and the ribs available), positive flexure by the plastic stress distribution of"
+                    + " I3.2a, shear on the steel alone; unshored, the bare steel carries the wet concrete, the deck, its own"
+                    + " weight and the construction live load, and is cambered for part of that deflection by the rule each"
+                    + " sheet states; deflections after the concrete hardens on the lower-bound I_LB (Commentary Eq. C-I3-1)."
+                    + " Other members (roofs, overhangs, members on a non-composite floor) are bare steel; no continuity or"
+                    + " end restraint is counted. The studs, camber, slab and shoring shown on the framing plans are part of"
+                    + " the design.");
+        } else {
+            f.bullet(f.body, "Beams and girders are simple spans of bare steel, or spans overhanging one support (a cantilever"
+                    + " with its backspan, live load patterned by ASCE 7-16 §4.3.3): no composite action with the slab is counted"
+                    + " (conservative for strength and stiffness), and no continuity or end restraint.");
+        }
         LiveLoadRules ll = cx.basis().liveLoad();
-        f.bullet(f.body, "Deflections are computed on the bare steel section under service loads, with the live load "
+        f.bullet(f.body, "Deflections are computed on the " + (composite ? "bare steel section (composite members: on I_LB"
+                + " after the concrete hardens, the pre-composite deflection less the camber added to the total)"
+                : "bare steel section") + " under service loads, with the live load "
                 + (!ll.reduce() ? "unreduced (live-load reduction is off)"
                         : ll.deflectionReduced() ? "as reduced for the member's strength design (plan setting)"
                                 : "unreduced (common practice for serviceability; the strength checks use the reduced live load)")
@@ -71,7 +86,9 @@ final class CheckerPages {
         f.bullet(f.body, "Floor vibration from walking, ponding of roofs, wind and seismic loads and drift, fire resistance,"
                 + " connections (their design is delegated; the end reactions are in part \"End reactions\"), torsion of"
                 + " members carrying a cantilevered slab, web local yielding and crippling at bearings and point loads,"
-                + " foundations (their reactions are given), erection stability and construction loads.");
+                + " foundations (their reactions are given), erection stability and construction loads"
+                + (composite ? " (other than the construction stage of unshored composite members), the deck as a form under"
+                        + " the wet concrete, and the slab's own reinforcement, shrinkage and cracking." : "."));
 
         f.heading2("Engineer of record", 120);
         f.paragraph(f.small, "To be completed by the licensed professional engineer responsible for the design, after"

@@ -71,6 +71,16 @@ final class FrontMatter {
 
         cautionBox(f);
         f.gap(8);
+        if (composite(cx)) {
+            org.baywright.report.CompositeTotals ct = org.baywright.report.CompositeTotals.of(cx.run.takedown());
+            f.paragraph(f.body, "Composite design: " + ct.members() + " beams and girders act with the concrete slab on"
+                    + " steel deck (" + AISC + " Chapter I), with " + Fmt.grouped(ct.studs(), 0) + " headed studs and "
+                    + ct.cambered() + " pieces cambered. Their strength relies on the studs being welded as scheduled, the"
+                    + " slab being cast as specified and, where unshored, the bare steel carrying the wet concrete and the"
+                    + " construction live load: the studs, camber, slab and shoring assumptions must appear on the contract"
+                    + " documents and be confirmed by the engineer of record.");
+            f.gap(6);
+        }
 
         f.heading2("Design basis", 80);
         basisTable(cx).draw(f);
@@ -106,6 +116,13 @@ final class FrontMatter {
         Table t = new Table().left("Item", 22).left("Basis", 58).left("Source", 28).fontSize(7.6f);
         t.row("Member strength", AISC + ", " + AISC_TITLE + "; " + (m == DesignMethod.LRFD
                 ? "LRFD: required strength ≤ φ·Rn" : "ASD: required strength ≤ Rn/Ω"), AISC + " B3.1, B3.2");
+        if (composite(cx)) {
+            t.row("Composite beams", "steel section with the slab on deck: effective width, plastic stress distribution,"
+                    + " headed studs (least " + org.baywright.calc.CalcFormat.sig(100 * cx.run.plan().settings().composite().minDegree())
+                    + " % composite action); unshored members checked as bare steel under the wet concrete and cambered;"
+                    + " deflections on the lower-bound moment of inertia", AISC + " I3.1a, I3.2a, I3.2d, I4.2, I8; Commentary"
+                    + " Eq. C-I3-1");
+        }
         t.row("Loads and combinations", ASCE + ", " + ASCE_TITLE, ASCE + " Ch. 2, 4");
         t.row("Load cases", "D dead (with the framing's own weight), L floor live, Lr roof live, S snow; gravity only",
                 ASCE + " Ch. 2");
@@ -202,7 +219,8 @@ final class FrontMatter {
 
         f.heading2("Standards and editions", 40);
         Table s = new Table().left("Reference", 20).left("Title", 52).left("Used for", 40);
-        s.row(AISC, AISC_TITLE, "flexure F2 and F3, shear G2.1, compression E3, Cb by Eq. F1-1, element slenderness Table B4.1");
+        s.row(AISC, AISC_TITLE, "flexure F2 and F3, shear G2.1, compression E3, Cb by Eq. F1-1, element slenderness Table B4.1"
+                + (composite(cx) ? "; composite beams Chapter I (I3.1a, I3.2a, I3.2d, I4.2, I8)" : ""));
         s.row(ASCE, ASCE_TITLE, "load combinations (" + (m == DesignMethod.LRFD ? "§2.3.1" : "§2.4.1")
                 + "), live-load reduction §4.7, roof live load §4.8, partition allowance §4.3.2, K_LL Table 4.7-1");
         s.row("IBC Table 1604.3", "International Building Code, deflection limits (edition adopted for the project)",
@@ -282,6 +300,12 @@ final class FrontMatter {
                     + " (a plan setting per roof layout; the limit under Lr and under S is the same, so one live-load check"
                     + " covers both): " + roofDeflection(cx) + ".");
         }
+        if (composite(cx)) {
+            f.paragraph(f.body, "Composite members: live and superimposed dead load deflect the composite section on the"
+                    + " lower-bound moment of inertia I_LB (" + AISC + " Commentary Eqs. C-I3-1, C-I3-2); the total"
+                    + " deflection adds the part of the bare steel's deflection under the wet concrete that the camber does"
+                    + " not take out. Same limits.");
+        }
         f.paragraph(f.small, steelDeadLoadNote(b));
 
         f.heading2("How members and columns are designed", 40);
@@ -292,6 +316,14 @@ final class FrontMatter {
         f.bullet(f.body, "The lightest adequate section is chosen from the catalog, in order of nominal weight (shallower"
                 + " first among equal weights)" + series(st, cx.us) + ". Each lighter candidate is rejected with the check it failed"
                 + " worst; the member sheets list them. A size fixed in the plan is checked, not searched.");
+        if (composite(cx)) {
+            f.bullet(f.body, "Composite members (" + AISC + " Chapter I): for each candidate section the least number of"
+                    + " studs that passes every check; among all sections the least steel weight plus an equivalent"
+                    + " weight per stud and per cambered piece. Checked: composite flexure by the plastic stress"
+                    + " distribution (I3.2a) with b_eff by I3.1a and Q_n by Eq. I8-1, shear on the steel alone (I4.2),"
+                    + " the construction stage on the bare steel (F2, unshored), live and total deflection on I_LB"
+                    + " (Commentary Eq. C-I3-1), less the camber. Their sheets add a section sketch and these quantities.");
+        }
         f.bullet(f.body, "Members are designed in support order, so each member's reactions (with its own weight) are"
                 + " applied to what supports it before that is designed.");
         f.bullet(f.body, "Columns: " + AISC + " E3 flexural buckling about both axes with K = 1 and the storey height as"
@@ -308,6 +340,11 @@ final class FrontMatter {
                 + " record the design engine wrote while checking the section, not a retyped summary. Loads are service"
                 + " loads by case with live load already reduced; the member's own weight is added by the check itself"
                 + " (line wsw). The shear and moment diagrams are those of the combination that governs flexure.");
+    }
+
+    /** True when the run has composite members. */
+    static boolean composite(Context cx) {
+        return org.baywright.report.RunSummary.hasComposite(cx.run.takedown());
     }
 
     private static String series(DesignSettings st, UnitSystem us) {

@@ -19,7 +19,8 @@ import org.baywright.takedown.TakedownResult;
  * Groups the designed members of each floor layout that would print the same calculation sheet:
  * same kind, status and section, same span, same design criteria (method, steel, bracing, deflection
  * limits), the same service loads case by case, the same live-load reduction and the same end
- * reactions. Numbers are compared to one part in 10⁹, far below the four significant figures a sheet
+ * reactions; composite members only with composite members of the same studs and camber. Numbers are
+ * compared to one part in 10⁹, far below the four significant figures a sheet
  * prints. Each group keeps its members in design order; groups come in the order of their first member.
  */
 final class MemberGroups {
@@ -106,7 +107,26 @@ final class MemberGroups {
                 && near(a.kll(), b.kll()) && near(a.liveFactor(), b.liveFactor()) && near(a.roofLiveFactor(), b.roofLiveFactor())
                 && near(a.tributaryArea(), b.tributaryArea()) && near(a.reductionArea(), b.reductionArea())
                 && near(a.startReaction(), b.startReaction()) && near(a.endReaction(), b.endReaction())
-                && sameLoads(a.loads(), b.loads());
+                && sameLoads(a.loads(), b.loads()) && sameComposite(a, b);
+    }
+
+    /**
+     * Both bare steel, or both composite with the same studs, camber, deck, ribs, shoring and effective
+     * widths (their sections already equal); a member and its mirror image (b_eff sides swapped) share.
+     */
+    static boolean sameComposite(MemberResult a, MemberResult b) {
+        if (a.isComposite() != b.isComposite()) {
+            return false;
+        }
+        if (!a.isComposite()) {
+            return true;
+        }
+        var x = a.composite();
+        var y = b.composite();
+        return x.studs() == y.studs() && near(x.camber(), y.camber()) && x.shored() == y.shored() && x.ribs().equals(y.ribs())
+                && x.deck().equals(y.deck()) && near(x.design().beff(), y.design().beff())
+                // mirror images (the slab edge on the other side) print the same sheet
+                && near(Math.min(x.design().beffLeft(), x.design().beffRight()), Math.min(y.design().beffLeft(), y.design().beffRight()));
     }
 
     static boolean sameLoads(BeamLoads a, BeamLoads b) {

@@ -80,7 +80,7 @@ final class MemberSheets {
             n++;
             MemberResult m = g.first();
             Check gov = m.design().governing();
-            t.row(part + "." + n, m.section(), kind(m.kind(), 1), Fmt.v(m.length(), Quantity.SPAN_LENGTH, cx.us),
+            t.row(part + "." + n, label(m, cx.us), kind(m.kind(), 1), Fmt.v(m.length(), Quantity.SPAN_LENGTH, cx.us),
                     Fmt.ratio(m.maxRatio()), gov == null ? "" : gov.name(), String.join(", ", g.ids()));
         }
         t.draw(cx.flow);
@@ -94,8 +94,13 @@ final class MemberSheets {
     /** The sheet title as printed in the heading and in the contents. */
     static String title(String number, MemberResult m, int count, UnitSystem us) {
         String k = kind(m.kind(), count);
-        return number + " " + m.section() + " " + k + ", span " + Fmt.v(m.length(), Quantity.SPAN_LENGTH, us)
+        return number + " " + label(m, us) + " " + k + ", span " + Fmt.v(m.length(), Quantity.SPAN_LENGTH, us)
                 + (count > 1 ? " (" + count + " members)" : " (" + m.id() + ")");
+    }
+
+    /** The section as the sheet names it: W21X50, or for a composite member W21X50 (46) c=2" as on the plan. */
+    static String label(MemberResult m, UnitSystem us) {
+        return m.isComposite() ? org.baywright.report.drawing.MemberLabels.size(m.section(), m.studs(), m.camber(), us) : m.section();
     }
 
     static void sheet(Context cx, String number, MemberGroups.Group g) {
@@ -106,7 +111,7 @@ final class MemberSheets {
         BeamLoads loads = m.loads();
         BeamCriteria cr = m.criteria();
         String title = title(number, m, g.members().size(), us);
-        f.runningTitle("Sheet " + number + ": " + m.section() + " " + kind(m.kind(), g.members().size()));
+        f.runningTitle("Sheet " + number + ": " + label(m, us) + " " + kind(m.kind(), g.members().size()));
         f.newPage();
         cx.mark(title, g.members().size() > 1 ? String.join(", ", g.ids()) : "");
         f.heading2(title, 30);
@@ -142,6 +147,7 @@ final class MemberSheets {
         loadsBlock(cx, loads);
         reactions(cx, m);
         forces(cx, m);
+        CompositeSection.write(cx, m);
         calculation(cx, m);
         checks(cx, d);
         rejected(cx, d);
@@ -205,7 +211,7 @@ final class MemberSheets {
     /** The strength combination that governs flexure (falls back on the first one). */
     static LoadCombination governingCombination(MemberResult m) {
         for (Check c : m.design().checks()) {
-            if (c.name().equals("flexure") && c.loadCombination() != null) {
+            if ((c.name().equals("flexure") || c.name().equals("composite flexure")) && c.loadCombination() != null) {
                 return c.loadCombination();
             }
         }

@@ -22,6 +22,7 @@ final class PageFlow {
     /** A colour as RGB fractions. */
     record Rgb(float r, float g, float b) {
         static final Rgb BLACK = new Rgb(0, 0, 0);
+        static final Rgb WHITE_PAGE = new Rgb(1, 1, 1);
         static final Rgb TEXT = new Rgb(0.08f, 0.08f, 0.1f);
         static final Rgb GREY = new Rgb(0.42f, 0.42f, 0.45f);
         static final Rgb RULE = new Rgb(0.72f, 0.72f, 0.75f);

@@ -34,7 +34,20 @@ final class TakeoffPages {
                 fmt2(Takeoff.shortTons(t.allowance())), fmt2(Takeoff.tonnes(t.allowance())));
         tt.strong("Total with allowance", Fmt.grouped(Fmt.weight(t.grandTotal(), us), 0), fmt2(Takeoff.shortTons(t.grandTotal())),
                 fmt2(Takeoff.tonnes(t.grandTotal())));
+        if (t.composite()) {
+            tt.row("Members and columns without composite action", Fmt.grouped(Fmt.weight(t.nonCompositeTotal(), us), 0),
+                    fmt2(Takeoff.shortTons(t.nonCompositeTotal())), fmt2(Takeoff.tonnes(t.nonCompositeTotal())));
+            double saved = t.nonCompositeTotal() - t.total();
+            tt.row("Saved by composite action", Fmt.grouped(Fmt.weight(saved, us), 0), fmt2(Takeoff.shortTons(saved)),
+                    fmt2(Takeoff.tonnes(saved)));
+        }
         tt.draw(f);
+        if (t.composite()) {
+            f.paragraph(f.body, "Composite members: " + Fmt.grouped(t.studs(), 0) + " headed studs in all; "
+                    + t.camberedPieces() + " pieces cambered. Without composite action each composite member is taken at"
+                    + " its bare-steel design under the same loads (the weight the floors would take as bare steel).");
+            cambers(f, t, us);
+        }
         double area = Quantity.FLOOR_AREA.unit(us).fromSi(t.floorArea());
         String au = Fmt.unit(Quantity.FLOOR_AREA, us);
         if (area > 0) {
@@ -63,6 +76,26 @@ final class TakeoffPages {
         t.strong("Sum", Integer.toString(n), Fmt.fixed(len, Quantity.SPAN_LENGTH, us, 1), Fmt.grouped(Fmt.weight(w, us), 0),
                 fmt2(Takeoff.shortTons(w)), fmt2(Takeoff.tonnes(w)));
         t.draw(f);
+    }
+
+    /** Studs and camber by size, level and kind, for the lines that have any. */
+    private static void cambers(PageFlow f, Takeoff t, UnitSystem us) {
+        f.heading2("Studs and camber", 40);
+        Table tb = new Table().left("Section", 16).left("Level", 18).left("Kind", 10).right("Pieces", 8).right("Studs", 8)
+                .right("Camber [" + Fmt.unit(Quantity.SECTION_LENGTH, us) + "]", 14);
+        int pieces = 0;
+        int studs = 0;
+        for (Takeoff.Line l : t.lines()) {
+            if (l.studs() == 0 && l.camber() == 0) {
+                continue;
+            }
+            tb.row(l.section(), l.level(), l.kind(), Integer.toString(l.pieces()), Integer.toString(l.studs()),
+                    l.camber() > 0 ? org.baywright.report.drawing.MemberLabels.camber(l.camber(), us) : "none");
+            pieces += l.pieces();
+            studs += l.studs();
+        }
+        tb.strong("Sum", "", "", Integer.toString(pieces), Integer.toString(studs), "");
+        tb.draw(f);
     }
 
     private static String fmt2(double v) {

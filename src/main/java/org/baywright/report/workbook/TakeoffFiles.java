@@ -42,6 +42,8 @@ public final class TakeoffFiles {
         Files.writeString(file, t.csv(us), StandardCharsets.UTF_8);
         Path totals = totalsFile(file);
         Files.writeString(totals, t.totalsCsv(us), StandardCharsets.UTF_8);
-        return List.of(file + ": takeoff, " + t.lines().size() + " rows of size × level × kind", totals + ": takeoff totals");
+        return List.of(file + ": takeoff, " + t.lines().size() + " rows of size × level × kind"
+                + (t.composite() ? " with studs and camber (" + t.studs() + " studs, " + t.camberedPieces() + " pieces cambered)" : ""),
+                totals + ": takeoff totals");
     }
 }

@@ -21,7 +21,9 @@ import org.baywright.units.UnitSystem;
  * The steel takeoff as an Office Open XML workbook (.xlsx), one sheet per table: the tidy table (size ×
  * level × kind), by size, by level, by kind, and the totals with the caution. Numbers are number cells
  * (weights whole, lengths to 0.01 ft or 0.001 m), headers carry their units, the header row is frozen
- * and filtered, so an estimator can sort, filter and pivot at once.
+ * and filtered, so an estimator can sort, filter and pivot at once. A run with composite members adds
+ * studs and camber to the items and the studs, cambered pieces and weight without composite action to
+ * the totals.
  *
  * <p>The format is written by Apache POI; this class only lays the tables out.
  */
@@ -53,7 +55,14 @@ public final class TakeoffWorkbook {
             String wu = Takeoff.weightUnit(us);
 
             Sheet items = wb.createSheet(SHEETS.get(0));
-            header(items, st, "Section", "Level", "Kind", "Pieces", "Length [" + lu + "]", "Weight [" + wu + "]");
+            boolean comp = t.composite();
+            String cu = unit(us.smallLength().symbol());
+            if (comp) {
+                header(items, st, "Section", "Level", "Kind", "Pieces", "Length [" + lu + "]", "Weight [" + wu + "]", "Studs",
+                        "Camber [" + cu + "]");
+            } else {
+                header(items, st, "Section", "Level", "Kind", "Pieces", "Length [" + lu + "]", "Weight [" + wu + "]");
+            }
             int r = 1;
             for (Takeoff.Line l : t.lines()) {
                 Row row = items.createRow(r++);
@@ -63,8 +72,12 @@ public final class TakeoffWorkbook {
                 number(row, 3, l.pieces(), st.count);
                 number(row, 4, us.length().fromSi(l.length()), st.length);
                 number(row, 5, Takeoff.weightIn(l.weight(), us), st.weight);
+                if (comp) {
+                    number(row, 6, l.studs(), st.count);
+                    number(row, 7, us.smallLength().fromSi(l.camber()), st.decimal);
+                }
             }
-            finish(items, 6, r);
+            finish(items, comp ? 8 : 6, r);
 
             groupSheet(wb.createSheet(SHEETS.get(1)), st, "Section", t.bySection(), us, lu, wu);
             groupSheet(wb.createSheet(SHEETS.get(2)), st, "Level", t.byLevel(), us, lu, wu);

@@ -25,4 +25,31 @@ final class PdfText {
     static String fold(String s) {
         return s.replaceAll("\\s+", " ").trim();
     }
+
+    /**
+     * True when the words of {@code words} occur in {@code text} in this order, each at most a wrapped
+     * clause (120 characters) after the previous one: a calculation line whose clause wraps in the
+     * right-hand column comes out of the text extraction interleaved with the clause's lines.
+     */
+    static boolean inOrder(String text, String words) {
+        String[] w = words.split(" ");
+        int from = text.indexOf(w[0]);
+        while (from >= 0) {
+            int at = from + w[0].length();
+            boolean all = true;
+            for (int i = 1; i < w.length && all; i++) {
+                int next = text.indexOf(w[i], at);
+                if (next < 0 || next - at > 120) {
+                    all = false;
+                } else {
+                    at = next + w[i].length();
+                }
+            }
+            if (all) {
+                return true;
+            }
+            from = text.indexOf(w[0], from + 1);
+        }
+        return false;
+    }
 }

@@ -81,6 +81,30 @@ class TakeoffWorkbookTest {
         }
     }
 
+    /** A run with composite members (AISC DE V15 Example I.1 beams, 46 studs, 2 in camber) adds studs and camber columns. */
+    @Test
+    void compositeRunsListStudsAndCamber() throws Exception {
+        Takeoff t = Takeoff.of(org.baywright.report.CompositeRuns.mixed(), 0);
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        TakeoffWorkbook.write(t, UnitSystem.US, "Example I.1", out);
+        try (XSSFWorkbook wb = new XSSFWorkbook(new ByteArrayInputStream(out.toByteArray()))) {
+            Sheet items = wb.getSheet("Items");
+            int studs = 0;
+            for (int r = 1; r <= items.getLastRowNum(); r++) {
+                studs += (int) items.getRow(r).getCell(6).getNumericCellValue();
+            }
+            int sum = studs;
+            StringBuilder all = new StringBuilder();
+            wb.getSheet("Totals").forEach(row -> row.forEach(c -> all.append(c.toString()).append(' ')));
+            assertAll("composite workbook",
+                    () -> assertEquals(List.of("Section", "Level", "Kind", "Pieces", "Length [ft]", "Weight [lb]", "Studs", "Camber [in]"),
+                            texts(items.getRow(0), 8)),
+                    () -> assertEquals(92, sum, "46 studs on each of two beams"),
+                    () -> assertTrue(all.toString().contains("headed studs 92.0"), all.toString()),
+                    () -> assertTrue(all.toString().contains("cambered pieces 2.0"), all.toString()));
+        }
+    }
+
     private static List<String> texts(Row row, int n) {
         List<String> out = new ArrayList<>();
         for (int i = 0; i < n; i++) {

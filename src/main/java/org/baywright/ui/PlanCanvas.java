@@ -363,8 +363,7 @@ public final class PlanCanvas extends Region {
         }
         if (laidOut == null) {
             laidOutScale = view.scale();
-            laidOut = CompositeLabels.apply(picture.build(PX_PER_MM / laidOutScale), model.currentMembers(), model.units(),
-                    PX_PER_MM / laidOutScale, true);
+            laidOut = picture.build(PX_PER_MM / laidOutScale);
         }
         return laidOut;
     }

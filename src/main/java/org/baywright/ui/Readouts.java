@@ -128,31 +128,19 @@ public final class Readouts {
 
     /**
      * A member as the framing plan names it: the size, then the stud count in brackets and the camber, e.g.
-     * {@code W16X26 (16) c=3/4"} (SI: {@code W410X39 (16) c=20mm}); a fixed size is in square brackets as on
-     * the plan; a bare-steel member is its size alone. Common practice for plan notation.
+     * {@code W16X26 (16) c=3/4"}; a fixed size is in square brackets as on the plan; a bare-steel member is its
+     * size alone. The drawings' own notation ({@link org.baywright.report.drawing.MemberLabels}), so the
+     * canvas, Properties and the framing plan write it alike.
      */
     public static String planNotation(MemberResult m, UnitSystem us, boolean fixed) {
         String size = m.section().isEmpty() ? "" : fixed ? "[" + m.section() + "]" : m.section();
-        if (size.isEmpty() || !m.isComposite()) {
-            return size;
-        }
-        StringBuilder b = new StringBuilder(size).append(" (").append(m.studs()).append(')');
-        if (m.camber() > 0) {
-            b.append(" c=").append(camber(m.camber(), us));
-        }
-        return b.toString();
+        return size.isEmpty() || !m.isComposite() ? size
+                : org.baywright.report.drawing.MemberLabels.size(size, m.studs(), m.camber(), us);
     }
 
-    /** A camber as specified: inches in quarters ({@code 3/4"}, {@code 1-1/4"}, {@code 2"}) or whole millimetres. */
+    /** A camber as the drawings write it ({@code 3/4"}, {@code 1 1/4"}, {@code 19 mm}). */
     static String camber(double metres, UnitSystem us) {
-        if (us == UnitSystem.SI) {
-            return Math.round(Units.MM.fromSi(metres)) + "mm";
-        }
-        long quarters = Math.round(Units.IN.fromSi(metres) * 4);
-        long whole = quarters / 4;
-        long q = quarters % 4;
-        String frac = q == 0 ? "" : q == 2 ? "1/2" : q + "/4";
-        return (whole == 0 ? frac : q == 0 ? String.valueOf(whole) : whole + "-" + frac) + "\"";
+        return org.baywright.report.drawing.MemberLabels.camber(metres, us);
     }
 
     /**

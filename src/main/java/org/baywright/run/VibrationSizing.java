@@ -102,11 +102,31 @@ public final class VibrationSizing {
             Option beams = beamsRefused ? null : beams(floor, b, catalog, filterOf(members, bay.beams(), basis), members);
             Option girder = girdersRefused ? null : girder(floor, b, catalog, filterOf(members,
                     bay.girders().stream().map(Bay.BayGirder::id).toList(), basis), members);
+            List<Option> picks = new ArrayList<>();
             Option pick = better(beams, girder, b.ratio());
-            if (pick == null) {
-                continue;
+            if (pick != null && pick.meets() || beamsRefused || girdersRefused) {
+                if (pick != null) {
+                    picks.add(pick);
+                }
+            } else {
+                // neither change alone meets the limit: beams and girders together, the pair of least steel that
+                // meets it, else the pair with the lowest ratio
+                picks.addAll(both(floor, b, catalog, filterOf(members, bay.beams(), basis),
+                        filterOf(members, bay.girders().stream().map(Bay.BayGirder::id).toList(), basis), members));
             }
             Map<String, String> floorLeast = least.computeIfAbsent(bay.floor(), k -> new LinkedHashMap<>());
+            for (Option o : picks) {
+                record(o, b, members, floorLeast, out);
+            }
+        }
+        return out;
+    }
+
+    /** Gives the option's members at least its section and records the change. */
+    private static void record(Option pick, BayResult b, Map<String, MemberResult> members, Map<String, String> floorLeast,
+            List<Change> out) {
+        Bay bay = b.bay();
+        {
             List<String> changed = new ArrayList<>();
             for (String id : pick.members) {
                 MemberResult m = members.get(id);
@@ -120,6 +140,86 @@ public final class VibrationSizing {
                 out.add(new Change(bay.floor(), bay.id(), b.levels(), changed, pick.from, pick.section.designation(), b.ratio(),
                         pick.ratio));
             }
+        }
+    }
+
+    /**
+     * The bay's beams and girders stiffened together: of every pair of the lightest sections for their I_x (each
+     * side possibly unchanged), the pair that meets the limit with the least steel added, else the pair with the
+     * lowest ratio; as two options (beams, girders), either left out when unchanged; empty when nothing helps.
+     */
+    private static List<Option> both(Floor floor, BayResult b, Catalog catalog, SearchFilter beamFilter, SearchFilter girderFilter,
+            Map<String, MemberResult> members) {
+        Bay bay = b.bay();
+        List<Bay.BayGirder> interior = bay.girders().stream().filter(Bay.BayGirder::bothSides).toList();
+        List<Bay.BayGirder> used = (interior.isEmpty() ? bay.girders() : interior).stream().filter(x -> x.section() != null).toList();
+        Bay.BayGirder g = used.stream().filter(x -> x.id().equals(b.girder())).findFirst().orElse(null);
+        if (g == null) {
+            return List.of();
+        }
+        List<String> ids = used.stream().map(Bay.BayGirder::id).toList();
+        List<Section> beamSteps = new ArrayList<>();
+        beamSteps.add(null);
+        beamSteps.addAll(stiffer(catalog, beamFilter, bay.beamSection()));
+        List<Section> girderSteps = new ArrayList<>();
+        girderSteps.add(null);
+        girderSteps.addAll(stiffer(catalog, girderFilter, g.section()));
+        Section bestBeam = null;
+        Section bestGirder = null;
+        double bestRatio = b.ratio();
+        double bestAdded = Double.POSITIVE_INFINITY;
+        boolean bestMeets = false;
+        for (Section sb : beamSteps) {
+            double addedBeams = 0;
+            if (sb != null) {
+                for (String id : bay.beams()) {
+                    MemberResult m = members.get(id);
+                    if (m != null && m.design() != null && m.design().section() != null) {
+                        addedBeams += Math.max(0, sb.weight() - m.design().section().weight()) * m.length();
+                    }
+                }
+            }
+            for (Section sg : girderSteps) {
+                if (sb == null && sg == null) {
+                    continue;
+                }
+                double added = addedBeams;
+                List<Bay.BayGirder> girders = new ArrayList<>();
+                for (Bay.BayGirder x : bay.girders()) {
+                    if (sg != null && ids.contains(x.id()) && x.section().props().ix() < sg.props().ix()) {
+                        girders.add(new Bay.BayGirder(x.id(), sg, x.span(), x.carriedWidth(), x.adjacentSpan(), x.bothSides()));
+                        MemberResult m = members.get(x.id());
+                        added += m == null ? 0 : Math.max(0, sg.weight() - x.section().weight()) * m.length();
+                    } else {
+                        girders.add(x);
+                    }
+                }
+                if (bestMeets && added >= bestAdded) {
+                    continue;
+                }
+                Bay stiffer = new Bay(bay.id(), bay.floor(), bay.beams(), bay.beam(), sb == null ? bay.beamSection() : sb,
+                        bay.beamSpan(), bay.spacing(), bay.beamAdjacentSpan(), girders, bay.centre(), bay.beamAngle(), bay.width(),
+                        bay.floorWidth(), bay.floorLength(), bay.edge());
+                BayResult r = BayChecks.check(floor, stiffer, b.levels(), b.settings());
+                if (!r.checked()) {
+                    continue;
+                }
+                boolean meets = r.ratio() <= 1;
+                if (meets && (!bestMeets || added < bestAdded) || !bestMeets && !meets && r.ratio() < bestRatio - 1e-6) {
+                    bestMeets = meets;
+                    bestAdded = added;
+                    bestRatio = r.ratio();
+                    bestBeam = sb;
+                    bestGirder = sg;
+                }
+            }
+        }
+        List<Option> out = new ArrayList<>();
+        if (bestBeam != null) {
+            out.add(new Option(bay.beams(), bay.beamSection().designation(), bestBeam, bestRatio, bestAdded));
+        }
+        if (bestGirder != null) {
+            out.add(new Option(ids, g.section().designation(), bestGirder, bestRatio, bestAdded));
         }
         return out;
     }

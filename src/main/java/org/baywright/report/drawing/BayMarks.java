@@ -20,9 +20,9 @@ import org.baywright.takedown.BayResult;
  */
 public final class BayMarks {
     /** Ink of the bay layer's text. */
-    public static final Rgb INK = new Rgb(88, 52, 140);
+    public static final Rgb INK = new Rgb(120, 30, 160);
     /** Ink of an exceeding bay's text and its diamond. */
-    public static final Rgb EXCEEDS = new Rgb(176, 0, 120);
+    public static final Rgb EXCEEDS = new Rgb(205, 0, 110);
 
     private BayMarks() {
     }

@@ -13,8 +13,8 @@ import org.baywright.takedown.BayResult;
  * The bay layer of a framing plan ({@link Layer#BAYS}): for each checked bay, two short lines, "f_n 3.71 Hz" and
  * "a_p/g 0.348 %", centred on the bay, turned to read along its beams. They sit midway between two beams (when a
  * beam runs through the bay's centre, half a spacing across from it) and a quarter of the beam span from midspan,
- * where the members' own labels are not. A bay whose a_p/g exceeds the limit is drawn in bold with a diamond
- * outline around its text; the colours (a violet for the layer, a deep magenta for exceeding bays) are our own and
+ * where the members' own labels are not. A bay whose a_p/g exceeds the limit is drawn in bold with a solid
+ * diamond before its text; the colours (a violet for the layer, a deep magenta for exceeding bays) are our own and
  * are not on the demand/capacity colour map. Bays outside the method (f_n above 9 Hz) say so; bays not checked get
  * nothing.
  */
@@ -78,15 +78,16 @@ public final class BayMarks {
                         size, rot, Anchor.MIDDLE_CENTRE, ink, exceeds));
             }
             if (exceeds) {
-                // a diamond holds a text box of half-sizes (a, b) when a/w + b/h <= 1: w = 2a, h = 2b, plus a margin
+                // a solid diamond before the lines (on the side where they start reading), between them across
                 String longer = lines.get(0).length() >= lines.get(1).length() ? lines.get(0) : lines.get(1);
-                double w = (TextMetrics.width(longer, size, true) + size) * metresPerMm;
-                double h = 2 * step + size * metresPerMm;
+                double half = 0.5 * TextMetrics.width(longer, size, true) * metresPerMm;
+                double d = 0.8 * size * metresPerMm;
                 double ux = Math.cos(r);
                 double uy = Math.sin(r);
-                List<Pt> d = List.of(new Pt(c.x() + ux * w, c.y() + uy * w), new Pt(c.x() + nx * h, c.y() + ny * h),
-                        new Pt(c.x() - ux * w, c.y() - uy * w), new Pt(c.x() - nx * h, c.y() - ny * h));
-                out.add(new Primitive.Path(Layer.BAYS, Space.PLAN, d, true, Pen.solid(0.35, EXCEEDS), null, null));
+                Pt m = new Pt(c.x() - ux * (half + 1.6 * d), c.y() - uy * (half + 1.6 * d));
+                List<Pt> diamond = List.of(new Pt(m.x() + ux * d, m.y() + uy * d), new Pt(m.x() + nx * 1.3 * d, m.y() + ny * 1.3 * d),
+                        new Pt(m.x() - ux * d, m.y() - uy * d), new Pt(m.x() - nx * 1.3 * d, m.y() - ny * 1.3 * d));
+                out.add(new Primitive.Path(Layer.BAYS, Space.PLAN, diamond, true, null, EXCEEDS, null));
             }
         }
         return out;

@@ -122,7 +122,7 @@ final class SheetBuilder {
             y = block("FLOOR VIBRATION (AISC DG11)", List.of(
                     "At each bay checked for walking (DG11 2nd ed., low-frequency floors): its frequency f_n and peak"
                             + " acceleration a_p/g, limit a_o/g = " + org.baywright.calc.CalcFormat.sig(100 * limit) + " %.",
-                    "Bold in a diamond: the bay exceeds the limit. \"above 9 Hz\": outside the method."),
+                    "Bold, after a solid diamond: the bay exceeds the limit. \"above 9 Hz\": outside the method."),
                     panelX + 4, w - margin - 4, y - 1.5 * t, titleTop);
         }
         notes(panelX + 4, w - margin - 4, y - 1.5 * t, titleTop);

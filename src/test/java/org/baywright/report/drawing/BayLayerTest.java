@@ -119,6 +119,11 @@ class BayLayerTest {
             if (p instanceof Primitive.Text t) {
                 double[] a = box(d, t);
                 checks.add(() -> assertTrue(labels.stream().noneMatch(b -> overlap(a, b)), t.text() + " overlaps a member label"));
+                // and it lies wholly inside its bay
+                Bay bay = bays().stream().map(BayResult::bay).filter(x -> inside(x, t.at())).findFirst().orElseThrow();
+                for (Pt corner : List.of(new Pt(a[0], a[1]), new Pt(a[2], a[1]), new Pt(a[0], a[3]), new Pt(a[2], a[3]))) {
+                    checks.add(() -> assertTrue(inside(bay, d.viewport().toPlan(corner)), t.text() + " runs out of " + bay.id()));
+                }
             }
         }
         assertFalse(checks.isEmpty());

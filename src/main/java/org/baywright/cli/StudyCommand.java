@@ -44,7 +44,8 @@ import picocli.CommandLine.Spec;
             "Prints the variants sorted by steel weight per floor area, marks the Pareto fronts of weight against "
             + "structural depth (D) and against piece count (P), and the best three for the objective (see docs/study.md).",
             "Exit code: 0 some variant sized without problems; 1 none did; 2 bad input."},
-        footer = {"", "Parameters: bay-x, bay-y, beam-spacing, beam-count, beam-direction, method, max-depth, column-series.",
+        footer = {"", "Parameters: bay-x, bay-y, beam-spacing, beam-count, beam-direction, method, max-depth, column-series,"
+            + " composite (on,off), topping, concrete (a unit weight: 110pcf,145pcf).",
             "Values: a range A..B:STEP (6ft..15ft:1ft) or a list a,b,c (x,y); a bay value may give one width per bay: 30ft;35ft;30ft.",
             "", Caution.TEXT})
 public final class StudyCommand implements Callable<Integer> {

@@ -145,6 +145,7 @@ final class PlanAssembler {
     private static final Map<String, CompositeMode> ACTIONS = ordered("composite", CompositeMode.COMPOSITE, "non-composite",
             CompositeMode.NON_COMPOSITE, "per-member", CompositeMode.PER_MEMBER);
     private static final Map<String, Boolean> SHORING = ordered("unshored", false, "shored", true);
+    private static final Map<String, Boolean> VIBRATION_SIZING = ordered("check", false, "size", true);
     private static final Map<String, StudPlacement> STUD_POSITIONS = ordered("weak", StudPlacement.WEAK, "strong",
             StudPlacement.STRONG);
     private static final double IN = 0.0254;
@@ -583,7 +584,8 @@ final class PlanAssembler {
                 cl = v;
             }
         }
-        return new CompositeFloor(mode, shored, cl);
+        boolean size = choice(c.vibration(), p + "/vibration", floorId, "vibration", VIBRATION_SIZING, false);
+        return new CompositeFloor(mode, shored, cl, size);
     }
 
     /** The ids used on one floor: every object of a floor has its own id. */

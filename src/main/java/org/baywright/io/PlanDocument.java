@@ -82,7 +82,7 @@ final class PlanDocument {
 
     /** How a floor's members work with its slab; absent: non-composite (bare steel). */
     record CompositeFloorDoc(@Required String action, String shoring,
-            @QuantityOf(Dimension.AREA_LOAD) String constructionLive) {
+            @QuantityOf(Dimension.AREA_LOAD) String constructionLive, String vibration) {
     }
 
     /** The slab a deck carries: profile, concrete, studs; {@code weight} overrides the computed weight. */

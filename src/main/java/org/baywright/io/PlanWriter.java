@@ -135,7 +135,7 @@ final class PlanWriter {
             case PER_MEMBER -> "per-member";
         };
         return new PlanDocument.CompositeFloorDoc(action, c.shored() ? "shored" : "unshored",
-                q(c.constructionLive(), units.areaLoad()));
+                q(c.constructionLive(), units.areaLoad()), c.sizeForVibration() ? "size" : null);
     }
 
     private DeckDoc deck(Deck d) {

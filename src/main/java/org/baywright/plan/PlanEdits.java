@@ -495,6 +495,59 @@ public final class PlanEdits {
         });
     }
 
+    /**
+     * Gives a deck area a slab (profile, concrete, studs), or takes it away ({@code slab} null: the deck
+     * carries no slab described, its weight comes from the area loads and no member acts with it).
+     *
+     * @throws IllegalArgumentException when the floor has no such deck
+     */
+    public static Plan setSlab(Plan p, String floorId, String deckId, Slab slab) {
+        return editFloor(p, floorId, f -> {
+            if (f.decks().stream().noneMatch(d -> d.id().equals(deckId))) {
+                throw new IllegalArgumentException("floor " + floorId + " has no deck " + deckId);
+            }
+            return f.withDecks(f.decks().stream().map(d -> d.id().equals(deckId) ? d.withSlab(slab) : d).toList());
+        });
+    }
+
+    /**
+     * Sets how the members of a floor layout act with its slab: composite, non-composite or per member;
+     * shored or not; the construction live load.
+     */
+    public static Plan setComposite(Plan p, String floorId, CompositeFloor composite) {
+        if (composite == null) {
+            throw new IllegalArgumentException("floor " + floorId + ": the composite setting is required");
+        }
+        return editFloor(p, floorId, f -> f.withComposite(composite));
+    }
+
+    /**
+     * A member's own choice of composite action: true or false, or empty to follow its floor. Infill beams
+     * follow their floor.
+     */
+    public static Plan setMemberComposite(Plan p, String floorId, String memberId, Optional<Boolean> composite) {
+        return editMember(p, floorId, memberId, "its composite action", m -> m.withComposite(composite));
+    }
+
+    /** Fixes a member's stud count (empty: searched); a count below zero is refused. */
+    public static Plan setFixedStuds(Plan p, String floorId, String memberId, java.util.OptionalInt studs) {
+        if (studs.isPresent() && studs.getAsInt() < 0) {
+            throw new IllegalArgumentException(memberId + ": a stud count is a whole number 0 or more, not " + studs.getAsInt());
+        }
+        return editMember(p, floorId, memberId, "its studs", m -> m.withFixedStuds(studs));
+    }
+
+    private static Plan editMember(Plan p, String floorId, String id, String what, UnaryOperator<Member> edit) {
+        return editFloor(p, floorId, f -> {
+            if (f.member(id).isEmpty()) {
+                throw new IllegalArgumentException(id.contains("/")
+                        ? id + " is an infill beam; " + what + " follow its bay. Draw it as a beam to choose them"
+                        : "floor " + floorId + " has no member " + id);
+            }
+            return withMembers(f, f.members().stream().map(m -> m.id().equals(id) ? edit.apply(m) : m).toList());
+        });
+    }
+
     /** The id of the deck area under a point (the last one drawn wins), if any. */
     public static Optional<String> deckAt(Floor f, Point q) {
         for (int i = f.decks().size() - 1; i >= 0; i--) {

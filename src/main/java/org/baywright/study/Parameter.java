@@ -19,7 +19,13 @@ public enum Parameter {
     /** The actual-depth limit of beams and girders. */
     MAX_DEPTH("max-depth"),
     /** The nominal-depth series allowed for columns. */
-    COLUMN_SERIES("column-series");
+    COLUMN_SERIES("column-series"),
+    /** Whether the members act with the slab: every layout with a slab composite (on) or bare steel (off). */
+    COMPOSITE("composite"),
+    /** The concrete above the deck of every slab (the slab thickness less the rib height). */
+    TOPPING("topping"),
+    /** The concrete unit weight of every slab. */
+    CONCRETE("concrete");
 
     private final String key;
 

@@ -78,6 +78,29 @@ public record Setting(Parameter parameter, List<Double> numbers, List<String> te
         return new Setting(Parameter.COLUMN_SERIES, List.of(), s, String.join(";", s));
     }
 
+    /** Composite action on ("on": every layout with a slab composite) or off (bare steel). */
+    public static Setting composite(boolean on) {
+        String t = on ? "on" : "off";
+        return new Setting(Parameter.COMPOSITE, List.of(), List.of(t), t);
+    }
+
+    /** The concrete above the deck of every slab, m. */
+    public static Setting topping(double t, String label) {
+        if (!(t > 0) || !Double.isFinite(t)) {
+            throw new IllegalArgumentException("topping must be greater than zero");
+        }
+        return new Setting(Parameter.TOPPING, List.of(t), List.of(), label != null ? label : si(List.of(t)));
+    }
+
+    /** The concrete unit weight of every slab, N/m³. */
+    public static Setting concrete(double density, String label) {
+        if (!(density > 0) || !Double.isFinite(density)) {
+            throw new IllegalArgumentException("concrete must be a unit weight greater than zero");
+        }
+        return new Setting(Parameter.CONCRETE, List.of(density), List.of(), label != null ? label
+                : String.format(Locale.ROOT, "%.2fkN/m³", density / 1000));
+    }
+
     /** The single number (spacing, count, depth). */
     public double number() {
         return numbers.get(0);

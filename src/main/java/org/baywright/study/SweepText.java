@@ -15,7 +15,8 @@ import org.baywright.units.UnitSystem;
  * {@code A..B:STEP} (both ends included when the steps hit them) or a list {@code a,b,c}. Lengths carry
  * their units ({@code beam-spacing=6ft..15ft:1ft}, {@code max-depth=18in,21in,24in}); counts are whole
  * numbers ({@code beam-count=1..4:1}); {@code beam-direction=x,y}; {@code method=lrfd,asd};
- * {@code column-series=W14,W12;W14}. A bay value may list one width per bay separated by semicolons,
+ * {@code column-series=W14,W12;W14}; {@code composite=on,off}; {@code topping=3.5in..5.5in:0.5in} (the concrete
+ * above the deck of every slab); {@code concrete=110pcf,145pcf} (its unit weight). A bay value may list one width per bay separated by semicolons,
  * with {@code N@LENGTH} for repeats ({@code bay-x=30ft,25ft;35ft;35ft;25ft}). Errors are
  * {@link IllegalArgumentException}s whose one-line message names the option and the text.
  */
@@ -103,6 +104,20 @@ public final class SweepText {
                     });
                 }
             }
+            case TOPPING, CONCRETE -> {
+                Dimension dim = p == Parameter.TOPPING ? Dimension.LENGTH : Dimension.UNIT_WEIGHT;
+                double from = Quantities.parsePositive(where, a, dim);
+                double to = Quantities.parsePositive(where, b, dim);
+                double by = Quantities.parsePositive(where, step, dim);
+                check(to >= from, where, "the end of the range (" + b + ") is below its start (" + a + ")");
+                long n = SearchLimits.count(from, to, by);
+                check(n <= MAX_VALUES, where, "the range has " + n + " values; at most " + MAX_VALUES);
+                Unit u = p == Parameter.TOPPING ? units.smallLength() : units.unitWeight();
+                for (long i = 0; i < n; i++) {
+                    double v = from + i * by;
+                    out.add(p == Parameter.TOPPING ? Setting.topping(v, label(v, u)) : Setting.concrete(v, label(v, u)));
+                }
+            }
             default -> throw new IllegalArgumentException(where + ": " + p.key() + " takes a list, not a range");
         }
         return out;
@@ -129,6 +144,13 @@ public final class SweepText {
                 check(m.equals("lrfd") || m.equals("asd"), where, "\"" + item + "\" is not a design method; use lrfd or asd");
                 yield Setting.method(m);
             }
+            case COMPOSITE -> switch (item.toLowerCase(Locale.ROOT)) {
+                case "on" -> Setting.composite(true);
+                case "off" -> Setting.composite(false);
+                default -> throw new IllegalArgumentException(where + ": \"" + item + "\" is not on or off");
+            };
+            case TOPPING -> Setting.topping(Quantities.parsePositive(where, item, Dimension.LENGTH), item);
+            case CONCRETE -> Setting.concrete(Quantities.parsePositive(where, item, Dimension.UNIT_WEIGHT), item);
             case COLUMN_SERIES -> {
                 List<String> s = List.of(item.split(";"));
                 for (String x : s) {

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.function.UnaryOperator;
 import org.baywright.plan.AreaLoad;
 import org.baywright.plan.Column;
+import org.baywright.plan.CompositeMode;
 import org.baywright.plan.Deck;
 import org.baywright.plan.DesignSettings;
 import org.baywright.plan.Floor;
@@ -19,6 +20,7 @@ import org.baywright.plan.Plan;
 import org.baywright.plan.Point;
 import org.baywright.plan.PointLoadItem;
 import org.baywright.plan.Polygon;
+import org.baywright.plan.Slab;
 
 /**
  * The variations a study applies, each a pure function from a plan to a new plan. They work on any
@@ -43,6 +45,9 @@ public final class Variations {
             case METHOD -> method(plan, s.texts().get(0));
             case MAX_DEPTH -> maxDepth(plan, s.number());
             case COLUMN_SERIES -> columnSeries(plan, s.texts());
+            case COMPOSITE -> composite(plan, s.texts().get(0).equals("on"));
+            case TOPPING -> slabs(plan, "topping", sl -> sl.withTopping(s.number()));
+            case CONCRETE -> slabs(plan, "concrete", sl -> sl.withDensity(s.number()));
         };
     }
 
@@ -259,6 +264,33 @@ public final class Variations {
     /** The column series allowed. */
     public static Plan columnSeries(Plan plan, List<String> series) {
         return withSettings(plan, plan.settings().withColumnSeries(series));
+    }
+
+    /**
+     * Composite action on or off: every floor layout whose decks carry a slab becomes composite (its
+     * members' own choices apply as on a composite floor) or non-composite (bare steel); shoring and the
+     * construction live load are kept. A plan with no slab described cannot vary it.
+     */
+    public static Plan composite(Plan plan, boolean on) {
+        requireSlab(plan, "composite");
+        List<Floor> floors = plan.floors().stream().map(f -> !f.hasSlab() ? f
+                : f.withComposite(f.composite().withMode(on ? CompositeMode.COMPOSITE : CompositeMode.NON_COMPOSITE))).toList();
+        return new Plan(plan.name(), plan.units(), plan.settings(), plan.grid(), plan.levels(), floors, plan.columns(), plan.notes());
+    }
+
+    /** Every slab of the plan changed by {@code f} (decks without a slab are left alone). */
+    static Plan slabs(Plan plan, String key, UnaryOperator<Slab> f) {
+        requireSlab(plan, key);
+        List<Floor> floors = plan.floors().stream().map(fl -> !fl.hasSlab() ? fl
+                : fl.withDecks(fl.decks().stream().map(d -> d.slab() == null ? d : d.withSlab(f.apply(d.slab()))).toList())).toList();
+        return new Plan(plan.name(), plan.units(), plan.settings(), plan.grid(), plan.levels(), floors, plan.columns(), plan.notes());
+    }
+
+    private static void requireSlab(Plan plan, String key) {
+        if (plan.floors().stream().noneMatch(Floor::hasSlab)) {
+            throw new IllegalArgumentException(key + ": no deck of the plan carries a slab; describe one first"
+                    + " (editor: Deck tool, then Properties)");
+        }
     }
 
     private static Plan withSettings(Plan plan, DesignSettings s) {

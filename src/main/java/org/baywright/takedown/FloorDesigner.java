@@ -17,6 +17,7 @@ import org.baywright.design.CompositeCriteria;
 import org.baywright.design.CompositeDesign;
 import org.baywright.design.CompositeMember;
 import org.baywright.design.MemberStatus;
+import org.baywright.design.SearchFilter;
 import org.baywright.geometry.FloorTributary;
 import org.baywright.geometry.MemberTributary;
 import org.baywright.geometry.TributaryAnalysis;
@@ -211,7 +212,7 @@ public final class FloorDesigner {
                                 + "; the member was sized instead", List.of(m.start(), m.end())));
             }
             sized = searches.search(span, a, b, caseLoads, deflectionLoads, criteria,
-                    m.kind() == MemberKind.GIRDER ? rules.girders() : rules.beams());
+                    filterFor(m));
         }
         BeamDesign d = sized.design();
         if (d.status() == MemberStatus.OVERSTRESSED && !comparison) {
@@ -222,6 +223,31 @@ public final class FloorDesigner {
                     List.of(m.start(), m.end())));
         }
         return sized;
+    }
+
+    /**
+     * The sections a search of member {@code m} may choose: its kind's, and for a member stiffened for walking
+     * vibration (run.PlanRun) only those of at least that moment of inertia.
+     */
+    private SearchFilter filterFor(Member m) {
+        SearchFilter f = m.kind() == MemberKind.GIRDER ? rules.girders() : rules.beams();
+        Section stiff = vibrationSection(m);
+        if (stiff == null) {
+            return f;
+        }
+        java.util.Set<String> out = new java.util.HashSet<>(f.excluded());
+        for (Section s : searches.catalog().sections()) {
+            if (s.props().ix() < stiff.props().ix() * (1 - 1e-12)) {
+                out.add(s.designation());
+            }
+        }
+        return new SearchFilter(f.minDepth(), f.maxDepth(), f.series(), out);
+    }
+
+    /** The least section of a member stiffened for walking vibration, or null. */
+    private Section vibrationSection(Member m) {
+        String s = rules.vibrationSections().get(m.id());
+        return s == null ? null : searches.catalog().find(s).orElse(null);
     }
 
     /**
@@ -251,7 +277,7 @@ public final class FloorDesigner {
         Section fixedSection = fixed.flatMap(searches.catalog()::find).orElse(null);
         int fixedStuds = fixedSection != null && m.fixedStuds().isPresent() ? m.fixedStuds().getAsInt() : -1;
         Searches.CompositeSized cs = searches.composite(member, caseLoads, deflectionLoads, cc,
-                m.kind() == MemberKind.GIRDER ? rules.girders() : rules.beams(), fixedSection, fixedStuds);
+                filterFor(m), fixedSection, fixedStuds);
         CompositeDesign cd = cs.design();
         if (fixed.isPresent() && fixedSection == null) {
             problems.add(new Problem(Problem.Severity.ERROR, "unknown-section", "floor " + floor.id(), m.id(),

@@ -99,6 +99,13 @@ final class CanvasLayers {
                     g.stroke();
                 }
             }
+            for (org.baywright.plan.Deck d : f.decks()) {
+                if (sel.contains(d.id())) {
+                    // a deck picked with the Deck tool: its outline
+                    CanvasOverlay.polygonPath(g, d.outline(), view);
+                    g.stroke();
+                }
+            }
             for (AreaLoad a : f.areaLoads()) {
                 if (sel.contains(a.id())) {
                     CanvasOverlay.polygonPath(g, a.outline(), view);

@@ -400,6 +400,12 @@ public final class CanvasTools {
         if (dragged) {
             angle = Math.toDegrees(Math.atan2(w.y() - anchor.y(), w.x() - anchor.x()));
             angle = Math.round(angle / 5) * 5.0;
+        } else if (!deck.get().equals(model.selectedProperty().get())) {
+            // the first click picks the deck: Properties shows its slab; a second click turns it
+            model.select(deck.get());
+            model.messageProperty().set("Deck " + deck.get() + ": its slab is in Properties; click it again to turn its span by 90°.");
+            cancel();
+            return;
         } else {
             double was = f.get().decks().stream().filter(d -> d.id().equals(deck.get())).findFirst().orElseThrow().spanAngle();
             angle = was + 90;
@@ -407,6 +413,7 @@ public final class CanvasTools {
         double a = angle;
         model.edit(p -> PlanEdits.setDeckSpan(p, floorId, deck.get(), a),
                 String.format(Locale.ROOT, "Deck %s spans at %.0f°", deck.get(), ((a % 180) + 180) % 180));
+        model.select(deck.get());
         cancel();
     }
 

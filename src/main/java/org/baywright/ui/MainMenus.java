@@ -66,6 +66,7 @@ final class MainMenus {
 
     private Menu edit() {
         MenuItem undo = item("Undo", "Shortcut+Z", model::undo);
+        undo.setId("menu-undo");
         MenuItem redo = item("Redo", "Shortcut+Shift+Z", model::redo);
         MenuItem redoY = item("Redo (again)", "Shortcut+Y", model::redo);
         redoY.setVisible(false);

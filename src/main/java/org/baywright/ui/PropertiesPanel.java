@@ -69,6 +69,8 @@ final class PropertiesPanel {
                 field(f, row);
             } else if (item instanceof PropertiesViewModel.UseChoice u) {
                 use(u, row);
+            } else if (item instanceof PropertiesViewModel.Choice c) {
+                choice(c, row);
             }
             row++;
         }
@@ -90,6 +92,22 @@ final class PropertiesPanel {
         });
         grid.add(Styles.with(new Label(f.label()), Styles.PROPERTY_LABEL), 0, row);
         grid.add(text, 1, row);
+    }
+
+    /** One of a few options (slab on or off, stud position, composite action, shoring): picking one is an edit. */
+    private void choice(PropertiesViewModel.Choice c, int row) {
+        javafx.scene.control.ComboBox<String> box = new javafx.scene.control.ComboBox<>(
+                javafx.collections.FXCollections.observableArrayList(c.kind().options()));
+        box.setValue(c.current());
+        box.setId(c.id());
+        box.valueProperty().addListener((o, a, b) -> {
+            if (b != null && !b.equals(c.current()) && !vm.setChoice(c, b)) {
+                // refused (the message says why): the list shows the plan's value again
+                javafx.application.Platform.runLater(() -> box.setValue(c.current()));
+            }
+        });
+        grid.add(Styles.with(new Label(c.label()), Styles.PROPERTY_LABEL), 0, row);
+        grid.add(box, 1, row);
     }
 
     /** The use of a load area: the occupancy in the trade's words with its ASCE 7 clause. */

@@ -126,6 +126,79 @@ public final class Readouts {
         return rows;
     }
 
+    /**
+     * A member as the framing plan names it: the size, then the stud count in brackets and the camber, e.g.
+     * {@code W16X26 (16) c=3/4"}; a fixed size is in square brackets as on the plan; a bare-steel member is its
+     * size alone. The drawings' own notation ({@link org.baywright.report.drawing.MemberLabels}), so the
+     * canvas, Properties and the framing plan write it alike.
+     */
+    public static String planNotation(MemberResult m, UnitSystem us, boolean fixed) {
+        String size = m.section().isEmpty() ? "" : fixed ? "[" + m.section() + "]" : m.section();
+        return size.isEmpty() || !m.isComposite() ? size
+                : org.baywright.report.drawing.MemberLabels.size(size, m.studs(), m.camber(), us);
+    }
+
+    /** A camber as the drawings write it ({@code 3/4"}, {@code 1 1/4"}, {@code 19 mm}). */
+    static String camber(double metres, UnitSystem us) {
+        return org.baywright.report.drawing.MemberLabels.camber(metres, us);
+    }
+
+    /**
+     * The Properties rows of a composite member (AISC 360-16 Chapter I): effective width by side, the studs
+     * and their strength, the degree of composite action, where the plastic neutral axis lies, the
+     * construction stage, the camber, the lower-bound moment of inertia and the bare-steel section the
+     * member would take without the slab. Empty for a bare-steel member.
+     */
+    public static List<Row> composite(MemberResult m, UnitSystem us) {
+        List<Row> rows = new ArrayList<>();
+        var c = m.composite();
+        if (c == null || c.design() == null) {
+            return rows;
+        }
+        var d = c.design();
+        rows.add(new Row("Composite", "acts with the slab of " + c.deck() + ", ribs " + c.ribs()
+                + (c.shored() ? ", shored" : ", unshored")));
+        if (d.section() == null) {
+            rows.add(new Row("Composite design", "no section and stud count passes"));
+            return rows;
+        }
+        rows.add(new Row("Effective width b_eff", UnitSystem.format(d.beff(), us.smallLength(), 1) + "  (left "
+                + UnitSystem.format(d.beffLeft(), us.smallLength(), 1) + ", right " + UnitSystem.format(d.beffRight(), us.smallLength(), 1)
+                + "; I3.1a)"));
+        rows.add(new Row("Studs", d.studs() + " (" + d.studsPerHalf() + " each side of mid-span)"));
+        rows.add(new Row("Stud strength Q_n", UnitSystem.format(d.qn(), us.force(), 2) + " (I8-1)"));
+        rows.add(new Row("ΣQ_n", UnitSystem.format(d.sumQn(), us.force(), 1)));
+        var f = d.flexure();
+        if (f != null) {
+            rows.add(new Row("Composite action", String.format(Locale.ROOT, "%.0f %% of full", 100 * f.degree())));
+            rows.add(new Row("Plastic neutral axis", pna(f, us)));
+        }
+        rows.add(new Row("Construction stage", c.shored() ? "none (shored)" : ratio(d.constructionRatio())
+                + " (bare steel, wet concrete and construction live load)"));
+        rows.add(new Row("Camber", d.camber() > 0 ? camber(d.camber(), us)
+                + "  (bare-steel deflection under wet concrete " + UnitSystem.format(d.preDeflection(), us.smallLength(), 2) + ")"
+                : c.shored() ? "none (shored)" : "none"));
+        rows.add(new Row("I_LB", UnitSystem.format(d.ilb(), us.inertia(), 0) + " (Commentary Eq. C-I3-1)"));
+        var bare = c.bare();
+        if (bare != null && bare.section() != null) {
+            double w = us.weightPerLength(m.composite().bareWeightPerLength()) - us.weightPerLength(d.section().weight());
+            rows.add(new Row("Bare steel instead", bare.section().designation() + String.format(Locale.ROOT, "  (%+.0f %s)",
+                    w, us == UnitSystem.US ? "lb/ft" : "kg/m") + "  " + ratio(bare.maxRatio())));
+        } else {
+            rows.add(new Row("Bare steel instead", "no section passes without the slab"));
+        }
+        return rows;
+    }
+
+    /** Where the plastic neutral axis lies: in the slab, or at a depth below the top of the steel (flange or web). */
+    static String pna(org.baywright.design.aisc360.CompositeFlexureI3.Result f, UnitSystem us) {
+        return switch (f.pna()) {
+            case SLAB -> "in the slab, " + UnitSystem.format(-f.pnaDepth(), us.smallLength(), 2) + " above the steel";
+            case TOP_FLANGE -> "in the top flange, " + UnitSystem.format(f.pnaDepth(), us.smallLength(), 2) + " below its top";
+            case WEB -> "in the web, " + UnitSystem.format(f.pnaDepth(), us.smallLength(), 2) + " below the top of the steel";
+        };
+    }
+
     /** Said after reactions whose live load is not reduced. */
     static final String LIVE_UNREDUCED = "\n(live load unreduced)";
 

@@ -88,6 +88,13 @@ public final class StudyPanelModel {
                     LENGTHS + " (0 = no limit)"),
             new Field("column-series", Parameter.COLUMN_SERIES, "Column series", "W14,W12;W14", "W14,W12;W14",
                     "series such as W14, several allowed together joined by ; (W12;W14), as a list a,b"),
+            new Field("composite", Parameter.COMPOSITE, "Composite action", "on,off", "on,off",
+                    "on, off, or both: on,off (every floor whose decks carry a slab composite, or bare steel)"),
+            new Field("topping", Parameter.TOPPING, "Concrete above deck", "3.5in..5.5in:1in", "90mm..140mm:25mm",
+                    "lengths with their unit, as a range A..B:STEP or a list a,b,c (every slab; the slab is this plus"
+                            + " the rib height)"),
+            new Field("concrete", Parameter.CONCRETE, "Concrete unit weight", "110pcf,145pcf", "17.5kN/m³,22.8kN/m³",
+                    "unit weights with their unit (pcf or kN/m³), as a range A..B:STEP or a list a,b,c (every slab)"),
             new Field(DEPTH_LIMIT, null, "Structural depth limit", "24in", "610mm",
                     "a length with its unit, e.g. 24in or 610mm (empty = none): members are sized within it and deeper"
                             + " variants are not among the best"),
@@ -277,13 +284,15 @@ public final class StudyPanelModel {
     public static XAxis xAxis(Setup setup, Parameter p) {
         Sweep s = sweep(setup, p);
         boolean numeric = switch (p) {
-            case BAY_X, BAY_Y, BEAM_SPACING, BEAM_COUNT, MAX_DEPTH -> s.values().stream().allMatch(v -> v.numbers().size() == 1);
+            case BAY_X, BAY_Y, BEAM_SPACING, BEAM_COUNT, MAX_DEPTH, TOPPING, CONCRETE ->
+                    s.values().stream().allMatch(v -> v.numbers().size() == 1);
             default -> false;
         };
         UnitSystem us = setup.units();
         String unit = switch (p) {
             case BAY_X, BAY_Y, BEAM_SPACING -> " (" + us.length().symbol() + ")";
-            case MAX_DEPTH -> " (" + us.smallLength().symbol() + ")";
+            case MAX_DEPTH, TOPPING -> " (" + us.smallLength().symbol() + ")";
+            case CONCRETE -> " (" + us.unitWeight().symbol() + ")";
             default -> "";
         };
         String title = field(p.key()).label() + (numeric ? unit : "");
@@ -302,7 +311,8 @@ public final class StudyPanelModel {
         UnitSystem us = setup.units();
         return switch (p) {
             case BAY_X, BAY_Y, BEAM_SPACING -> us.length().fromSi(n);
-            case MAX_DEPTH -> us.smallLength().fromSi(n);
+            case MAX_DEPTH, TOPPING -> us.smallLength().fromSi(n);
+            case CONCRETE -> us.unitWeight().fromSi(n);
             default -> n;
         };
     }

@@ -14,7 +14,8 @@ public enum Tool {
     INFILL("Infill", KeyCode.I, "Click a bay to fill it with beams at the spacing or count in the tool options;"
             + " the direction button turns them."),
     COLUMN("Column", KeyCode.C, "Click a grid intersection (or any point) to add a column."),
-    DECK("Deck", KeyCode.K, "Click a deck area to turn its span by 90°, or drag inside it to set the span direction."),
+    DECK("Deck", KeyCode.K, "Click a deck area to see and edit its slab in Properties; click it again to turn its span by 90°, or drag inside it"
+            + " to set the span direction."),
     LOAD_AREA("Load area", KeyCode.A, "Drag a rectangle, or click the corners and click the first one (or press Enter)"
             + " to close the outline; the values come from the tool options."),
     OPENING("Opening", KeyCode.O, "Drag a rectangle, or click the corners and click the first one (or press Enter) to"

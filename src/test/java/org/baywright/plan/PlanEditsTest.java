@@ -198,6 +198,32 @@ class PlanEditsTest {
         assertEquals(90, turned.floor(f).orElseThrow().decks().get(0).spanAngle(), 1e-12, "folded into [0, 180)");
     }
 
+    /** The composite edits: a deck's slab on and off, a floor's setting, a member's own choice and fixed studs. */
+    @Test
+    void slabsCompositeFloorsAndStuds() {
+        String f = PlanEdits.NEW_FLOOR;
+        Plan p = PlanEdits.addMember(gridded(), f, MemberKind.GIRDER, new Point(0, 0), new Point(30 * FT, 0));
+        String deck = PlanEdits.deckAt(p.floor(f).orElseThrow(), new Point(1, 1)).orElseThrow();
+        Slab thick = Slab.typical().withTopping(Units.IN.toSi(5.5));
+        Plan slabbed = PlanEdits.setSlab(p, f, deck, thick);
+        assertEquals(thick, slabbed.floor(f).orElseThrow().decks().get(0).slab());
+        assertTrue(slabbed.floor(f).orElseThrow().hasSlab());
+        assertEquals(null, PlanEdits.setSlab(slabbed, f, deck, null).floor(f).orElseThrow().decks().get(0).slab(), "slab off");
+        assertThrows(IllegalArgumentException.class, () -> PlanEdits.setSlab(slabbed, f, "DK-99", thick));
+        CompositeFloor shored = CompositeFloor.DEFAULT.withShored(true);
+        assertEquals(shored, PlanEdits.setComposite(slabbed, f, shored).floor(f).orElseThrow().composite());
+        assertThrows(IllegalArgumentException.class, () -> PlanEdits.setComposite(slabbed, "no-such-floor", shored));
+        Plan own = PlanEdits.setMemberComposite(slabbed, f, "G-1-AB", Optional.of(false));
+        own = PlanEdits.setFixedStuds(own, f, "G-1-AB", java.util.OptionalInt.of(18));
+        Member g = own.floor(f).orElseThrow().member("G-1-AB").orElseThrow();
+        assertAll(() -> assertEquals(Optional.of(false), g.composite()),
+                () -> assertEquals(java.util.OptionalInt.of(18), g.fixedStuds()),
+                () -> assertEquals(g.start(), new Point(0, 0), "the member stays where it was"));
+        assertThrows(IllegalArgumentException.class, () -> PlanEdits.setFixedStuds(slabbed, f, "G-1-AB", java.util.OptionalInt.of(-1)));
+        assertThrows(IllegalArgumentException.class,
+                () -> PlanEdits.setMemberComposite(slabbed, f, "IF-AB-12/1", Optional.of(true)));
+    }
+
     @Test
     void drawnGridLinesTakeTheNextOrAnIntermediateLabel() {
         Plan p = gridded();

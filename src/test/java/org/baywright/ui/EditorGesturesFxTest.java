@@ -327,8 +327,11 @@ class EditorGesturesFxTest {
     @Test
     void theOtherToolsByClicking(FxRobot robot) {
         newPlanWithTypedGrid(robot);
-        // Deck: a click turns the span by 90°
+        // Deck: the first click picks the deck (its slab in Properties), the next turns the span by 90°
         robot.clickOn("#tool-deck");
+        robot.clickOn(screen(45 * FT, 45 * FT));
+        assertEquals(0, model.currentFloor().orElseThrow().decks().get(0).spanAngle(), 1e-9);
+        assertEquals(model.currentFloor().orElseThrow().decks().get(0).id(), model.selectedProperty().get());
         robot.clickOn(screen(45 * FT, 45 * FT));
         assertEquals(90, model.currentFloor().orElseThrow().decks().get(0).spanAngle(), 1e-9);
         // Opening: four corners, then the first again closes it

@@ -90,6 +90,111 @@ class PropertiesViewModelTest {
                 .orElseThrow(() -> new AssertionError("no field " + label + " in " + vm.items()));
     }
 
+    private PropertiesViewModel.Choice choice(String label) {
+        return vm.items().stream().filter(i -> i instanceof PropertiesViewModel.Choice c && c.label().equals(label))
+                .map(i -> (PropertiesViewModel.Choice) i).findFirst()
+                .orElseThrow(() -> new AssertionError("no choice " + label + " in " + vm.items()));
+    }
+
+    /**
+     * A deck's slab: switched on it is the typical slab (Slab.typical, common practice: 3 in deck, 4½ in of
+     * 145 pcf concrete), each value typed in the plan's units lands in the plan, a bad value is refused with
+     * a message naming the deck and the field, and undo restores the plan; the computed weight follows the
+     * geometry: w = w_c·(t_c + h_r·w_r/pitch) + w_deck (CHECK-VALUES §10, common practice).
+     */
+    @Test
+    void aDecksSlabIsEditedInItsUnitsAndUndone() {
+        var deck = model.currentFloor().orElseThrow().decks().get(0);
+        String floor = model.currentFloorId();
+        if (deck.slab() != null) {
+            // the demo describes its slab: take it away first, so that switching it on gives the typical one
+            assertTrue(model.edit(p -> org.baywright.plan.PlanEdits.setSlab(p, floor, deck.id(), null), "no slab"));
+        }
+        model.select(deck.id());
+        var before = model.plan();
+        assertEquals("None described", choice("Slab").current());
+        assertTrue(vm.setChoice(choice("Slab"), "Concrete on deck"));
+        var slab = model.currentFloor().orElseThrow().decks().get(0).slab();
+        assertTrue(slab != null, "the slab is on");
+        assertAll(() -> assertEquals("Concrete on deck", choice("Slab").current()),
+                () -> assertEquals(Units.IN.toSi(3), slab.ribHeight(), 1e-9),
+                () -> assertEquals("3in", field("Rib height").current()),
+                () -> assertEquals("145pcf", field("Concrete unit weight").current()),
+                () -> assertEquals("4ksi", field("f′c").current()));
+        // 145 pcf × (4.5 in + 3 in × 6/12) / 12 + 2.5 psf = 145 × 0.5 + 2.5 = 75.0 psf
+        assertEquals("75.0 psf", row("Slab weight, computed").split("\n")[0]);
+        assertTrue(vm.setField(field("Topping"), "5.5"), "a bare number is in inches");
+        assertEquals(Units.IN.toSi(5.5), model.currentFloor().orElseThrow().decks().get(0).slab().topping(), 1e-9);
+        // 145 × (5.5 + 1.5)/12 + 2.5 = 87.08 psf
+        assertEquals("87.1 psf", row("Slab weight, computed").split("\n")[0]);
+        assertTrue(vm.setField(field("Concrete unit weight"), "110pcf"));
+        assertEquals(Units.PCF.toSi(110), model.currentFloor().orElseThrow().decks().get(0).slab().density(), 1e-6);
+        assertFalse(vm.setField(field("Rib width"), "14in"), "wider than the 12 in pitch");
+        assertTrue(model.messageProperty().get().contains(deck.id()) && model.messageProperty().get().contains("rib width"),
+                model.messageProperty().get());
+        assertFalse(vm.setField(field("f′c"), "strong"), "not a stress");
+        assertTrue(model.messageProperty().get().contains("f′c"), model.messageProperty().get());
+        assertFalse(vm.setField(field("Studs per rib"), "4"));
+        assertTrue(vm.setField(field("Slab weight given"), "80psf"));
+        assertEquals(Units.PSF.toSi(80), model.currentFloor().orElseThrow().decks().get(0).slab().weightOverride(), 1e-6);
+        assertTrue(vm.setField(field("Slab weight given"), ""), "blank: computed again");
+        assertTrue(Double.isNaN(model.currentFloor().orElseThrow().decks().get(0).slab().weightOverride()));
+        assertTrue(vm.setChoice(choice("Stud position"), "Strong"));
+        assertEquals(org.baywright.plan.StudPlacement.STRONG,
+                model.plan().floor(floor).orElseThrow().decks().get(0).slab().studPosition());
+        var typed = model.currentFloor().orElseThrow().decks().get(0).slab();
+        assertTrue(vm.setChoice(choice("Slab"), "None described"));
+        assertTrue(vm.setChoice(choice("Slab"), "Concrete on deck"));
+        assertEquals(typed, model.currentFloor().orElseThrow().decks().get(0).slab(), "switched back on, nothing typed is lost");
+        // one undo step per edit: slab on, topping, concrete, weight given and cleared, stud position, off, on
+        for (int i = 0; i < 8; i++) {
+            assertTrue(model.undo(), "undo " + (i + 1));
+        }
+        assertTrue(before.equals(model.plan()), "every slab edit undone");
+    }
+
+    /** In an SI plan the slab's fields are in mm, kPa, kN/m³ and MPa, and what they show reads back unchanged. */
+    @Test
+    void aSlabInAnSiPlanIsInSiUnits() {
+        assertTrue(model.edit(p -> org.baywright.plan.PlanEdits.withUnits(p, "si"), "SI"));
+        var deck = model.currentFloor().orElseThrow().decks().get(0);
+        model.select(deck.id());
+        if (deck.slab() == null) {
+            assertTrue(vm.setChoice(choice("Slab"), "Concrete on deck"));
+        }
+        var slab = model.currentFloor().orElseThrow().decks().get(0).slab();
+        assertAll(() -> assertEquals("76.2mm", field("Rib height").current()),
+                () -> assertTrue(field("Concrete unit weight").current().endsWith("kN/m³"), field("Concrete unit weight").current()),
+                () -> assertTrue(field("f′c").current().endsWith("MPa"), field("f′c").current()));
+        assertFalse(vm.setField(field("Concrete unit weight"), field("Concrete unit weight").current()), "the same value: no edit");
+        assertEquals(slab, model.currentFloor().orElseThrow().decks().get(0).slab());
+        assertTrue(vm.setField(field("Topping"), "115"), "a bare number is in mm");
+        assertEquals(0.115, model.currentFloor().orElseThrow().decks().get(0).slab().topping(), 1e-12);
+        assertTrue(vm.setField(field("Concrete unit weight"), "18kN/m3"));
+        assertEquals(18_000, model.currentFloor().orElseThrow().decks().get(0).slab().density(), 1e-9);
+    }
+
+    /** The floor's composite setting is on the level's Properties: mode, shoring, construction live load. */
+    @Test
+    void aFloorIsSwitchedCompositeFromTheLevel() {
+        model.select(null);
+        String floor = model.currentFloorId();
+        var before = model.plan();
+        boolean was = choice("Composite action").current().equals("Composite");
+        assertTrue(vm.setChoice(choice("Composite action"), was ? "Per member" : "Composite"));
+        assertEquals(was ? org.baywright.plan.CompositeMode.PER_MEMBER : org.baywright.plan.CompositeMode.COMPOSITE,
+                model.plan().floor(floor).orElseThrow().composite().mode());
+        assertTrue(vm.setChoice(choice("Shoring"), "Shored"));
+        assertTrue(model.plan().floor(floor).orElseThrow().composite().shored());
+        assertEquals("20psf", field("Construction live").current(), "20 psf default (ASCE/SEI 37, from memory)");
+        assertTrue(vm.setField(field("Construction live"), "25"));
+        assertEquals(Units.PSF.toSi(25), model.plan().floor(floor).orElseThrow().composite().constructionLive(), 1e-6);
+        assertFalse(vm.setField(field("Construction live"), "-5psf"));
+        assertTrue(model.messageProperty().get().contains("construction live"), model.messageProperty().get());
+        assertTrue(model.undo() && model.undo() && model.undo());
+        assertEquals(before, model.plan());
+    }
+
     @Test
     void aLevelsNameAndStoreyHeightAreUndoableEdits() {
         String name = model.levelProperty().get();

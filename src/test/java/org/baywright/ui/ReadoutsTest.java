@@ -28,7 +28,8 @@ class ReadoutsTest {
     @Test
     void memberRowsNameSectionStatusRatiosAndReactions() {
         EditorModel m = new EditorModel(TaskRunner.direct());
-        m.open(EditorModelTest.DEMO);
+        // a bare-steel member's rows: the demo framed in bare steel (composite rows: CompositeReadoutsTest)
+        m.open(CompositeReadoutsTest.BARE);
         MemberResult g = m.currentMembers().stream().filter(r -> !r.section().isEmpty()).findFirst().orElseThrow();
         List<Readouts.Row> rows = Readouts.member(g, UnitSystem.US);
         List<String> labels = rows.stream().map(Readouts.Row::label).toList();

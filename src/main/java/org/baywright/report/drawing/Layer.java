@@ -11,6 +11,8 @@ public enum Layer {
     LOADS("line-and-point-loads"),
     COLUMNS("columns"),
     MEMBER_LABELS("member-labels"),
+    /** The floor-vibration result of each bay (optional: {@link DrawingOptions#bays()}). */
+    BAYS("bay-vibration"),
     DIMENSIONS("dimensions"),
     TAGS("tags"),
     SHEET("sheet"),

@@ -104,6 +104,9 @@ final class SheetBuilder {
         viewport = new Viewport(scale.denominator(), new Pt((e[0] + e[2]) / 2, (e[1] + e[3]) / 2),
                 new Pt((ax0 + ax1) / 2, (ay0 + ay1) / 2));
         out.addAll(picture.build(viewport.metresPerMm()));
+        List<org.baywright.takedown.BayResult> bays = options.bays() ? run.bays().stream()
+                .filter(b -> b.levels().contains(level.name()) && b.checked()).toList() : List.of();
+        out.addAll(BayMarks.of(bays, 0.85 * t, viewport.metresPerMm()));
 
         sheet(w, h, margin, panelX);
         viewTitle(ax0, margin + 4);
@@ -113,6 +116,14 @@ final class SheetBuilder {
         List<String> slab = SlabNotes.of(floor, members, units);
         if (!slab.isEmpty()) {
             y = block("SLAB AND STUDS", slab, panelX + 4, w - margin - 4, y - 1.5 * t, titleTop);
+        }
+        if (!bays.isEmpty()) {
+            double limit = bays.get(0).result().limit();
+            y = block("FLOOR VIBRATION (AISC DG11)", List.of(
+                    "At each bay checked for walking (DG11 2nd ed., low-frequency floors): its frequency f_n and peak"
+                            + " acceleration a_p/g, limit a_o/g = " + org.baywright.calc.CalcFormat.sig(100 * limit) + " %.",
+                    "Bold, after a solid diamond: the bay exceeds the limit. \"above 9 Hz\": outside the method."),
+                    panelX + 4, w - margin - 4, y - 1.5 * t, titleTop);
         }
         notes(panelX + 4, w - margin - 4, y - 1.5 * t, titleTop);
 

@@ -13,6 +13,8 @@
  * ratio with sizes, ratios and reactions, columns) is built once by {@link
  * org.baywright.report.drawing.PlanPicture}: the sheet ({@code SheetBuilder}) lays it out in the sheet
  * style, and the editor's canvas draws the same primitives in the screen style through its JavaFX
- * renderer, so the canvas and the printed plan always show the same plan.
+ * renderer, so the canvas and the printed plan always show the same plan. The optional bay layer
+ * ({@link org.baywright.report.drawing.BayMarks}, {@link org.baywright.report.drawing.DrawingOptions#bays()}) writes
+ * each checked bay's floor-vibration result at its centre; the calculation package turns it on when the run has bays.
  */
 package org.baywright.report.drawing;

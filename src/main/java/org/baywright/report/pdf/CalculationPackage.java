@@ -29,7 +29,8 @@ import org.baywright.units.UnitSystem;
 /**
  * The calculation package of a run as a PDF that a checking engineer can follow line by line: cover
  * with the design basis and the caution, contents, design basis, load summary, takedown summary, a
- * calculation sheet per group of identical members, column schedule and strengths, foundation
+ * calculation sheet per group of identical members, the floor-vibration check of every bay when the run has bays,
+ * column schedule and strengths, foundation
  * reactions, steel takeoff and the problems of the run. Every page carries the caution and its
  * number in the footer. Fonts are embedded.
  *
@@ -82,6 +83,7 @@ public final class CalculationPackage {
             LoadDerivation.write(cx);
             Summaries.takedown(cx);
             sheets = MemberSheets.write(cx);
+            VibrationPages.write(cx);
             CheckerPages.endReactions(cx);
             ColumnPages.write(cx);
             TakeoffPages.write(cx);

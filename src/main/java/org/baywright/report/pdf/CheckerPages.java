@@ -12,6 +12,7 @@ import org.baywright.load.LoadCase;
 import org.baywright.load.Combinations;
 import org.baywright.plan.DesignSettings;
 import org.baywright.plan.Floor;
+import org.baywright.report.BaySummary;
 import org.baywright.takedown.Component;
 import org.baywright.takedown.MemberResult;
 import org.baywright.takedown.TakedownResult;
@@ -82,8 +83,15 @@ final class CheckerPages {
                 + " each deck (entered from the deck maker's published tables; 15 ft span and 2 ft overhang when none are"
                 + " given, common practice for a 3 in deck), and deck cantilevering with no span behind it is refused. The"
                 + " deck's strength as a form and as a floor is checked by the engineer of record from those tables.");
+        boolean bays = BaySummary.present(cx.run);
+        if (bays) {
+            f.bullet(f.body, vibrationStatement(cx));
+        }
         f.heading2("Not checked in this package", 30);
-        f.bullet(f.body, "Floor vibration from walking, ponding of roofs, wind and seismic loads and drift, fire resistance,"
+        f.bullet(f.body, (bays ? "Floor vibration from rhythmic excitation (aerobics, dancing), near sensitive equipment"
+                + " (operating rooms, laboratories), from machinery, and of floors above 9 Hz (high-frequency floors,"
+                + " listed as outside the method); roofs and floors without a described slab (listed as not checked);"
+                + " ponding of roofs," : "Floor vibration from walking, ponding of roofs,") + " wind and seismic loads and drift, fire resistance,"
                 + " connections (their design is delegated; the end reactions are in part \"End reactions\"), torsion of"
                 + " members carrying a cantilevered slab, web local yielding and crippling at bearings and point loads,"
                 + " foundations (their reactions are given), erection stability and construction loads"
@@ -94,6 +102,26 @@ final class CheckerPages {
         f.paragraph(f.small, "To be completed by the licensed professional engineer responsible for the design, after"
                 + " checking these calculations and the framing plans.");
         approvalBlock(f);
+    }
+
+    /** What the floor-vibration check is, the limit it uses and how to read it (only when the run has bays). */
+    static String vibrationStatement(Context cx) {
+        String limit = "";
+        for (org.baywright.takedown.BayResult b : cx.run.bays()) {
+            if (b.checked()) {
+                limit = " against a_o/g = " + org.baywright.calc.CalcFormat.sig(b.result().limit() * 100) + " % for "
+                        + b.settings().use().name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ')
+                        + " (DG11 2nd ed. Table 4-1), damping β = "
+                        + org.baywright.calc.CalcFormat.sig(b.inputs().vibration().beta());
+                break;
+            }
+        }
+        return "Floor vibration from walking is checked for every bay of a floor whose deck carries a described slab, by"
+                + " AISC Design Guide 11 (2nd ed., 2016) Chapter 4 for low-frequency floors: the peak acceleration a_p/g"
+                + " of the combined beam and girder mode" + limit + ", under realistic loads rather than design loads"
+                + " (part \"" + VibrationPages.TITLE + "\"). It is a serviceability check of how the floor feels underfoot."
+                + " A bay below 3 Hz is flagged; a bay above 9 Hz is outside the method and is listed as such, not as"
+                + " meeting the limit.";
     }
 
     /** A ruled block with fields to fill by hand. */

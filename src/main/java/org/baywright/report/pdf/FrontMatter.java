@@ -123,6 +123,10 @@ final class FrontMatter {
                     + " deflections on the lower-bound moment of inertia", AISC + " I3.1a, I3.2a, I3.2d, I4.2, I8; Commentary"
                     + " Eq. C-I3-1");
         }
+        if (org.baywright.report.BaySummary.present(cx.run)) {
+            t.row("Floor vibration", "walking excitation of low-frequency floors, every bay with a described slab: a_p/g ≤ a_o/g"
+                    + " under realistic loads (part \"" + VibrationPages.TITLE + "\")", "AISC DG11 2nd ed. Ch. 4");
+        }
         t.row("Loads and combinations", ASCE + ", " + ASCE_TITLE, ASCE + " Ch. 2, 4");
         t.row("Load cases", "D dead (with the framing's own weight), L floor live, Lr roof live, S snow; gravity only",
                 ASCE + " Ch. 2");

@@ -42,7 +42,8 @@ final class PlanPages {
     /** The drawings of the levels from the top down, levels with the same drawing together. */
     static List<Group> groups(Context cx) {
         DrawingOptions o = DrawingOptions.defaults().withUnits(cx.us).withPaper(paper(cx.us))
-                .withReactions(ReactionMode.FACTORED).withDate(FrontMatter.date(cx));
+                .withReactions(ReactionMode.FACTORED).withDate(FrontMatter.date(cx))
+                .withBays(org.baywright.report.BaySummary.present(cx.run));
         Map<String, FramingPlanDrawing> first = new LinkedHashMap<>();
         Map<String, List<String>> names = new LinkedHashMap<>();
         List<Level> levels = cx.run.plan().levels();

@@ -130,8 +130,9 @@ class SvgRendererTest {
         while (m.find()) {
             ids.add(m.group(1));
         }
-        // deck spans and line and point loads are drawn on the screen only (PlanPicture.Style#loadsAndDecks)
-        List<String> expected = Arrays.stream(Layer.values()).filter(l -> l != Layer.DECKS && l != Layer.LOADS)
+        // deck spans and line and point loads are drawn on the screen only (PlanPicture.Style#loadsAndDecks); the bay
+        // layer only when asked for (DrawingOptions#bays) and the run has bays
+        List<String> expected = Arrays.stream(Layer.values()).filter(l -> l != Layer.DECKS && l != Layer.LOADS && l != Layer.BAYS)
                 .map(Layer::id).toList();
         assertEquals(expected, ids);
     }

@@ -136,14 +136,11 @@ final class CanvasLayers {
     }
 
     /**
-     * View › Floor vibration: each bay of the level tinted by its ratio ({@link VibrationScale}), f_n and a_p/g
-     * written in it; bays that exceed the limit cross-hatched with a heavy outline, bays not checked grey; the
-     * picked bay outlined in the selection colour.
+     * View › Floor vibration, under the plan: each bay of the level tinted by its ratio ({@link VibrationScale});
+     * bays that exceed the limit cross-hatched with a heavy dashed outline, bays not checked grey. The values are
+     * written over the plan ({@link #vibrationLabels}).
      */
     static void vibration(GraphicsContext g, EditorModel model, ViewTransform view) {
-        String picked = model.selectedBayProperty().get();
-        g.setTextAlign(TextAlignment.CENTER);
-        g.setTextBaseline(VPos.CENTER);
         for (org.baywright.takedown.BayResult b : model.currentBays()) {
             List<Point> corners = BayView.outline(b.bay());
             double[] xs = new double[4];
@@ -164,30 +161,53 @@ final class CanvasLayers {
             g.setLineDashes(exceeds ? new double[] {10, 5} : null);
             g.strokePolygon(xs, ys, 4);
             g.setLineDashes();
-            if (b.bay().id().equals(picked)) {
-                g.setStroke(SELECTION);
-                g.setLineWidth(6);
-                g.strokePolygon(xs, ys, 4);
+        }
+    }
+
+    /**
+     * Over the plan, with View › Floor vibration on: f_n and a_p/g of each bay on a small plate of the bay's colour
+     * at its centre (above the member labels, which would otherwise hide them), the picked bay outlined in the
+     * selection colour, and the key of the bay colours.
+     */
+    static void vibrationLabels(GraphicsContext g, EditorModel model, ViewTransform view, double w, double h) {
+        model.selectedBayResult().ifPresent(b -> {
+            List<Point> corners = BayView.outline(b.bay());
+            double[] xs = new double[4];
+            double[] ys = new double[4];
+            for (int i = 0; i < 4; i++) {
+                xs[i] = view.screenX(corners.get(i).x());
+                ys[i] = view.screenY(corners.get(i).y());
             }
+            g.setStroke(SELECTION);
+            g.setLineWidth(5);
+            g.setLineDashes();
+            g.strokePolygon(xs, ys, 4);
+        });
+        g.setTextAlign(TextAlignment.CENTER);
+        g.setTextBaseline(VPos.CENTER);
+        double size = 10.5;
+        g.setFont(Font.font(null, FontWeight.BOLD, size));
+        for (org.baywright.takedown.BayResult b : model.currentBays()) {
+            Rgb fill = VibrationScale.at(b.ratio());
             double cx = view.screenX(b.bay().centre().x());
             double cy = view.screenY(b.bay().centre().y());
             List<String> lines = BayView.label(b);
-            double size = 11;
-            g.setFont(Font.font(null, FontWeight.BOLD, size));
-            Rgb ink = VibrationScale.textOn(fill);
+            int longest = lines.stream().mapToInt(String::length).max().orElse(0);
+            double pw = longest * size * 0.56 + 8;
+            double ph = lines.size() * (size + 3) + 4;
+            g.setFill(FxRenderer.colour(fill));
+            g.fillRect(cx - pw / 2, cy - ph / 2, pw, ph);
+            boolean exceeds = b.checked() && b.ratio() > 1;
+            g.setStroke(exceeds ? FxRenderer.colour(VibrationScale.EXCEEDS_INK) : INK);
+            g.setLineWidth(exceeds ? 2 : 0.8);
+            g.strokeRect(cx - pw / 2, cy - ph / 2, pw, ph);
+            g.setFill(FxRenderer.colour(VibrationScale.textOn(fill)));
             for (int i = 0; i < lines.size(); i++) {
-                double y = cy + (i - (lines.size() - 1) / 2.0) * (size + 3) + size * 1.6;
-                if (exceeds) {
-                    // a plate under the text so the hatch does not cross it
-                    double tw = lines.get(i).length() * size * 0.62;
-                    g.setFill(FxRenderer.colour(fill));
-                    g.fillRect(cx - tw / 2 - 2, y - size / 2 - 2, tw + 4, size + 4);
-                }
-                g.setFill(FxRenderer.colour(ink));
-                g.fillText(lines.get(i), cx, y);
+                g.fillText(lines.get(i), cx, cy + (i - (lines.size() - 1) / 2.0) * (size + 3));
             }
         }
         g.setTextBaseline(VPos.BASELINE);
+        vibrationKey(g, w - 372, h - 30);
     }
 
     /** The hover box of a bay: its text lines on a pale plate beside the pointer, kept inside the view. */
@@ -292,6 +312,9 @@ final class CanvasLayers {
                 g.fillText("!", x, y + 4);
             }
         }
+        if (model.showVibrationProperty().get()) {
+            vibrationLabels(g, model, view, w, h - legendHeight);
+        }
         legend(g, model, w, h, legendHeight);
     }
 
@@ -342,9 +365,7 @@ final class CanvasLayers {
         g.strokeLine(x, mid, x + 40, mid);
         g.setLineDashes();
         g.fillText("unsupported / not run", x + 48, mid);
-        if (model.showVibrationProperty().get()) {
-            vibrationLegend(g, x + 48 + 150, mid);
-        } else if (model.showReactionsProperty().get()) {
+        if (model.showReactionsProperty().get()) {
             g.setFill(REACTION);
             g.fillText("end reactions R, service, unreduced: " + (model.units() == UnitSystem.SI ? "kN" : "kip"),
                     x + 48 + 140, mid);
@@ -352,16 +373,25 @@ final class CanvasLayers {
         g.setTextBaseline(VPos.BASELINE);
     }
 
-    /** The key of View › Floor vibration in the legend strip: the bay scale, the exceeds mark and grey. */
-    private static void vibrationLegend(GraphicsContext g, double x, double mid) {
+    /** The key of View › Floor vibration, a plate at (x, y) just above the legend strip: the bay scale, the exceeds mark and grey. */
+    private static void vibrationKey(GraphicsContext g, double x, double y) {
+        g.setFill(Color.web("#ecebe6"));
+        g.fillRect(x, y, 366, 24);
+        g.setStroke(Color.web("#c9c7bf"));
+        g.setLineWidth(1);
+        g.strokeRect(x + 0.5, y + 0.5, 366, 24);
+        double mid = y + 12;
+        x += 8;
+        g.setTextBaseline(VPos.CENTER);
+        g.setTextAlign(TextAlignment.LEFT);
         g.setFont(Font.font(null, FontWeight.BOLD, 11));
         g.setFill(INK);
-        g.fillText("Bays: ap/g ÷ limit", x, mid);
-        x += 112;
+        g.fillText("Bays", x, mid);
+        x += 34;
         g.setFont(Font.font(11));
         g.fillText("0", x, mid);
         x += 12;
-        double barW = 110;
+        double barW = 80;
         List<Stop> stops = new ArrayList<>();
         for (int i = 0; i <= 12; i++) {
             stops.add(new Stop(i / 12.0, FxRenderer.colour(VibrationScale.at(i / 12.0 * VibrationScale.FULL))));
@@ -373,7 +403,7 @@ final class CanvasLayers {
         g.strokeRect(x, mid - 6, barW, 12);
         g.setFill(INK);
         g.fillText("1.5", x + barW + 6, mid);
-        x += barW + 34;
+        x += barW + 28;
         double[] xs = {x, x + 30, x + 30, x};
         double[] ys = {mid - 6, mid - 6, mid + 6, mid + 6};
         g.setFill(FxRenderer.colour(VibrationScale.at(1.2)));
@@ -386,11 +416,12 @@ final class CanvasLayers {
         g.setLineDashes();
         g.setFill(INK);
         g.fillText("exceeds", x + 36, mid);
-        x += 90;
+        x += 84;
         g.setFill(FxRenderer.colour(VibrationScale.NOT_CHECKED));
         g.fillRect(x, mid - 6, 30, 12);
         g.setFill(INK);
         g.fillText("not checked", x + 36, mid);
+        g.setTextBaseline(VPos.BASELINE);
     }
 
     /** [minX, minY, maxX, maxY] of the current level's grid, slab edge, members and columns, or null for an empty plan. */

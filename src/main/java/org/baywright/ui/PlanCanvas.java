@@ -118,6 +118,7 @@ public final class PlanCanvas extends Region {
             awaitRun.stop();
             drawUnder();
             drawPlan();
+            drawMarks();
         });
         model.problems().addListener((ListChangeListener<Object>) c -> drawMarks());
         model.selectedProperty().addListener((o, a, b) -> drawUnder());
@@ -133,7 +134,7 @@ public final class PlanCanvas extends Region {
             drawMarks();
             drawOverlay();
         });
-        model.selectedBayProperty().addListener((o, a, b) -> drawUnder());
+        model.selectedBayProperty().addListener((o, a, b) -> drawMarks());
         model.shownProblemProperty().addListener((o, a, b) -> drawMarks());
         model.toolProperty().addListener((o, a, b) -> {
             setCursor(b == Tool.SELECT ? Cursor.DEFAULT : Cursor.CROSSHAIR);
@@ -358,14 +359,16 @@ public final class PlanCanvas extends Region {
         Object planIfSelection = model.selection().isEmpty() ? null : id(model.plan());
         if (fresh(0, planIfSelection, model.plan() == null, id(model.run()), model.levelProperty().get(),
                 java.util.Set.copyOf(model.selection()), model.showTributaryProperty().get(),
-                model.showVibrationProperty().get(), model.selectedBayProperty().get())) {
+                model.showVibrationProperty().get())) {
             CanvasLayers.under(under.getGraphicsContext2D(), model, view, BACKGROUND);
         }
     }
 
     private void drawMarks() {
         if (fresh(1, model.plan() == null, model.currentFloorId(), model.units(), List.copyOf(model.problems()),
-                model.shownProblemProperty().get(), model.showReactionsProperty().get(), model.showVibrationProperty().get())) {
+                model.shownProblemProperty().get(), model.showReactionsProperty().get(), model.showVibrationProperty().get(),
+                model.showVibrationProperty().get() ? id(model.run()) : null, model.levelProperty().get(),
+                model.selectedBayProperty().get())) {
             CanvasLayers.over(marks.getGraphicsContext2D(), model, view, LEGEND_H);
         }
     }

@@ -74,6 +74,9 @@ public final class NewCommand implements Callable<Integer> {
     @Option(names = "--composite", defaultValue = "on", paramLabel = "on|off|none", description = "The floors' slab and how their members act with it (default ${DEFAULT-VALUE}). on: a slab on composite deck is described on the deck (3in deck, --topping of --concrete, 3/4in studs) and the floor members act with it (AISC 360-16 Chapter I; unshored, 20 psf construction live load); off: the same slab, members designed as bare steel (the comparison); none: no slab described, its weight is --dead (files of earlier versions). The roof's deck carries no slab.")
     String composite;
 
+    @Option(names = "--vibration", defaultValue = "on", paramLabel = "on|off", description = "With the slab described: on (default ${DEFAULT-VALUE}) sizes the floors' bays for walking vibration (AISC Design Guide 11, offices 0.5 %g): where a bay exceeds the limit its beams or girder are stiffened, whichever adds less steel; off only reports the check.")
+    String vibration;
+
     @Option(names = "--topping", defaultValue = "4.5in", paramLabel = "LENGTH", description = "Concrete above the top of the 3in deck (default ${DEFAULT-VALUE}).")
     String topping;
 
@@ -153,9 +156,19 @@ public final class NewCommand implements Callable<Integer> {
         Plan plan = RegularPlan.generate(new RegularPlan.Spec(name, us.name().toLowerCase(Locale.ROOT), bx, by, st,
                 along.equals("y"), spacing, new LoadValues(d, sd, l, 0, 0, p), new LoadValues(rd, sd, 0, lr, s, 0),
                 new LoadValues(edge, 0, 0, 0, 0, 0))).withNotes(notes == null ? "" : notes.strip());
+        String vib = vibration.trim().toLowerCase(Locale.ROOT);
+        if (!vib.equals("on") && !vib.equals("off")) {
+            throw new BadInputException("--vibration: \"" + vibration + "\" is not allowed; use on or off");
+        }
         if (slabDescribed) {
             plan = RegularPlan.withSlab(plan, Slab.typical().withTopping(tc).withDensity(wc),
                     mode.equals("on") ? CompositeMode.COMPOSITE : CompositeMode.NON_COMPOSITE, d);
+            if (vib.equals("on")) {
+                Plan p0 = plan;
+                plan = new Plan(p0.name(), p0.units(), p0.settings(), p0.grid(), p0.levels(), p0.floors().stream()
+                        .map(f -> f.roof() ? f : f.withComposite(f.composite().withSizeForVibration(true))).toList(), p0.columns(),
+                        p0.notes());
+            }
         }
         PlanFiles.write(plan, output);
         spec.commandLine().getErr().println("wrote " + output + ": " + (bx.size()) + " × " + by.size() + " bays, "

@@ -147,4 +147,31 @@ public final class BaySummary {
         }
         return s.toString();
     }
+
+    /** The members stiffened for walking vibration, one object per change (bay, levels, members, from, to, ratios). */
+    public static List<Object> changes(RunResult run) {
+        List<Object> out = new ArrayList<>();
+        for (org.baywright.run.VibrationSizing.Change c : run.sizedForVibration()) {
+            Map<String, Object> o = new LinkedHashMap<>();
+            o.put("bay", c.bay());
+            o.put("levels", c.levels());
+            o.put("members", c.members());
+            o.put("from", c.from());
+            o.put("to", c.to());
+            o.put("ratioBefore", c.ratioBefore());
+            o.put("ratioEstimated", c.ratioAfter());
+            out.add(o);
+        }
+        return out;
+    }
+
+    /** One line per change: "Sized for vibration: bay B-C/3-4 (Level 3, Level 4): beams … W16X31 → W18X35 (ratio 1.42 → 0.97)". */
+    public static List<String> changeLines(RunResult run) {
+        List<String> out = new ArrayList<>();
+        for (org.baywright.run.VibrationSizing.Change c : run.sizedForVibration()) {
+            out.add(String.format(java.util.Locale.ROOT, "Sized for vibration: bay %s (%s): %s %s → %s (ratio %.2f → %.2f)", c.bay(),
+                    String.join(", ", c.levels()), String.join(", ", c.members()), c.from(), c.to(), c.ratioBefore(), c.ratioAfter()));
+        }
+        return out;
+    }
 }

@@ -191,6 +191,9 @@ public final class RunSummary {
         o.put("problems", problems);
         if (BaySummary.present(run)) {
             o.put("bays", BaySummary.json(run, us)); // only when a floor describes a slab: older outputs unchanged
+            if (!run.sizedForVibration().isEmpty()) {
+                o.put("sizedForVibration", BaySummary.changes(run));
+            }
         }
         o.put("caution", Caution.TEXT);
         return o;
@@ -379,6 +382,9 @@ public final class RunSummary {
             b.append('\n');
             if (BaySummary.present(run)) {
                 b.append(BaySummary.line(run)).append('\n');
+                for (String line : BaySummary.changeLines(run)) {
+                    b.append(line).append('\n');
+                }
             }
         }
         List<Problem> problems = run.problems();

@@ -1,6 +1,9 @@
 package org.baywright.run;
 
 import java.util.List;
+import java.util.Map;
+import java.util.HashMap;
+import java.util.ArrayList;
 import org.baywright.catalog.Catalog;
 import org.baywright.plan.Floor;
 import org.baywright.plan.Plan;
@@ -70,12 +73,52 @@ public final class PlanRun {
         Searches searches = new Searches(basis.catalog());
         FloorCache cache = reuse != null && reuse.catalog() == basis.catalog() ? reuse : null;
         ExpandedPlan expanded = ExpandedPlan.of(plan);
-        List<FloorDesign> floors = expanded.floors().parallelStream()
-                .map(f -> {
+        Map<String, Map<String, String>> least = new HashMap<>();
+        Attempt a = attempt(plan, basis, searches, cache, expanded, least);
+        List<VibrationSizing.Change> changes = new ArrayList<>();
+        if (VibrationSizing.wanted(plan)) {
+            // floors sized for walking vibration: stiffen the bays that exceed their limit and design again
+            for (int round = 0; round < VibrationSizing.MAX_ROUNDS; round++) {
+                List<VibrationSizing.Change> c = VibrationSizing.stiffen(plan, a.takedown(), a.bays(), basis, least);
+                if (c.isEmpty()) {
+                    break;
+                }
+                changes.addAll(c);
+                a = attempt(plan, basis, searches, cache, expanded, least);
+            }
+        }
+        double ms = (System.nanoTime() - t0) / 1e6;
+        return new RunResult(plan, a.takedown(), List.of(), basis.catalog().name(), version(), ms, basis, a.bays(), changes);
+    }
+
+    /** One design of the plan and its bays. */
+    private record Attempt(TakedownResult takedown, List<BayResult> bays) {
+    }
+
+    /**
+     * Stages 2 to 7 and the bay checks, each floor layout with the least sections its members were given for
+     * vibration ({@code least}: result key → member id → section).
+     */
+    private static Attempt attempt(Plan plan, DesignBasis basis, Searches searches, FloorCache cache, ExpandedPlan expanded,
+            Map<String, Map<String, String>> least) {
+        Map<Integer, String> keys = new HashMap<>();
+        for (ExpandedPlan.LevelFloor lf : expanded.levels()) {
+            if (lf.floor() >= 0) {
+                keys.putIfAbsent(lf.floor(), lf.resultKey());
+            }
+        }
+        List<FloorInput> inputs = expanded.floors();
+        List<FloorDesign> floors = java.util.stream.IntStream.range(0, inputs.size()).parallel()
+                .mapToObj(i -> {
+                    FloorInput f = inputs.get(i);
                     // each layout with its own deflection limits: the roof rows of IBC Table 1604.3 on a roof
                     FloorRules rules = basis.floorRules(f.floor());
-                    return cache == null ? designFloor(f, rules, searches)
-                            : cache.get(f.key(rules), () -> designFloor(f, rules, searches));
+                    Map<String, String> stiff = least.get(keys.get(i));
+                    if (stiff != null && !stiff.isEmpty()) {
+                        rules = rules.withVibrationSections(stiff);
+                    }
+                    FloorRules r = rules;
+                    return cache == null ? designFloor(f, r, searches) : cache.get(f.key(r), () -> designFloor(f, r, searches));
                 })
                 .toList();
         List<LevelDesign> levels = expanded.withDesigns(floors);
@@ -85,8 +128,7 @@ public final class PlanRun {
         TakedownResult t = Takedown.result(expanded, floors, columns, foundations, equilibrium);
         List<BayResult> bays = plan.floors().stream().anyMatch(Floor::hasSlab)
                 ? BayChecks.of(plan, t, vibrationSettings(plan)) : List.of();
-        double ms = (System.nanoTime() - t0) / 1e6;
-        return new RunResult(plan, t, List.of(), basis.catalog().name(), version(), ms, basis, bays);
+        return new Attempt(t, bays);
     }
 
     /** Stages 2 to 4 for one floor layout: tributary areas, support graph, members designed in order. */

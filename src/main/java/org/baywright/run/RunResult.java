@@ -17,12 +17,21 @@ import org.baywright.takedown.TakedownResult;
  * @param basis the design basis the run used: method, steel, catalog, criteria
  * @param bays the floor-vibration check of every bay of every floor layout (AISC DG11), empty when no floor of the
  *     plan describes a slab
+ * @param sizedForVibration the members stiffened so that bays meet the walking-vibration limit, on floors sized for
+ *     it ({@link VibrationSizing}); empty otherwise
  */
 public record RunResult(Plan plan, TakedownResult takedown, List<Problem> validation, String catalogName, String version,
-        double milliseconds, DesignBasis basis, List<BayResult> bays) {
+        double milliseconds, DesignBasis basis, List<BayResult> bays, List<VibrationSizing.Change> sizedForVibration) {
 
     public RunResult {
         bays = bays == null ? List.of() : List.copyOf(bays);
+        sizedForVibration = sizedForVibration == null ? List.of() : List.copyOf(sizedForVibration);
+    }
+
+    /** A result with bay checks and nothing stiffened for vibration. */
+    public RunResult(Plan plan, TakedownResult takedown, List<Problem> validation, String catalogName, String version,
+            double milliseconds, DesignBasis basis, List<BayResult> bays) {
+        this(plan, takedown, validation, catalogName, version, milliseconds, basis, bays, List.of());
     }
 
     /** A result without bay checks. */

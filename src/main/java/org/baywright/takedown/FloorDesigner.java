@@ -17,6 +17,7 @@ import org.baywright.design.CompositeCriteria;
 import org.baywright.design.CompositeDesign;
 import org.baywright.design.CompositeMember;
 import org.baywright.design.MemberStatus;
+import org.baywright.design.SearchFilter;
 import org.baywright.geometry.FloorTributary;
 import org.baywright.geometry.MemberTributary;
 import org.baywright.geometry.TributaryAnalysis;
@@ -123,28 +124,11 @@ public final class FloorDesigner {
         CompositeGeometry geometry = floor.composite().composite(m) ? CompositeGeometry.of(floor, in.members(), m) : null;
         Searches.Sized sized = size(m, reduction, loads, criteria, geometry != null);
         BeamDesign d = sized.design();
-        // a member stiffened for walking vibration (run.PlanRun): at least that section, its studs searched
-        Section stiff = vibrationSection(m);
-        if (stiff != null && geometry == null && d.section() != null && d.section().props().ix() < stiff.props().ix()) {
-            Searches.Sized s = searches.check(stiff, span, reduction.apply(loads), rules.liveLoad().deflectionUnreduced()
-                    ? MemberReduction.none(reduction).apply(loads) : null, criteria);
-            sized = s;
-            BeamDesign sd = s.design();
-            d = new BeamDesign(sd.status() == MemberStatus.FIXED_SIZE ? MemberStatus.SIZED : sd.status(), sd.section(), sd.checks(),
-                    d.rejected(), d.candidates());
-        }
         CompositeResult composite = null;
         if (geometry != null) {
             composite = composite(m, geometry, loads, reduction, d);
             CompositeDesign cd = composite.design();
-            if (stiff != null && cd.section() != null && cd.section().props().ix() < stiff.props().ix()) {
-                CompositeResult c2 = composite(m, geometry, loads, reduction, d, stiff);
-                CompositeDesign s2 = c2.design();
-                composite = c2;
-                cd = s2;
-            }
-            d = new BeamDesign(cd.status() == MemberStatus.FIXED_SIZE && stiff != null && m.fixedSection().isEmpty()
-                    ? MemberStatus.SIZED : cd.status(), cd.section(), cd.checks(), cd.rejected(), cd.alternatives().size());
+            d = new BeamDesign(cd.status(), cd.section(), cd.checks(), cd.rejected(), cd.alternatives().size());
         } else if (m.composite().orElse(false) && floor.composite().mode() != CompositeMode.NON_COMPOSITE) {
             problems.add(new Problem(Problem.Severity.WARNING, "no-slab", "floor " + floor.id(), m.id(), "member " + m.id()
                     + " is marked composite but no deck beside it describes a slab; it was designed as bare steel",
@@ -228,7 +212,7 @@ public final class FloorDesigner {
                                 + "; the member was sized instead", List.of(m.start(), m.end())));
             }
             sized = searches.search(span, a, b, caseLoads, deflectionLoads, criteria,
-                    m.kind() == MemberKind.GIRDER ? rules.girders() : rules.beams());
+                    filterFor(m));
         }
         BeamDesign d = sized.design();
         if (d.status() == MemberStatus.OVERSTRESSED && !comparison) {
@@ -242,14 +226,22 @@ public final class FloorDesigner {
     }
 
     /**
-     * The composite design of a simple-span member acting with the slab of the deck beside it (AISC 360-16
-     * Chapter I): the slab's weight and the framing's own weight (D_WET) on the bare steel while the concrete
-     * hardens, with the construction live load, unless the floor is shored; every other load on the composite
-     * section; the effective width from the plan's geometry ({@link CompositeGeometry}). A fixed section is
-     * kept (its studs searched unless fixed too).
+     * The sections a search of member {@code m} may choose: its kind's, and for a member stiffened for walking
+     * vibration (run.PlanRun) only those of at least that moment of inertia.
      */
-    private CompositeResult composite(Member m, CompositeGeometry g, MemberLoads loads, MemberReduction reduction, BeamDesign bare) {
-        return composite(m, g, loads, reduction, bare, null);
+    private SearchFilter filterFor(Member m) {
+        SearchFilter f = m.kind() == MemberKind.GIRDER ? rules.girders() : rules.beams();
+        Section stiff = vibrationSection(m);
+        if (stiff == null) {
+            return f;
+        }
+        java.util.Set<String> out = new java.util.HashSet<>(f.excluded());
+        for (Section s : searches.catalog().sections()) {
+            if (s.props().ix() < stiff.props().ix() * (1 - 1e-12)) {
+                out.add(s.designation());
+            }
+        }
+        return new SearchFilter(f.minDepth(), f.maxDepth(), f.series(), out);
     }
 
     /** The least section of a member stiffened for walking vibration, or null. */
@@ -258,9 +250,14 @@ public final class FloorDesigner {
         return s == null ? null : searches.catalog().find(s).orElse(null);
     }
 
-    /** As {@link #composite(Member, CompositeGeometry, MemberLoads, MemberReduction, BeamDesign)}, at {@code least} when not null (its studs searched). */
-    private CompositeResult composite(Member m, CompositeGeometry g, MemberLoads loads, MemberReduction reduction, BeamDesign bare,
-            Section least) {
+    /**
+     * The composite design of a simple-span member acting with the slab of the deck beside it (AISC 360-16
+     * Chapter I): the slab's weight and the framing's own weight (D_WET) on the bare steel while the concrete
+     * hardens, with the construction live load, unless the floor is shored; every other load on the composite
+     * section; the effective width from the plan's geometry ({@link CompositeGeometry}). A fixed section is
+     * kept (its studs searched unless fixed too).
+     */
+    private CompositeResult composite(Member m, CompositeGeometry g, MemberLoads loads, MemberReduction reduction, BeamDesign bare) {
         double span = m.length();
         org.baywright.plan.Slab slab = g.deck().slab();
         Map<LoadCase, List<SpanLoad>> caseLoads = reduction.applyComposite(loads);
@@ -276,11 +273,11 @@ public final class FloorDesigner {
                 loads.byComponent().get(Component.D_WET.ordinal()), loads.byComponent().get(Component.CONSTRUCTION.ordinal()), bl,
                 loads.bracing(m.kind()));
         CompositeCriteria cc = rules.compositeCriteria(shored, loads.bracing(m.kind()));
-        Optional<String> fixed = least != null ? Optional.of(least.designation()) : m.fixedSection();
+        Optional<String> fixed = m.fixedSection();
         Section fixedSection = fixed.flatMap(searches.catalog()::find).orElse(null);
-        int fixedStuds = least == null && fixedSection != null && m.fixedStuds().isPresent() ? m.fixedStuds().getAsInt() : -1;
+        int fixedStuds = fixedSection != null && m.fixedStuds().isPresent() ? m.fixedStuds().getAsInt() : -1;
         Searches.CompositeSized cs = searches.composite(member, caseLoads, deflectionLoads, cc,
-                m.kind() == MemberKind.GIRDER ? rules.girders() : rules.beams(), fixedSection, fixedStuds);
+                filterFor(m), fixedSection, fixedStuds);
         CompositeDesign cd = cs.design();
         if (fixed.isPresent() && fixedSection == null) {
             problems.add(new Problem(Problem.Severity.ERROR, "unknown-section", "floor " + floor.id(), m.id(),

@@ -128,6 +128,11 @@ class NewCommandTest {
                 () -> assertEquals(46, Units.PSF.fromSi(org.baywright.takedown.SlabDesign.weight(light)), 0.5),
                 () -> assertEquals(org.baywright.plan.CompositeMode.NON_COMPOSITE,
                         off.floor("typical").orElseThrow().composite().mode()),
+                // new plans size their bays for walking vibration (AISC DG11) unless --vibration off
+                () -> assertTrue(f.composite().sizeForVibration()),
+                () -> assertFalse(written(dir.resolve("c.bay.json"), "--vibration", "off").floor("typical").orElseThrow()
+                        .composite().sizeForVibration()),
+                () -> assertFalse(roof.composite().sizeForVibration()),
                 // the roof's deck carries no concrete: no slab, its own dead load (50 psf default)
                 () -> assertNull(roof.decks().get(0).slab()),
                 () -> assertEquals(50, Units.PSF.fromSi(loads(on, true).dead()), PSF));

@@ -5,15 +5,12 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import org.baywright.analysis.DistributedLoad;
 import org.baywright.analysis.PointLoad;
-import org.baywright.calc.Arg;
 import org.baywright.calc.Calc;
 import org.baywright.calc.CalcLine;
-import org.baywright.calc.Formula;
 import org.baywright.catalog.Catalog;
 import org.baywright.catalog.CatalogFile;
 import org.baywright.catalog.Section;
@@ -71,21 +68,7 @@ class CalculationRecordTest {
     }
 
     private static int verify(Calc calc, String where, List<Executable> checks) {
-        int n = 0;
-        for (CalcLine line : calc.lines()) {
-            if (line.kind() != CalcLine.Kind.EQUATION) {
-                continue;
-            }
-            n++;
-            Map<String, Double> v = new HashMap<>();
-            for (Arg a : line.args()) {
-                v.put(a.symbol(), a.value());
-            }
-            double got = Formula.evaluate(line.formula(), v);
-            checks.add(() -> assertEquals(line.value(), got, 1e-9 * Math.max(1e-30, Math.abs(line.value())),
-                    where + ": " + line.symbol() + " = " + line.formula()));
-        }
-        return n;
+        return org.baywright.calc.CalcRecordChecks.equationsEvaluate(calc, where, checks);
     }
 
     private static BeamDesigner designer(DesignMethod m, Bracing b) {

@@ -78,14 +78,19 @@ public final class PlanRun {
         List<VibrationSizing.Change> changes = new ArrayList<>();
         if (VibrationSizing.wanted(plan)) {
             // floors sized for walking vibration: stiffen the bays that exceed their limit and design again
+            java.util.Set<String> refused = new java.util.HashSet<>();
             for (int round = 0; round < VibrationSizing.MAX_ROUNDS; round++) {
-                List<VibrationSizing.Change> c = VibrationSizing.stiffen(plan, a.takedown(), a.bays(), basis, least);
+                List<VibrationSizing.Change> c = VibrationSizing.stiffen(plan, a.takedown(), a.bays(), basis, least, refused);
                 if (c.isEmpty()) {
                     break;
                 }
                 changes.addAll(c);
                 a = attempt(plan, basis, searches, cache, expanded, least);
             }
+            // the changes that stand: members that took the stiffness they were given
+            changes.removeIf(c -> c.members().stream().anyMatch(id -> refused.contains(c.floor() + "|" + id)));
+            VibrationSizing.stiffen(plan, a.takedown(), List.of(), basis, least, refused);
+            changes.removeIf(c -> c.members().stream().anyMatch(id -> refused.contains(c.floor() + "|" + id)));
         }
         double ms = (System.nanoTime() - t0) / 1e6;
         return new RunResult(plan, a.takedown(), List.of(), basis.catalog().name(), version(), ms, basis, a.bays(), changes);

@@ -63,9 +63,27 @@ public final class VibrationSizing {
      * bay of a floor sized for vibration exceeds its limit or none can be stiffened further.
      */
     static List<Change> stiffen(Plan plan, TakedownResult t, List<BayResult> bays, DesignBasis basis,
-            Map<String, Map<String, String>> least) {
+            Map<String, Map<String, String>> least, java.util.Set<String> refused) {
         List<Change> out = new ArrayList<>();
         Catalog catalog = basis.catalog();
+        // a member that did not take the section it was given (none of that stiffness passes its own checks) is
+        // not stiffened again: its bay is tried with the other change
+        for (Map.Entry<String, Map<String, String>> e : least.entrySet()) {
+            Map<String, MemberResult> byId = new HashMap<>();
+            for (MemberResult m : t.members().getOrDefault(e.getKey(), List.of())) {
+                byId.put(m.id(), m);
+            }
+            e.getValue().entrySet().removeIf(x -> {
+                MemberResult m = byId.get(x.getKey());
+                Section s = catalog.find(x.getValue()).orElse(null);
+                boolean missed = m == null || m.design() == null || m.design().section() == null || s == null
+                        || m.design().section().props().ix() < s.props().ix() * (1 - 1e-12);
+                if (missed) {
+                    refused.add(e.getKey() + "|" + x.getKey());
+                }
+                return missed;
+            });
+        }
         for (BayResult b : bays) {
             if (!b.checked() || b.result().status() != VibrationStatus.EXCEEDS) {
                 continue;
@@ -79,8 +97,11 @@ public final class VibrationSizing {
             for (MemberResult m : t.members().getOrDefault(bay.floor(), List.of())) {
                 members.put(m.id(), m);
             }
-            Option beams = beams(floor, b, catalog, basis.beams(), members);
-            Option girder = girder(floor, b, catalog, basis.girders(), members);
+            boolean beamsRefused = bay.beams().stream().anyMatch(id -> refused.contains(bay.floor() + "|" + id));
+            boolean girdersRefused = bay.girders().stream().anyMatch(g -> refused.contains(bay.floor() + "|" + g.id()));
+            Option beams = beamsRefused ? null : beams(floor, b, catalog, filterOf(members, bay.beams(), basis), members);
+            Option girder = girdersRefused ? null : girder(floor, b, catalog, filterOf(members,
+                    bay.girders().stream().map(Bay.BayGirder::id).toList(), basis), members);
             Option pick = better(beams, girder, b.ratio());
             if (pick == null) {
                 continue;
@@ -101,6 +122,12 @@ public final class VibrationSizing {
             }
         }
         return out;
+    }
+
+    /** The search filter of the members stiffened together: the girders' when any is a girder, else the beams'. */
+    private static SearchFilter filterOf(Map<String, MemberResult> members, List<String> ids, DesignBasis basis) {
+        boolean girder = ids.stream().map(members::get).anyMatch(m -> m != null && m.kind() == org.baywright.plan.MemberKind.GIRDER);
+        return girder ? basis.girders() : basis.beams();
     }
 
     /** One way of stiffening a bay: the members, the section they take, the bay's ratio then, the steel added. */

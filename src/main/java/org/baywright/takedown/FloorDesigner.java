@@ -211,8 +211,12 @@ public final class FloorDesigner {
                         "member " + m.id() + ": section " + fixed.get() + " is not in the catalog " + searches.catalog().name()
                                 + "; the member was sized instead", List.of(m.start(), m.end())));
             }
-            sized = searches.search(span, a, b, caseLoads, deflectionLoads, criteria,
-                    filterFor(m));
+            sized = searches.search(span, a, b, caseLoads, deflectionLoads, criteria, filterFor(m));
+            if (sized.design().status() == MemberStatus.OVERSTRESSED && vibrationSection(m) != null) {
+                // no section of the stiffness asked for vibration passes: the member as it would be without it
+                // (run.VibrationSizing sees the stiffness was not reached and tries another change)
+                sized = searches.search(span, a, b, caseLoads, deflectionLoads, criteria, baseFilter(m));
+            }
         }
         BeamDesign d = sized.design();
         if (d.status() == MemberStatus.OVERSTRESSED && !comparison) {
@@ -230,7 +234,7 @@ public final class FloorDesigner {
      * vibration (run.PlanRun) only those of at least that moment of inertia.
      */
     private SearchFilter filterFor(Member m) {
-        SearchFilter f = m.kind() == MemberKind.GIRDER ? rules.girders() : rules.beams();
+        SearchFilter f = baseFilter(m);
         Section stiff = vibrationSection(m);
         if (stiff == null) {
             return f;
@@ -242,6 +246,11 @@ public final class FloorDesigner {
             }
         }
         return new SearchFilter(f.minDepth(), f.maxDepth(), f.series(), out);
+    }
+
+    /** The sections a search of member {@code m} may choose by its kind. */
+    private SearchFilter baseFilter(Member m) {
+        return m.kind() == MemberKind.GIRDER ? rules.girders() : rules.beams();
     }
 
     /** The least section of a member stiffened for walking vibration, or null. */
@@ -278,6 +287,10 @@ public final class FloorDesigner {
         int fixedStuds = fixedSection != null && m.fixedStuds().isPresent() ? m.fixedStuds().getAsInt() : -1;
         Searches.CompositeSized cs = searches.composite(member, caseLoads, deflectionLoads, cc,
                 filterFor(m), fixedSection, fixedStuds);
+        if (fixedSection == null && cs.design().status() == MemberStatus.OVERSTRESSED && vibrationSection(m) != null) {
+            // as for a bare-steel member: without the stiffness asked for vibration when none of it passes
+            cs = searches.composite(member, caseLoads, deflectionLoads, cc, baseFilter(m), null, -1);
+        }
         CompositeDesign cd = cs.design();
         if (fixed.isPresent() && fixedSection == null) {
             problems.add(new Problem(Problem.Severity.ERROR, "unknown-section", "floor " + floor.id(), m.id(),

@@ -188,7 +188,12 @@ public final class StudyCommand implements Callable<Integer> {
             header.addAll(List.of("spacing " + us.length().symbol(), "beams/bay"));
         }
         header.addAll(List.of("weight " + weightUnit(us), perAreaUnit(us), "beam d " + us.smallLength().symbol(),
-                "girder d " + us.smallLength().symbol(), "pieces", "ratio", "problems", "front", "same as"));
+                "girder d " + us.smallLength().symbol(), "pieces", "ratio"));
+        boolean vib = vibration(r);
+        if (vib) {
+            header.add("vib");
+        }
+        header.addAll(List.of("problems", "front", "same as"));
         boolean[] right = new boolean[header.size()];
         for (int i = 1 + sweeps.size(); i < right.length - 1; i++) {
             right[i] = true;
@@ -209,6 +214,9 @@ public final class StudyCommand implements Callable<Integer> {
             row.add(num(us.smallLength().fromSi(v.girderDepth()), 1));
             row.add(Integer.toString(v.pieces()));
             row.add(num(v.maxRatio(), 3));
+            if (vib) {
+                row.add(v.vibrationChecked() ? num(v.vibrationRatio(), 2) : "-");
+            }
             row.add(v.message().isEmpty() ? Integer.toString(v.problems()) : "not run");
             row.add((depthFront.contains(v.index()) ? "D" : "") + (piecesFront.contains(v.index()) ? "P" : ""));
             row.add(sameAs(r, v));
@@ -219,6 +227,10 @@ public final class StudyCommand implements Callable<Integer> {
                 .append(r.total()).append(" variants, each a full run").append(r.cancelled() ? "; cancelled" : "").append(")\n");
         b.append(t.render("  "));
         b.append("front: D = Pareto front of weight per area and structural depth; P = of weight per area and pieces\n");
+        if (vib) {
+            b.append("vib: the worst floor-vibration ratio (a_p/g over the limit, AISC DG11 2nd ed., walking) of the"
+                    + " variant's bays; over 1.00 exceeds; - no bay checked\n");
+        }
         if (infill) {
             b.append("spacing: the largest actual distance between infill beams (a typed spacing is a maximum, rounded to"
                     + " whole beams per bay)\n");
@@ -284,7 +296,12 @@ public final class StudyCommand implements Callable<Integer> {
         header.addAll(List.of("actual beam spacing (" + us.length().symbol() + ")", "beams per bay",
                 "steel weight (" + weightUnit(us) + ")", "weight per area (" + perAreaUnit(us) + ")",
                 "deepest beam d (" + small + ")", "deepest girder d (" + small + ")", "structural depth (" + small + ")",
-                "pieces", "max ratio", "problems", "sound", "weight-depth front", "weight-pieces front",
+                "pieces", "max ratio"));
+        boolean vib = vibration(r);
+        if (vib) {
+            header.add("vibration ratio");
+        }
+        header.addAll(List.of("problems", "sound", "weight-depth front", "weight-pieces front",
                 "score (" + perAreaUnit(us) + ")", "same floor as variant", "message"));
         b.append(String.join(",", header.stream().map(StudyCommand::cell).toList())).append('\n');
         for (VariantResult v : r.variants()) {
@@ -300,6 +317,9 @@ public final class StudyCommand implements Callable<Integer> {
             row.add(plain(us.smallLength().fromSi(v.structuralDepth())));
             row.add(Integer.toString(v.pieces()));
             row.add(plain(v.maxRatio()));
+            if (vib) {
+                row.add(plain(v.vibrationRatio()));
+            }
             row.add(Integer.toString(v.problems()));
             row.add(Boolean.toString(v.sound()));
             row.add(Boolean.toString(depthFront.contains(v.index())));
@@ -310,6 +330,14 @@ public final class StudyCommand implements Callable<Integer> {
             b.append(String.join(",", row)).append('\n');
         }
         return b.toString();
+    }
+
+    /**
+     * Whether the outputs carry the vibration column: only when some variant has a bay checked, so studies of
+     * plans without slabs print exactly as before.
+     */
+    static boolean vibration(StudyResult r) {
+        return r.variants().stream().anyMatch(VariantResult::vibrationChecked);
     }
 
     private static String plain(double v) {
@@ -357,6 +385,9 @@ public final class StudyCommand implements Callable<Integer> {
             j.put("structuralDepth", json(us.smallLength().fromSi(v.structuralDepth())));
             j.put("pieces", v.pieces());
             j.put("maxRatio", json(v.maxRatio()));
+            if (vibration(r)) {
+                j.put("vibrationRatio", json(v.vibrationRatio()));
+            }
             j.put("problems", v.problems());
             j.put("sound", v.sound());
             j.put("weightDepthFront", depthFront.contains(v.index()));

@@ -32,14 +32,50 @@ import org.baywright.takedown.TakedownResult;
  * @param floorKey a digest of the designed floor: every member's kind, position and section and every
  *     column tier's section at every level; two variants with the same key are the same floor (empty when
  *     the variant did not run)
+ * @param vibrationRatio the worst floor-vibration ratio (a_p/g ÷ a_o/g, AISC DG11 walking) of the variant's bays
+ *     within the method (meets or exceeds; bays above 9 Hz and bays not checked left out), NaN when no bay was so
+ *     checked (no slab, a roof only, the variant did not run)
  */
 public record VariantResult(int index, List<Setting> settings, double steelWeight, double floorArea, double weightPerArea,
         double beamDepth, double girderDepth, int pieces, double maxRatio, int problems, int errors, int unsized,
-        String message, InfillLayout infill, String floorKey) {
+        String message, InfillLayout infill, String floorKey, double vibrationRatio) {
     public VariantResult {
         settings = List.copyOf(settings);
         infill = infill == null ? InfillLayout.NONE : infill;
         floorKey = floorKey == null ? "" : floorKey;
+    }
+
+    /** The figures without a vibration check (NaN: no bay checked). */
+    public VariantResult(int index, List<Setting> settings, double steelWeight, double floorArea, double weightPerArea,
+            double beamDepth, double girderDepth, int pieces, double maxRatio, int problems, int errors, int unsized,
+            String message, InfillLayout infill, String floorKey) {
+        this(index, settings, steelWeight, floorArea, weightPerArea, beamDepth, girderDepth, pieces, maxRatio, problems, errors,
+                unsized, message, infill, floorKey, Double.NaN);
+    }
+
+    /** True when some bay of the variant was checked for floor vibration within the method. */
+    public boolean vibrationChecked() {
+        return !Double.isNaN(vibrationRatio);
+    }
+
+    /**
+     * True when no checked bay exceeds the floor-vibration limit (a_p/g ≤ a_o/g, AISC DG11 2nd ed. Eq. 4-1); also
+     * true when no bay was checked, so plans without slabs are not filtered out.
+     */
+    public boolean meetsVibration() {
+        return !(vibrationRatio > 1);
+    }
+
+    /** The worst ratio of the run's bays within the method (meets or exceeds), NaN when none. */
+    public static double vibrationRatio(RunResult run) {
+        double worst = Double.NaN;
+        for (org.baywright.takedown.BayResult b : run.bays()) {
+            if (b.checked() && b.result().status() != org.baywright.design.dg11.VibrationStatus.OUTSIDE_METHOD
+                    && !(b.ratio() <= worst)) {
+                worst = b.ratio();
+            }
+        }
+        return worst;
     }
 
     /** The figures without infill layout or floor digest (tests and hand-made results). */
@@ -100,7 +136,8 @@ public record VariantResult(int index, List<Setting> settings, double steelWeigh
         double w = t.steelWeight();
         double area = t.floorArea();
         return new VariantResult(index, settings, w, area, area > 0 ? w / area : Double.NaN, beam, girder, pieces,
-                RunSummary.maxRatio(t), problems.size(), errors, unsized, "", InfillLayout.of(run.plan()), floorKey(run));
+                RunSummary.maxRatio(t), problems.size(), errors, unsized, "", InfillLayout.of(run.plan()), floorKey(run),
+                vibrationRatio(run));
     }
 
     /**

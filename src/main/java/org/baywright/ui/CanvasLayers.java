@@ -79,6 +79,9 @@ final class CanvasLayers {
                 }
             }
         }
+        if (model.showVibrationProperty().get()) {
+            vibration(g, model, view);
+        }
         if (sel.isEmpty()) {
             return;
         }
@@ -132,6 +135,133 @@ final class CanvasLayers {
         g.setLineCap(StrokeLineCap.SQUARE);
     }
 
+    /**
+     * View › Floor vibration, under the plan: each bay of the level tinted by its ratio ({@link VibrationScale});
+     * bays that exceed the limit cross-hatched with a heavy dashed outline, bays not checked grey. The values are
+     * written over the plan ({@link #vibrationLabels}).
+     */
+    static void vibration(GraphicsContext g, EditorModel model, ViewTransform view) {
+        for (org.baywright.takedown.BayResult b : model.currentBays()) {
+            List<Point> corners = BayView.outline(b.bay());
+            double[] xs = new double[4];
+            double[] ys = new double[4];
+            for (int i = 0; i < 4; i++) {
+                xs[i] = view.screenX(corners.get(i).x());
+                ys[i] = view.screenY(corners.get(i).y());
+            }
+            Rgb fill = VibrationScale.at(b.ratio());
+            g.setFill(FxRenderer.colour(fill));
+            g.fillPolygon(xs, ys, 4);
+            boolean exceeds = b.checked() && b.ratio() > 1;
+            if (exceeds) {
+                hatch(g, xs, ys);
+            }
+            g.setStroke(exceeds ? FxRenderer.colour(VibrationScale.EXCEEDS_INK) : Color.rgb(255, 255, 255, 0.9));
+            g.setLineWidth(exceeds ? 3 : 1.5);
+            g.setLineDashes(exceeds ? new double[] {10, 5} : null);
+            g.strokePolygon(xs, ys, 4);
+            g.setLineDashes();
+        }
+    }
+
+    /**
+     * Over the plan, with View › Floor vibration on: f_n and a_p/g of each bay on a small plate of the bay's colour
+     * at its centre (above the member labels, which would otherwise hide them), the picked bay outlined in the
+     * selection colour, and the key of the bay colours.
+     */
+    static void vibrationLabels(GraphicsContext g, EditorModel model, ViewTransform view, double w, double h) {
+        model.selectedBayResult().ifPresent(b -> {
+            List<Point> corners = BayView.outline(b.bay());
+            double[] xs = new double[4];
+            double[] ys = new double[4];
+            for (int i = 0; i < 4; i++) {
+                xs[i] = view.screenX(corners.get(i).x());
+                ys[i] = view.screenY(corners.get(i).y());
+            }
+            g.setStroke(SELECTION);
+            g.setLineWidth(5);
+            g.setLineDashes();
+            g.strokePolygon(xs, ys, 4);
+        });
+        g.setTextAlign(TextAlignment.CENTER);
+        g.setTextBaseline(VPos.CENTER);
+        double size = 10.5;
+        g.setFont(Font.font(null, FontWeight.BOLD, size));
+        for (org.baywright.takedown.BayResult b : model.currentBays()) {
+            Rgb fill = VibrationScale.at(b.ratio());
+            double cx = view.screenX(b.bay().centre().x());
+            double cy = view.screenY(b.bay().centre().y());
+            List<String> lines = BayView.label(b);
+            int longest = lines.stream().mapToInt(String::length).max().orElse(0);
+            double pw = longest * size * 0.56 + 8;
+            double ph = lines.size() * (size + 3) + 4;
+            g.setFill(FxRenderer.colour(fill));
+            g.fillRect(cx - pw / 2, cy - ph / 2, pw, ph);
+            boolean exceeds = b.checked() && b.ratio() > 1;
+            g.setStroke(exceeds ? FxRenderer.colour(VibrationScale.EXCEEDS_INK) : INK);
+            g.setLineWidth(exceeds ? 2 : 0.8);
+            g.strokeRect(cx - pw / 2, cy - ph / 2, pw, ph);
+            g.setFill(FxRenderer.colour(VibrationScale.textOn(fill)));
+            for (int i = 0; i < lines.size(); i++) {
+                g.fillText(lines.get(i), cx, cy + (i - (lines.size() - 1) / 2.0) * (size + 3));
+            }
+        }
+        g.setTextBaseline(VPos.BASELINE);
+        vibrationKey(g, w - 372, h - 30);
+    }
+
+    /** The hover box of a bay: its text lines on a pale plate beside the pointer, kept inside the view. */
+    static void hoverBox(GraphicsContext g, String text, double x, double y, double w, double h) {
+        String[] lines = text.split("\n");
+        double size = 12;
+        double lineH = size + 4;
+        int longest = 0;
+        for (String l : lines) {
+            longest = Math.max(longest, l.length());
+        }
+        double bw = longest * size * 0.6 + 16;
+        double bh = lines.length * lineH + 10;
+        double bx = Math.min(x + 16, w - bw - 4);
+        double by = Math.min(y + 16, h - bh - 4);
+        g.setFill(Color.rgb(255, 255, 250, 0.95));
+        g.fillRect(bx, by, bw, bh);
+        g.setStroke(FxRenderer.colour(VibrationScale.EXCEEDS_INK));
+        g.setLineWidth(1);
+        g.setLineDashes();
+        g.strokeRect(bx + 0.5, by + 0.5, bw, bh);
+        g.setFill(INK);
+        g.setTextAlign(TextAlignment.LEFT);
+        g.setTextBaseline(VPos.TOP);
+        for (int i = 0; i < lines.length; i++) {
+            g.setFont(i == 0 ? Font.font(null, FontWeight.BOLD, size) : Font.font(size));
+            g.fillText(lines[i], bx + 8, by + 5 + i * lineH);
+        }
+        g.setTextBaseline(VPos.BASELINE);
+    }
+
+    /** Diagonal hatch inside a convex quadrilateral (the bays that exceed the limit). */
+    private static void hatch(GraphicsContext g, double[] xs, double[] ys) {
+        g.save();
+        g.beginPath();
+        g.moveTo(xs[0], ys[0]);
+        for (int i = 1; i < 4; i++) {
+            g.lineTo(xs[i], ys[i]);
+        }
+        g.closePath();
+        g.clip();
+        double minX = Math.min(Math.min(xs[0], xs[1]), Math.min(xs[2], xs[3]));
+        double maxX = Math.max(Math.max(xs[0], xs[1]), Math.max(xs[2], xs[3]));
+        double minY = Math.min(Math.min(ys[0], ys[1]), Math.min(ys[2], ys[3]));
+        double maxY = Math.max(Math.max(ys[0], ys[1]), Math.max(ys[2], ys[3]));
+        g.setStroke(Color.rgb(255, 255, 255, 0.55));
+        g.setLineWidth(1.5);
+        double h = maxY - minY;
+        for (double x = minX - h; x < maxX; x += 9) {
+            g.strokeLine(x, maxY, x + h, minY);
+        }
+        g.restore();
+    }
+
     private static void selectionLine(GraphicsContext g, ViewTransform view, Point a, Point b, double width) {
         g.setLineWidth(width);
         g.strokeLine(view.screenX(a.x()), view.screenY(a.y()), view.screenX(b.x()), view.screenY(b.y()));
@@ -181,6 +311,9 @@ final class CanvasLayers {
                 g.setFont(Font.font(null, FontWeight.BOLD, hot ? 13 : 11));
                 g.fillText("!", x, y + 4);
             }
+        }
+        if (model.showVibrationProperty().get()) {
+            vibrationLabels(g, model, view, w, h - legendHeight);
         }
         legend(g, model, w, h, legendHeight);
     }
@@ -237,6 +370,57 @@ final class CanvasLayers {
             g.fillText("end reactions R, service, unreduced: " + (model.units() == UnitSystem.SI ? "kN" : "kip"),
                     x + 48 + 140, mid);
         }
+        g.setTextBaseline(VPos.BASELINE);
+    }
+
+    /** The key of View › Floor vibration, a plate at (x, y) just above the legend strip: the bay scale, the exceeds mark and grey. */
+    private static void vibrationKey(GraphicsContext g, double x, double y) {
+        g.setFill(Color.web("#ecebe6"));
+        g.fillRect(x, y, 366, 24);
+        g.setStroke(Color.web("#c9c7bf"));
+        g.setLineWidth(1);
+        g.strokeRect(x + 0.5, y + 0.5, 366, 24);
+        double mid = y + 12;
+        x += 8;
+        g.setTextBaseline(VPos.CENTER);
+        g.setTextAlign(TextAlignment.LEFT);
+        g.setFont(Font.font(null, FontWeight.BOLD, 11));
+        g.setFill(INK);
+        g.fillText("Bays", x, mid);
+        x += 34;
+        g.setFont(Font.font(11));
+        g.fillText("0", x, mid);
+        x += 12;
+        double barW = 80;
+        List<Stop> stops = new ArrayList<>();
+        for (int i = 0; i <= 12; i++) {
+            stops.add(new Stop(i / 12.0, FxRenderer.colour(VibrationScale.at(i / 12.0 * VibrationScale.FULL))));
+        }
+        g.setFill(new LinearGradient(x, 0, x + barW, 0, false, CycleMethod.NO_CYCLE, stops));
+        g.fillRect(x, mid - 6, barW, 12);
+        g.setStroke(INK);
+        g.setLineWidth(1);
+        g.strokeRect(x, mid - 6, barW, 12);
+        g.setFill(INK);
+        g.fillText("1.5", x + barW + 6, mid);
+        x += barW + 28;
+        double[] xs = {x, x + 30, x + 30, x};
+        double[] ys = {mid - 6, mid - 6, mid + 6, mid + 6};
+        g.setFill(FxRenderer.colour(VibrationScale.at(1.2)));
+        g.fillPolygon(xs, ys, 4);
+        hatch(g, xs, ys);
+        g.setStroke(FxRenderer.colour(VibrationScale.EXCEEDS_INK));
+        g.setLineWidth(2);
+        g.setLineDashes(6, 3);
+        g.strokePolygon(xs, ys, 4);
+        g.setLineDashes();
+        g.setFill(INK);
+        g.fillText("exceeds", x + 36, mid);
+        x += 84;
+        g.setFill(FxRenderer.colour(VibrationScale.NOT_CHECKED));
+        g.fillRect(x, mid - 6, 30, 12);
+        g.setFill(INK);
+        g.fillText("not checked", x + 36, mid);
         g.setTextBaseline(VPos.BASELINE);
     }
 

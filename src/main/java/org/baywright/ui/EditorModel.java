@@ -50,6 +50,9 @@ public final class EditorModel {
     private final ToolSettings toolSettings = new ToolSettings();
     private final BooleanProperty showReactions = new SimpleBooleanProperty(this, "showReactions");
     private final BooleanProperty showTributary = new SimpleBooleanProperty(this, "showTributary");
+    private final BooleanProperty showVibration = new SimpleBooleanProperty(this, "showVibration");
+    /** The bay picked on the canvas while View › Floor vibration is on (its id), or null. */
+    private final StringProperty selectedBay = new SimpleStringProperty(this, "selectedBay");
     private final javafx.beans.property.IntegerProperty opened = new javafx.beans.property.SimpleIntegerProperty(this, "opened");
     private final ObjectProperty<Problem> shownProblem = new SimpleObjectProperty<>(this, "shownProblem");
     /** Milliseconds from each edit to its run on screen, newest last (at most {@value #LATENCY_KEPT}). */
@@ -69,6 +72,17 @@ public final class EditorModel {
 
     public EditorModel(TaskRunner runner) {
         this.runner = Objects.requireNonNull(runner, "runner");
+        level.addListener((o, was, now) -> selectedBay.set(null));
+        showVibration.addListener((o, was, now) -> {
+            if (!now) {
+                selectedBay.set(null);
+            }
+        });
+        selection.addListener((javafx.collections.SetChangeListener<String>) c -> {
+            if (!selection.isEmpty()) {
+                selectedBay.set(null);
+            }
+        });
         level.addListener((o, was, now) -> {
             String id = selected.get();
             if (id != null && currentMembers().stream().noneMatch(m -> m.id().equals(id))) {
@@ -305,6 +319,27 @@ public final class EditorModel {
     /** Whether the canvas shades the members' tributary areas. */
     public BooleanProperty showTributaryProperty() {
         return showTributary;
+    }
+
+    /** Whether the canvas tints each bay by its floor-vibration ratio (View › Floor vibration). */
+    public BooleanProperty showVibrationProperty() {
+        return showVibration;
+    }
+
+    /** The id of the bay picked on the canvas (View › Floor vibration on, no member under the pointer), or null. */
+    public StringProperty selectedBayProperty() {
+        return selectedBay;
+    }
+
+    /** The floor-vibration checks of the bays of the current level, empty before a run. */
+    public List<org.baywright.takedown.BayResult> currentBays() {
+        return BayView.of(run.get(), level.get());
+    }
+
+    /** The check of the picked bay at the current level, if one is picked. */
+    public Optional<org.baywright.takedown.BayResult> selectedBayResult() {
+        String id = selectedBay.get();
+        return id == null ? Optional.empty() : currentBays().stream().filter(b -> b.bay().id().equals(id)).findFirst();
     }
 
     /** Counts documents shown (opened, new, recovered); edits do not change it. */

@@ -88,9 +88,12 @@ final class MainMenus {
         tributary.setId("menu-tributary");
         tributary.setAccelerator(KeyCombination.keyCombination("Shortcut+T"));
         tributary.selectedProperty().bindBidirectional(model.showTributaryProperty());
+        CheckMenuItem vibration = new CheckMenuItem("Floor vibration");
+        vibration.setId("menu-vibration");
+        vibration.selectedProperty().bindBidirectional(model.showVibrationProperty());
         return new Menu("View", null, item("Plan", "Shortcut+1", () -> showTab.accept("Plan")),
                 item("Study", "Shortcut+2", () -> showTab.accept("Study")), new SeparatorMenuItem(), fit,
-                new SeparatorMenuItem(), reactions, tributary, new SeparatorMenuItem(), item("Run again", "F5", model::rerun));
+                new SeparatorMenuItem(), reactions, tributary, vibration, new SeparatorMenuItem(), item("Run again", "F5", model::rerun));
     }
 
     private Menu design() {

@@ -62,6 +62,10 @@ public final class PlanCanvas extends Region {
     private boolean panning;
     private double lastX;
     private double lastY;
+    /** The hover text of the bay under the pointer (View › Floor vibration on, no member there), or null. */
+    private String bayHover;
+    private double hoverX;
+    private double hoverY;
 
     /** What the under (0), marks (1) and plan (2) canvases were last drawn from. */
     private final LayerMemo drawn = new LayerMemo(3);
@@ -114,6 +118,7 @@ public final class PlanCanvas extends Region {
             awaitRun.stop();
             drawUnder();
             drawPlan();
+            drawMarks();
         });
         model.problems().addListener((ListChangeListener<Object>) c -> drawMarks());
         model.selectedProperty().addListener((o, a, b) -> drawUnder());
@@ -123,6 +128,13 @@ public final class PlanCanvas extends Region {
             drawMarks();
         });
         model.showTributaryProperty().addListener((o, a, b) -> drawUnder());
+        model.showVibrationProperty().addListener((o, a, b) -> {
+            bayHover = null;
+            drawUnder();
+            drawMarks();
+            drawOverlay();
+        });
+        model.selectedBayProperty().addListener((o, a, b) -> drawMarks());
         model.shownProblemProperty().addListener((o, a, b) -> drawMarks());
         model.toolProperty().addListener((o, a, b) -> {
             setCursor(b == Tool.SELECT ? Cursor.DEFAULT : Cursor.CROSSHAIR);
@@ -133,9 +145,13 @@ public final class PlanCanvas extends Region {
         addEventHandler(MouseEvent.MOUSE_RELEASED, this::released);
         addEventHandler(MouseEvent.MOUSE_MOVED, e -> {
             tools.moved(e.getX(), e.getY());
+            bayHover = bayHoverAt(e.getX(), e.getY());
+            hoverX = e.getX();
+            hoverY = e.getY();
             drawOverlay();
         });
         addEventHandler(MouseEvent.MOUSE_EXITED, e -> {
+            bayHover = null;
             if (tools.mode() == CanvasTools.Mode.IDLE) {
                 overlay.getGraphicsContext2D().clearRect(0, 0, overlay.getWidth(), overlay.getHeight());
             }
@@ -233,6 +249,7 @@ public final class PlanCanvas extends Region {
         }
         if (e.getButton() == MouseButton.PRIMARY) {
             tools.pressed(e.getX(), e.getY(), e.isShiftDown(), e.getClickCount());
+            pickBay(e.getX(), e.getY());
             if (e.getClickCount() == 2) {
                 tools.doubleClicked();
             }
@@ -289,6 +306,37 @@ public final class PlanCanvas extends Region {
                 .map(PlanHits.Segment::id);
     }
 
+    /**
+     * The bay under a canvas point while View › Floor vibration is on and no member lies under it, or empty
+     * (the smallest outline when several hold the point).
+     */
+    public Optional<org.baywright.takedown.BayResult> bayAt(double x, double y) {
+        if (!model.showVibrationProperty().get() || memberAt(x, y).isPresent()) {
+            return Optional.empty();
+        }
+        Point2D w = view.toWorld(x, y);
+        return BayView.at(model.currentBays(), w.getX(), w.getY());
+    }
+
+    /** The hover text at a canvas point ({@link BayView#hover}), or null where no bay is under it. */
+    String bayHoverAt(double x, double y) {
+        return bayAt(x, y).map(BayView::hover).orElse(null);
+    }
+
+    /** The hover text shown now, or null (for tests). */
+    String bayHover() {
+        return bayHover;
+    }
+
+    /** A click with the Select tool that picked nothing else picks the bay under it (View › Floor vibration on). */
+    private void pickBay(double x, double y) {
+        if (model.toolProperty().get() != Tool.SELECT || !model.selection().isEmpty()) {
+            model.selectedBayProperty().set(null);
+            return;
+        }
+        model.selectedBayProperty().set(bayAt(x, y).map(b -> b.bay().id()).orElse(null));
+    }
+
     // ---- drawing ------------------------------------------------------------------------------
 
     /** Draws every layer again (the plan laid out afresh if the zoom changed since). */
@@ -310,14 +358,17 @@ public final class PlanCanvas extends Region {
         // the plan matters only for where selected openings, loads and columns are
         Object planIfSelection = model.selection().isEmpty() ? null : id(model.plan());
         if (fresh(0, planIfSelection, model.plan() == null, id(model.run()), model.levelProperty().get(),
-                java.util.Set.copyOf(model.selection()), model.showTributaryProperty().get())) {
+                java.util.Set.copyOf(model.selection()), model.showTributaryProperty().get(),
+                model.showVibrationProperty().get())) {
             CanvasLayers.under(under.getGraphicsContext2D(), model, view, BACKGROUND);
         }
     }
 
     private void drawMarks() {
         if (fresh(1, model.plan() == null, model.currentFloorId(), model.units(), List.copyOf(model.problems()),
-                model.shownProblemProperty().get(), model.showReactionsProperty().get())) {
+                model.shownProblemProperty().get(), model.showReactionsProperty().get(), model.showVibrationProperty().get(),
+                model.showVibrationProperty().get() ? id(model.run()) : null, model.levelProperty().get(),
+                model.selectedBayProperty().get())) {
             CanvasLayers.over(marks.getGraphicsContext2D(), model, view, LEGEND_H);
         }
     }
@@ -377,6 +428,9 @@ public final class PlanCanvas extends Region {
     /** Draws the gesture in progress and the snap marker. */
     void drawOverlay() {
         CanvasOverlay.draw(overlay, model, tools, view);
+        if (bayHover != null && tools.mode() == CanvasTools.Mode.IDLE) {
+            CanvasLayers.hoverBox(overlay.getGraphicsContext2D(), bayHover, hoverX, hoverY, getWidth(), getHeight() - LEGEND_H);
+        }
     }
 
     /** The canvas of the plan picture (for snapshots of the plan alone). */

@@ -143,6 +143,7 @@ public final class PropertiesViewModel {
         model.levelProperty().addListener((o, a, b) -> refresh());
         model.planProperty().addListener((o, a, b) -> refresh());
         model.selection().addListener((SetChangeListener<String>) c -> refresh());
+        model.selectedBayProperty().addListener((o, a, b) -> refresh());
         refresh();
     }
 
@@ -408,7 +409,10 @@ public final class PropertiesViewModel {
         }
         Optional<MemberResult> member = model.selectedResult();
         String id = model.selectedProperty().get();
-        if (member.isPresent()) {
+        Optional<org.baywright.takedown.BayResult> bay = model.selection().isEmpty() ? model.selectedBayResult() : Optional.empty();
+        if (bay.isPresent()) {
+            bay(bay.get(), us, out);
+        } else if (member.isPresent()) {
             member(member.get(), us, out);
         } else if (id != null && model.plan() != null) {
             Optional<Column> col = model.plan().columns().stream().filter(c -> c.id().equals(id)).findFirst();
@@ -427,6 +431,52 @@ public final class PropertiesViewModel {
         }
         return out;
     }
+
+    /**
+     * A bay picked with View › Floor vibration on: its check (AISC DG11 2nd ed., walking) with every
+     * intermediate value, the method, and the caution where the bay is outside the method or below 3 Hz.
+     */
+    private void bay(org.baywright.takedown.BayResult b, UnitSystem us, List<Item> out) {
+        out.add(new Row("Bay", b.bay().id()));
+        out.add(new Row("Levels", String.join(", ", b.levels())));
+        out.add(new Row("Status", b.status()));
+        out.add(new Note("prop-bay-method", BayView.METHOD));
+        org.baywright.design.dg11.VibrationResult r = b.result();
+        if (r == null) {
+            out.add(new Note("prop-bay-note", b.note().isEmpty() ? BAY_NOT_CHECKED : b.note()));
+            return;
+        }
+        out.add(new Row("fn", BayView.hz(r.fn())));
+        out.add(new Row("ap/g", BayView.percent(r.apg())));
+        out.add(new Row("Limit ao/g", BayView.percent(r.limit())));
+        out.add(new Row("Ratio", BayView.ratio(r.ratio())));
+        org.baywright.units.Unit small = us.smallLength();
+        out.add(new Row("Δj, beam mode", UnitSystem.format(r.dj(), small, us == UnitSystem.SI ? 1 : 3)));
+        out.add(new Row("Δg, girder mode", UnitSystem.format(r.dg(), small, us == UnitSystem.SI ? 1 : 3)));
+        if (r.dgReduced() != r.dg()) {
+            out.add(new Row("Δg′, reduced (Lg < Bj)", UnitSystem.format(r.dgReduced(), small, us == UnitSystem.SI ? 1 : 3)));
+        }
+        out.add(new Row("fj, fg", BayView.hz(r.fj()) + ", " + BayView.hz(r.fg())));
+        out.add(new Row("Bj", us.lengthText(r.bj())));
+        out.add(new Row("Bg", us.lengthText(r.bg())));
+        out.add(new Row("Wj", us.forceText(r.wj())));
+        out.add(new Row("Wg", us.forceText(r.wg())));
+        out.add(new Row("W", us.forceText(r.w())));
+        if (b.inputs() != null) {
+            out.add(new Row("β, damping", String.format(Locale.ROOT, "%.3f", b.inputs().vibration().beta())));
+        }
+        out.add(new Row("Beams, girders", String.join(", ", b.bay().beams()) + "; "
+                + b.bay().girders().stream().map(org.baywright.takedown.Bay.BayGirder::id).collect(Collectors.joining(", "))));
+        if (r.status() == org.baywright.design.dg11.VibrationStatus.OUTSIDE_METHOD) {
+            out.add(new Note("prop-bay-caution", "fn above 9 Hz: the low-frequency walking method does not apply; "
+                    + "this bay is reported as outside the check, not as passing it."));
+        }
+        if (r.belowThreeHz()) {
+            out.add(new Note("prop-bay-low", "fn below 3 Hz: DG11 advises that such floors be avoided."));
+        }
+    }
+
+    private static final String BAY_NOT_CHECKED = org.baywright.takedown.BayResult.NOT_CHECKED;
 
     private void member(MemberResult m, UnitSystem us, List<Item> out) {
         boolean infill = m.id().contains("/");

@@ -99,6 +99,8 @@ public final class StudyPanel extends BorderPane {
     private final Label frontNote = new Label("Each variant is drawn twice: at its deepest beam and at its deepest girder."
             + " Pareto front: no other variant is both lighter and shallower.");
     private final Button open = new Button("Open as new plan");
+    /** Shows only the variants whose bays all meet the floor-vibration limit (AISC DG11 walking). */
+    private final javafx.scene.control.CheckBox meetsVibration = new javafx.scene.control.CheckBox("Meets floor vibration");
     private final ReadOnlyBooleanWrapper running = new ReadOnlyBooleanWrapper(false);
 
     private StudyPanelModel.Setup setup;
@@ -263,7 +265,14 @@ public final class StudyPanel extends BorderPane {
         Label tableNote = new Label("Sorted by steel per floor area; front D: weight–depth, P: weight–pieces."
                 + " Double-click a row to open it.");
         tableNote.setStyle("-fx-font-size: 11px;");
-        HBox tableBar = new HBox(8, open, tableNote);
+        meetsVibration.setId("study-meets-vibration");
+        meetsVibration.setDisable(true);
+        meetsVibration.setOnAction(e -> {
+            drawAcross();
+            drawDepth();
+            fillTable();
+        });
+        HBox tableBar = new HBox(8, open, meetsVibration, tableNote);
         tableBar.setAlignment(Pos.CENTER_LEFT);
         VBox bottom = new VBox(4, tableBar, table);
         VBox.setVgrow(table, Priority.ALWAYS);
@@ -411,6 +420,10 @@ public final class StudyPanel extends BorderPane {
         } finally {
             updating = false;
         }
+        meetsVibration.setDisable(!StudyPanelModel.vibrationStudied(result));
+        if (meetsVibration.isDisable()) {
+            meetsVibration.setSelected(false);
+        }
         drawAcross();
         drawDepth();
         fillTable();
@@ -492,6 +505,9 @@ public final class StudyPanel extends BorderPane {
             XYChart.Series<Number, Number> series = new XYChart.Series<>();
             series.setName(e.getKey());
             for (VariantResult v : e.getValue()) {
+                if (!StudyPanelModel.shown(v, meetsVibration.isSelected())) {
+                    continue;
+                }
                 XYChart.Data<Number, Number> d = new XYChart.Data<>(StudyPanelModel.x(setup, v, x),
                         StudyPanelModel.perArea(v.weightPerArea(), us));
                 d.setExtraValue(v);
@@ -519,7 +535,7 @@ public final class StudyPanel extends BorderPane {
         depthY.setLabel("Steel per floor area (" + StudyPanelModel.perAreaUnit(us) + ")");
         Set<Integer> front = StudyPanelModel.depthFront(result);
         for (Map.Entry<StudyPanelModel.DepthSeries, List<StudyPanelModel.DepthPoint>> e
-                : StudyPanelModel.depthSeries(setup, result).entrySet()) {
+                : StudyPanelModel.depthSeries(setup, result, meetsVibration.isSelected()).entrySet()) {
             XYChart.Series<Number, Number> series = new XYChart.Series<>();
             series.setName(e.getKey().label());
             String style = "study-depth-" + e.getKey().name().toLowerCase(Locale.ROOT).replace('_', '-');
@@ -617,6 +633,9 @@ public final class StudyPanel extends BorderPane {
         table.getColumns().add(column("Girder d (" + small + ")", v -> round(StudyPanelModel.depth(v.girderDepth(), us), 1)));
         table.getColumns().add(column("Pieces", VariantResult::pieces));
         table.getColumns().add(column("Ratio", v -> round(v.maxRatio(), 2)));
+        if (StudyPanelModel.vibrationStudied(result)) {
+            table.getColumns().add(column("Vibration", v -> v.vibrationChecked() ? round(v.vibrationRatio(), 2) : "—"));
+        }
         table.getColumns().add(column("Problems", v -> v.message().isEmpty() ? (Object) v.problems() : "not run"));
         table.getColumns().add(column("Front", v -> (depthFront.contains(v.index()) ? "D" : "")
                 + (piecesFront.contains(v.index()) ? "P" : "")));
@@ -628,7 +647,8 @@ public final class StudyPanel extends BorderPane {
         if (setup.depthLimit() > 0) {
             table.getColumns().add(column("Depth limit", v -> StudyPanelModel.tooDeep(setup, v) ? "exceeded" : "within"));
         }
-        List<VariantResult> rows = new ArrayList<>(result.variants());
+        List<VariantResult> rows = new ArrayList<>(result.variants().stream()
+                .filter(v -> StudyPanelModel.shown(v, meetsVibration.isSelected())).toList());
         rows.sort(java.util.Comparator.comparingDouble((VariantResult v) -> Double.isNaN(v.weightPerArea())
                 ? Double.POSITIVE_INFINITY : v.weightPerArea()).thenComparingInt(VariantResult::index));
         table.setItems(FXCollections.observableArrayList(rows));

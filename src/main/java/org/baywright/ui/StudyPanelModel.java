@@ -262,6 +262,25 @@ public final class StudyPanelModel {
         return us.smallLength().fromSi(metres);
     }
 
+    /**
+     * Whether the "Meets floor vibration" filter lets a variant through: always when the filter is off; when on,
+     * only variants with a bay checked and none over the limit (a variant without a checked bay has shown
+     * nothing either way and is left out).
+     */
+    public static boolean shown(VariantResult v, boolean meetsVibrationOnly) {
+        return !meetsVibrationOnly || v.vibrationChecked() && v.meetsVibration();
+    }
+
+    /** True when some variant of the study has a bay checked for floor vibration (the column and filter apply). */
+    public static boolean vibrationStudied(StudyResult r) {
+        return r != null && r.variants().stream().anyMatch(VariantResult::vibrationChecked);
+    }
+
+    /** The vibration cell of a variant: its worst bay ratio to two decimals, or "—" when no bay was checked. */
+    public static String vibration(VariantResult v) {
+        return v.vibrationChecked() ? String.format(Locale.ROOT, "%.2f", v.vibrationRatio()) : "—";
+    }
+
     /** True when a variant can be drawn: it ran and has a weight per area and a depth. */
     public static boolean plotted(VariantResult v) {
         return Double.isFinite(v.weightPerArea()) && Double.isFinite(v.structuralDepth());
@@ -377,7 +396,9 @@ public final class StudyPanelModel {
         /** Variants deeper than the structural depth limit, at the structural depth. */
         TOO_DEEP("Deeper than the limit"),
         /** Variants that ran with problems, at the structural depth. */
-        PROBLEMS("With problems");
+        PROBLEMS("With problems"),
+        /** Variants with a bay over the floor-vibration limit (AISC DG11 walking), at the structural depth. */
+        VIBRATION("Exceeds floor vibration");
 
         private final String label;
 
@@ -406,6 +427,14 @@ public final class StudyPanelModel {
      * front, the variants deeper than the limit and those with problems, each at its structural depth.
      */
     public static Map<DepthSeries, List<DepthPoint>> depthSeries(Setup setup, StudyResult r) {
+        return depthSeries(setup, r, false);
+    }
+
+    /**
+     * As {@link #depthSeries(Setup, StudyResult)}, with only the variants that meet floor vibration when
+     * {@code meetsVibrationOnly} ({@link #shown}); variants with a bay over the limit are also a series of their own.
+     */
+    public static Map<DepthSeries, List<DepthPoint>> depthSeries(Setup setup, StudyResult r, boolean meetsVibrationOnly) {
         UnitSystem us = setup.units();
         Map<DepthSeries, List<DepthPoint>> out = new LinkedHashMap<>();
         for (DepthSeries k : DepthSeries.values()) {
@@ -413,7 +442,7 @@ public final class StudyPanelModel {
         }
         Set<Integer> front = depthFront(r);
         for (VariantResult v : r.variants()) {
-            if (!plotted(v)) {
+            if (!plotted(v) || !shown(v, meetsVibrationOnly)) {
                 continue;
             }
             double y = perArea(v.weightPerArea(), us);
@@ -432,6 +461,9 @@ public final class StudyPanelModel {
             }
             if (!v.sound()) {
                 out.get(DepthSeries.PROBLEMS).add(at);
+            }
+            if (!v.meetsVibration()) {
+                out.get(DepthSeries.VIBRATION).add(at);
             }
         }
         out.values().removeIf(List::isEmpty);
@@ -490,6 +522,10 @@ public final class StudyPanelModel {
             b.append("the same floor as variant ").append(sameAs.getAsInt() + 1).append(" (members, positions and sizes)\n");
         }
         b.append(String.format(Locale.ROOT, "%d pieces; highest ratio %.2f", v.pieces(), v.maxRatio()));
+        if (v.vibrationChecked()) {
+            b.append(String.format(Locale.ROOT, "; floor vibration %.2f (%s)", v.vibrationRatio(),
+                    v.meetsVibration() ? "meets" : "a bay exceeds the limit"));
+        }
         if (v.problems() > 0) {
             b.append(String.format(Locale.ROOT, "; %d problem%s", v.problems(), v.problems() == 1 ? "" : "s"));
         }

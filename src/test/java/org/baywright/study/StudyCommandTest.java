@@ -107,6 +107,31 @@ class StudyCommandTest {
                 "the best list names each floor once: " + best);
     }
 
+    /**
+     * The vibration column appears only when some variant has a bay checked: a plan without a slab
+     * ({@code plans/examples/two-bay.bay.json}) prints as before; the demo (a composite floor) carries "vib" in the table, "vibration ratio" in
+     * the CSV and vibrationRatio in the JSON, each its variant's worst bay (1.42 for B-C/3-4, a_p/g 0.712 % over
+     * 0.5 %, the run's own value; StudyVibrationTest compares every variant with its own run).
+     */
+    @Test
+    void theVibrationColumnOnlyWhereBaysWereChecked(@TempDir Path dir) throws Exception {
+        Path csv = dir.resolve("s.csv");
+        Run bare = run("study", "plans/examples/two-bay.bay.json", "--vary", "method=lrfd,asd", "--csv", csv.toString());
+        assertTrue(bare.out().contains("Baywright study") && bare.out().contains(" ratio "), bare.out() + bare.err());
+        assertFalse(bare.out().contains(" vib"), bare.out());
+        assertFalse(Files.readString(csv).contains("vibration"));
+        Path demoCsv = dir.resolve("d.csv");
+        Run demo = run("study", "plans/harbourview-offices.bay.json", "--vary", "method=lrfd", "--csv", demoCsv.toString());
+        assertEquals(0, demo.code(), demo.err());
+        assertTrue(demo.out().contains(" vib") && demo.out().contains("vib: the worst floor-vibration ratio"), demo.out());
+        var lines = Files.readAllLines(demoCsv);
+        int col = java.util.Arrays.asList(lines.get(0).split(",")).indexOf("vibration ratio");
+        assertTrue(col > 0, lines.get(0));
+        var run = org.baywright.run.PlanRun.run(org.baywright.io.PlanFiles.read(Path.of("plans/harbourview-offices.bay.json"))
+                .plan().orElseThrow());
+        assertEquals(VariantResult.vibrationRatio(run), Double.parseDouble(lines.get(1).split(",", -1)[col]), 1e-5);
+    }
+
     @ParameterizedTest
     @ValueSource(strings = {"beam-spacing", "spacing=6ft", "beam-spacing=6ft..3ft:1ft", "beam-spacing=6..15:1",
         "beam-spacing=6ft..15ft", "beam-spacing=6ft,,8ft", "beam-direction=z", "beam-direction=x..y:1", "method=wsd",

@@ -102,6 +102,36 @@ class StudyPanelModelTest {
         return new StudyResult(vs, s.count(), false);
     }
 
+    /**
+     * The vibration column, filter and chart marks: made-up variants whose worst bay ratios are 0.8, 1.2 and none
+     * (NaN). The filter keeps only the checked variant that meets; the chart marks the one over 1.0 in a series of
+     * its own; the cell shows two decimals or a dash (values from a run are compared in StudyVibrationTest).
+     */
+    @Test
+    void vibrationColumnFilterAndChartMarks() {
+        StudyPanelModel.Setup s = check(Map.of("beam-spacing", "8ft..12ft:2ft")).setup();
+        double[] vib = {0.8, 1.2, Double.NaN};
+        List<VariantResult> vs = new java.util.ArrayList<>();
+        for (int i = 0; i < 3; i++) {
+            vs.add(new VariantResult(i, s.spec().variant(i), 40000 + 1000 * i, 100, 400 + 10 * i, 0.4, 0.5, 20, 0.9, 0, 0, 0,
+                    "", null, "", vib[i]));
+        }
+        StudyResult r = new StudyResult(vs, 3, false);
+        var all = StudyPanelModel.depthSeries(s, r, false);
+        var meets = StudyPanelModel.depthSeries(s, r, true);
+        assertAll(() -> assertTrue(StudyPanelModel.vibrationStudied(r)),
+                () -> assertEquals("0.80", StudyPanelModel.vibration(vs.get(0))),
+                () -> assertEquals("—", StudyPanelModel.vibration(vs.get(2))),
+                () -> assertEquals(List.of(true, false, false),
+                        vs.stream().map(v -> StudyPanelModel.shown(v, true)).toList()),
+                () -> assertEquals(List.of(vs.get(1)), all.get(StudyPanelModel.DepthSeries.VIBRATION).stream()
+                        .map(StudyPanelModel.DepthPoint::variant).toList()),
+                () -> assertEquals(1, meets.get(StudyPanelModel.DepthSeries.BEAM).size()),
+                () -> assertFalse(meets.containsKey(StudyPanelModel.DepthSeries.VIBRATION)),
+                () -> assertFalse(StudyPanelModel.vibrationStudied(made(s))),
+                () -> assertTrue(StudyPanelModel.describe(vs.get(1), UnitSystem.US, false).contains("floor vibration 1.20")));
+    }
+
     @Test
     void axesAreNumericForOneNumberAndCategoriesOtherwise() {
         StudyPanelModel.Setup s = check(Map.of("beam-spacing", "6ft..12ft:2ft", "beam-direction", "x,y",

@@ -101,4 +101,22 @@ class CompositeTakedownTest {
         assertNotNull(member(rq, "G-2-AB").composite());
         assertNull(member(rq, "G-1-AB").composite());
     }
+
+    @Test
+    void aSolidSlabOnFormsActsWithTheMembersWithoutRibs() {
+        // a 5 in solid slab (rib height 0): studs welded to the flange, no rib reduction (AISC 360-16 I8.2a, R_g = R_p = 1.0
+        // with the studs welded directly to the shape)
+        Slab solid = new Slab(0, Units.IN.toSi(6), Units.IN.toSi(12), 0, Units.IN.toSi(5), Units.PCF.toSi(145), Units.KSI.toSi(4),
+                Units.IN.toSi(0.75), Units.KSI.toSi(65), 1, org.baywright.plan.StudPlacement.WEAK, Double.NaN);
+        Plan base = RegularPlan.generate(new RegularPlan.Spec("solid", "us", List.of(ft(30), ft(30)), List.of(ft(30)),
+                List.of(ft(13), ft(13)), true, ft(10), new LoadValues(0, psf(10), psf(50), 0, 0, psf(15)),
+                new LoadValues(psf(40), psf(10), 0, psf(20), 0, 0), LoadValues.ZERO));
+        RunResult r = PlanRun.run(RegularPlan.withSlab(base, solid, CompositeMode.COMPOSITE, 0), CatalogFile.loadDefault());
+        assertTrue(r.problems().isEmpty(), r.problems().toString());
+        MemberResult beam = member(r, "IF-AB-12/1");
+        assertEquals("solid slab", beam.composite().ribs());
+        assertTrue(beam.studs() > 0 && beam.maxRatio() <= 1 + 1e-9);
+        // the slab's weight: 5 in at 145 pcf = 60.4 psf (common practice: unit weight × thickness)
+        assertEquals(60.42, Units.PSF.fromSi(SlabDesign.weight(solid)), 0.01);
+    }
 }

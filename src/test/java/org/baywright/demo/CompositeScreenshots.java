@@ -18,7 +18,6 @@ import org.baywright.plan.PlanEdits;
 import org.baywright.plan.Slab;
 import org.baywright.ui.EditorModel;
 import org.baywright.ui.MainWindow;
-import org.baywright.ui.TaskRunner;
 import org.baywright.ui.Tool;
 
 /**
@@ -41,12 +40,10 @@ public final class CompositeScreenshots {
 
         @Override
         public void start(Stage stage) throws Exception {
-            EditorModel model = new EditorModel(TaskRunner.direct());
-            MainWindow window = new MainWindow(model, Platform::exit);
-            Scene scene = new Scene(window.root(), 1440, 880);
-            stage.setScene(scene);
-            stage.setTitle("Baywright");
-            stage.show();
+            ShotWindow shot = ShotWindow.open(stage);
+            EditorModel model = shot.model();
+            MainWindow window = shot.window();
+            Scene scene = shot.scene();
             window.open(Path.of("plans/harbourview-offices.bay.json"));
             String floor = model.currentFloorId();
             // the demo is a composite floor; a plan without a slab gets the typical one

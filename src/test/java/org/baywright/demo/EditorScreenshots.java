@@ -21,7 +21,6 @@ import org.baywright.plan.Point;
 import org.baywright.plan.Polygon;
 import org.baywright.ui.EditorModel;
 import org.baywright.ui.MainWindow;
-import org.baywright.ui.TaskRunner;
 import org.baywright.ui.Tool;
 import org.baywright.units.UnitSystem;
 import org.baywright.units.Units;
@@ -45,12 +44,10 @@ public final class EditorScreenshots {
 
     @Override
     public void start(Stage stage) throws Exception {
-        EditorModel model = new EditorModel(TaskRunner.direct());
-        MainWindow window = new MainWindow(model, Platform::exit);
-        Scene scene = new Scene(window.root(), 1440, 880);
-        stage.setScene(scene);
-        stage.setTitle("Baywright");
-        stage.show();
+        ShotWindow shot = ShotWindow.open(stage);
+        EditorModel model = shot.model();
+        MainWindow window = shot.window();
+        Scene scene = shot.scene();
 
         // 1. the demo, Level 2, a girder selected
         window.open(Path.of("plans/harbourview-offices.bay.json"));

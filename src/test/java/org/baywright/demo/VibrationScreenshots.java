@@ -18,7 +18,6 @@ import javax.imageio.ImageIO;
 import org.baywright.takedown.BayResult;
 import org.baywright.ui.EditorModel;
 import org.baywright.ui.MainWindow;
-import org.baywright.ui.TaskRunner;
 
 /**
  * Takes {@code docs/images/editor-vibration.png} from the real window (under Xvfb, with
@@ -39,12 +38,10 @@ public final class VibrationScreenshots {
 
         @Override
         public void start(Stage stage) throws Exception {
-            EditorModel model = new EditorModel(TaskRunner.direct());
-            MainWindow window = new MainWindow(model, Platform::exit);
-            Scene scene = new Scene(window.root(), 1440, 880);
-            stage.setScene(scene);
-            stage.setTitle("Baywright");
-            stage.show();
+            ShotWindow shot = ShotWindow.open(stage);
+            EditorModel model = shot.model();
+            MainWindow window = shot.window();
+            Scene scene = shot.scene();
             window.open(Path.of("plans/harbourview-offices.bay.json"));
             BayResult worst = model.run().bays().stream().filter(BayResult::checked)
                     .max(Comparator.comparingDouble(BayResult::ratio)).orElseThrow();

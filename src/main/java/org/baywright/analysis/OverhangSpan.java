@@ -34,7 +34,6 @@ import java.util.Objects;
  */
 public final class OverhangSpan {
     private static final double CLOSURE_TOLERANCE = 1e-9;
-    private static final double POSITION_SLACK = 1e-9;
     private static final int SAMPLES = 16;
 
     private final double length;
@@ -246,11 +245,7 @@ public final class OverhangSpan {
 
     /** Sum of the loads, N. */
     public double totalLoad() {
-        double sum = 0.0;
-        for (SpanLoad l : loads) {
-            sum += l.total();
-        }
-        return sum;
+        return Pieces.totalLoad(loads);
     }
 
     /** Reaction at the first support, N, upward positive (negative: the support holds the member down). */
@@ -267,7 +262,7 @@ public final class OverhangSpan {
     public double shear(double x) {
         int k = piece(x);
         double t = clamp(x) - xs[k];
-        return vc[3 * k] + t * (vc[3 * k + 1] + t * vc[3 * k + 2]);
+        return Pieces.shear(vc, k, t);
     }
 
     /** Shear just left of x, N (at x = 0, just right of it). */
@@ -278,14 +273,14 @@ public final class OverhangSpan {
             k--;
         }
         double t = c - xs[k];
-        return vc[3 * k] + t * (vc[3 * k + 1] + t * vc[3 * k + 2]);
+        return Pieces.shear(vc, k, t);
     }
 
     /** Bending moment at x, N·m, sagging positive. */
     public double moment(double x) {
         int k = piece(x);
         double t = clamp(x) - xs[k];
-        return mc[4 * k] + t * (mc[4 * k + 1] + t * (mc[4 * k + 2] + t * mc[4 * k + 3]));
+        return Pieces.moment(mc, k, t);
     }
 
     /** Deflection at x, m, downward positive, for flexural stiffness {@code ei} (N·m²). */
@@ -302,8 +297,7 @@ public final class OverhangSpan {
     }
 
     private double eiSlope(int k, double t) {
-        int o = 6 * k;
-        return yc[o + 1] + t * (2.0 * yc[o + 2] + t * (3.0 * yc[o + 3] + t * (4.0 * yc[o + 4] + t * 5.0 * yc[o + 5])));
+        return Pieces.eiSlope(yc, k, t);
     }
 
     /** The largest shear magnitude anywhere on the member, N, and where (either side of each breakpoint). */
@@ -313,7 +307,7 @@ public final class OverhangSpan {
         for (int k = 0; k < xs.length - 1; k++) {
             double h = xs[k + 1] - xs[k];
             double v0 = vc[3 * k];
-            double v1 = vc[3 * k] + h * (vc[3 * k + 1] + h * vc[3 * k + 2]);
+            double v1 = Pieces.shear(vc, k, h);
             if (Math.abs(v0) > best) {
                 best = Math.abs(v0);
                 where = xs[k];
@@ -354,7 +348,7 @@ public final class OverhangSpan {
             }
             for (int i = 0; i < nc; i++) {
                 double t = cand[i] - xs[k];
-                double mm = mc[4 * k] + t * (mc[4 * k + 1] + t * (mc[4 * k + 2] + t * mc[4 * k + 3]));
+                double mm = Pieces.moment(mc, k, t);
                 if (hogging ? mm < best : mm > best) {
                     best = mm;
                     where = cand[i];
@@ -442,30 +436,11 @@ public final class OverhangSpan {
     }
 
     private double clamp(double x) {
-        return x < 0.0 ? 0.0 : Math.min(x, length);
+        return Pieces.clamp(x, length);
     }
 
+    /** Index of the piece holding x: {@code xs[k] <= x < xs[k+1]}, the last piece for x = L. */
     private int piece(double x) {
-        if (!(x >= -POSITION_SLACK * length && x <= length * (1.0 + POSITION_SLACK))) {
-            throw new IllegalArgumentException("x = " + x + " m is outside the member: allowed range is [0, " + length + "] m");
-        }
-        int last = xs.length - 2;
-        if (x >= length) {
-            return last;
-        }
-        if (x <= 0.0) {
-            return 0;
-        }
-        int lo = 0;
-        int hi = last;
-        while (lo < hi) {
-            int mid = (lo + hi + 1) >>> 1;
-            if (xs[mid] <= x) {
-                lo = mid;
-            } else {
-                hi = mid - 1;
-            }
-        }
-        return lo;
+        return Pieces.piece(xs, length, x, "member");
     }
 }

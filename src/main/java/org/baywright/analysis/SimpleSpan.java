@@ -46,8 +46,6 @@ public final class SimpleSpan {
     private static final double CONVERGED = 1e-15;
 
 
-    /** Relative overshoot of a query position beyond the span that is clamped rather than refused. */
-    private static final double POSITION_SLACK = 1e-9;
     /** Relative tolerance of the closing check at the right support. */
     private static final double CLOSURE_TOLERANCE = 1e-9;
 
@@ -242,11 +240,7 @@ public final class SimpleSpan {
 
     /** Sum of the resultants of all loads, N (downward positive); equals R1 + R2 to rounding. */
     public double totalLoad() {
-        double sum = 0.0;
-        for (SpanLoad load : loads) {
-            sum += load.total();
-        }
-        return sum;
+        return Pieces.totalLoad(loads);
     }
 
     /** Reaction at the left support (x = 0), N, upward positive. */
@@ -270,7 +264,7 @@ public final class SimpleSpan {
     public double shear(double x) {
         int k = piece(x);
         double t = clamp(x) - xs[k];
-        return vc[3 * k] + t * (vc[3 * k + 1] + t * vc[3 * k + 2]);
+        return Pieces.shear(vc, k, t);
     }
 
     /**
@@ -285,7 +279,7 @@ public final class SimpleSpan {
     /** The moment at x on piece k (the piece holding x). */
     private double momentOn(int k, double x) {
         double t = clamp(x) - xs[k];
-        return mc[4 * k] + t * (mc[4 * k + 1] + t * (mc[4 * k + 2] + t * mc[4 * k + 3]));
+        return Pieces.moment(mc, k, t);
     }
 
     /**
@@ -322,7 +316,7 @@ public final class SimpleSpan {
         double[] roots = new double[2];
         for (int k = 0; k < xs.length - 1; k++) {
             double h = xs[k + 1] - xs[k];
-            double end = mc[4 * k] + h * (mc[4 * k + 1] + h * (mc[4 * k + 2] + h * mc[4 * k + 3]));
+            double end = Pieces.moment(mc, k, h);
             if (Math.abs(mc[4 * k]) > Math.abs(best)) {
                 best = mc[4 * k];
                 where = xs[k];
@@ -331,7 +325,7 @@ public final class SimpleSpan {
             for (int r = 0; r < found; r++) {
                 double t = roots[r];
                 if (t > 0.0 && t < h) {
-                    double value = mc[4 * k] + t * (mc[4 * k + 1] + t * (mc[4 * k + 2] + t * mc[4 * k + 3]));
+                    double value = Pieces.moment(mc, k, t);
                     if (Math.abs(value) > Math.abs(best)) {
                         best = value;
                         where = xs[k] + t;
@@ -583,8 +577,7 @@ public final class SimpleSpan {
     /** {@link #eiSlope(double, double)} with the piece of x already known. */
     private double eiSlope(int k, double x, double w) {
         double t = clamp(x) - xs[k];
-        int o = 6 * k;
-        double s = yc[o + 1] + t * (2.0 * yc[o + 2] + t * (3.0 * yc[o + 3] + t * (4.0 * yc[o + 4] + t * 5.0 * yc[o + 5])));
+        double s = Pieces.eiSlope(yc, k, t);
         double l = length;
         return s + w * (l * l * l - 6.0 * l * x * x + 4.0 * x * x * x) / 24.0;
     }
@@ -686,33 +679,11 @@ public final class SimpleSpan {
     }
 
     private double clamp(double x) {
-        return x < 0.0 ? 0.0 : Math.min(x, length);
+        return Pieces.clamp(x, length);
     }
 
     /** Index of the piece holding x: {@code xs[k] <= x < xs[k+1]}, the last piece for x = L. */
     private int piece(double x) {
-        if (!(x >= -POSITION_SLACK * length && x <= length * (1.0 + POSITION_SLACK))) {
-            throw new IllegalArgumentException("x = " + x + " m is outside the span: allowed range is [0, "
-                    + length + "] m");
-        }
-        int last = xs.length - 2;
-        if (x >= length) {
-            return last;
-        }
-        if (x <= 0.0) {
-            return 0;
-        }
-        // the last breakpoint at or before x (0 < x < L here, so xs[0] = 0 <= x < xs[last + 1] = L)
-        int lo = 0;
-        int hi = last;
-        while (lo < hi) {
-            int mid = (lo + hi + 1) >>> 1;
-            if (xs[mid] <= x) {
-                lo = mid;
-            } else {
-                hi = mid - 1;
-            }
-        }
-        return lo;
+        return Pieces.piece(xs, length, x, "span");
     }
 }

@@ -316,11 +316,7 @@ public final class BeamCommand implements Callable<Integer> {
         if (json) {
             Map<String, Object> o = toJson(r, us, l, m, criteria, cat);
             if (sheet != null) {
-                List<String> lines = new ArrayList<>();
-                for (CalcLine line : sheet.lines()) {
-                    lines.add(CalcFormat.render(line, us));
-                }
-                o.put("calculation", lines);
+                o.put("calculation", BeamCommand.sheetLines(sheet, us));
             }
             out.print(JsonText.write(o));
         } else {
@@ -347,6 +343,15 @@ public final class BeamCommand implements Callable<Integer> {
     }
 
     /** Prints a calculation sheet, one line per entry, headings set apart. */
+    /** The calculation sheet as the JSON's "calculation" lines (one rendered line each). */
+    static List<String> sheetLines(Calc sheet, UnitSystem us) {
+        List<String> lines = new ArrayList<>();
+        for (CalcLine line : sheet.lines()) {
+            lines.add(CalcFormat.render(line, us));
+        }
+        return lines;
+    }
+
     static void printSheet(PrintWriter out, Calc sheet, UnitSystem us) {
         out.println();
         out.println("Calculation sheet");

@@ -77,11 +77,7 @@ final class CompositeRun {
         if (json) {
             Map<String, Object> o = toJson(d, fixed != null, allRejected, deadLine, liveLine);
             if (sheet != null) {
-                List<String> lines = new ArrayList<>();
-                for (CalcLine line : sheet.lines()) {
-                    lines.add(CalcFormat.render(line, us));
-                }
-                o.put("calculation", lines);
+                o.put("calculation", BeamCommand.sheetLines(sheet, us));
             }
             out.print(JsonText.write(o));
         } else {

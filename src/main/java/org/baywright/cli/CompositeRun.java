@@ -8,7 +8,6 @@ import java.util.Locale;
 import java.util.Map;
 import org.baywright.calc.Calc;
 import org.baywright.calc.CalcFormat;
-import org.baywright.calc.CalcLine;
 import org.baywright.calc.Caution;
 import org.baywright.calc.Quantity;
 import org.baywright.catalog.Catalog;
